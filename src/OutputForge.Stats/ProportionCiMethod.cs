@@ -1,0 +1,12 @@
+namespace OutputForge.Stats;
+
+/// <summary>Confidence interval methods for a single binomial proportion.</summary>
+public enum ProportionCiMethod
+{
+    Wald,
+    Wilson,
+    WilsonCorrected,
+    ClopperPearson,
+    AgrestiCoull,
+    Jeffreys,
+}

@@ -1,0 +1,17 @@
+namespace OutputForge.Stats;
+
+/// <summary>
+/// The outcome of a hypothesis test: its name as printed in a footnote, the statistic (where the
+/// test has one), degrees of freedom (where it has them) and the p-value; or why it could not be run.
+/// </summary>
+public sealed record TestResult(
+    string Method,
+    double? Statistic,
+    double? DegreesOfFreedom,
+    double PValue,
+    string? NotEstimableReason = null)
+{
+    public bool IsEstimable => NotEstimableReason is null;
+
+    public static TestResult NotEstimable(string method, string reason) => new(method, null, null, 0, reason);
+}
