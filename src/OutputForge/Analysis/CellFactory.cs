@@ -39,9 +39,9 @@ public static class CellFactory
     public static ResultCell Estimate(string column, IntervalResult interval, double scale, int decimals, string method) =>
         interval.IsEstimable
             ? new ResultCell(column, "{estimate}",
-                [new StatisticValue(Estimate, interval.Estimate * scale, ValueFormat.Decimal, decimals, Method: method)])
+                [new StatisticValue(StatisticNames.Estimate, interval.Estimate * scale, ValueFormat.Decimal, decimals, Method: method)])
             : new ResultCell(column, "{estimate}",
-                [StatisticValue.NotEstimable(Estimate, ValueFormat.Decimal, interval.NotEstimableReason!, method)]);
+                [StatisticValue.NotEstimable(StatisticNames.Estimate, ValueFormat.Decimal, interval.NotEstimableReason!, method)]);
 
     /// <summary>A test's p-value, with its statistic and degrees of freedom kept in the results (not displayed).</summary>
     public static ResultCell PValueOf(string column, TestResult test)
