@@ -14,6 +14,7 @@ internal static class SpecFileReader
     private static readonly JsonSerializerOptions ModelOptions = new()
     {
         PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
+        TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver(),
         ReadCommentHandling = JsonCommentHandling.Skip,
         AllowTrailingCommas = true,
     };
@@ -101,8 +102,14 @@ internal static class SpecFileReader
     private static SpecProblem? Explain(string keyword, string message, string pointer, string evaluationPath,
         JsonNode schemaRoot, SpecSource source)
     {
-        var keywordNode = Navigate(schemaRoot, evaluationPath);
-        if (evaluationPath.EndsWith("/additionalProperties", StringComparison.Ordinal) && keywordNode is JsonValue)
+        // A failed "if" only chooses whether "then" applies: it is not a problem of the spec.
+        if (evaluationPath.Contains("/if", StringComparison.Ordinal))
+        {
+            return null;
+        }
+        var schemaNode = Navigate(schemaRoot, evaluationPath);
+        var keywordNode = schemaNode is JsonObject obj && keyword.Length > 0 ? obj[keyword] : null;
+        if (evaluationPath.EndsWith("/additionalProperties", StringComparison.Ordinal) && schemaNode is JsonValue)
         {
             var parent = Navigate(schemaRoot, evaluationPath[..^"/additionalProperties".Length]);
             var allowed = (parent?["properties"] as JsonObject)?.Select(p => p.Key).Where(k => k != "$schema").ToList() ?? [];
@@ -118,7 +125,8 @@ internal static class SpecFileReader
                 return source.Problem(pointer, $"expected one of {string.Join(", ", values)}");
             case "required":
                 var requiredList = (keywordNode as JsonArray)?.Select(v => v!.GetValue<string>()).ToList() ?? [];
-                return source.Problem(pointer, $"missing required key{(requiredList.Count == 1 ? "" : "s")}: {MissingKeys(message, requiredList)}");
+                var missing = MissingKeys(message, requiredList);
+                return source.Problem(pointer, $"missing required key{(missing.Count == 1 ? "" : "s")}: {string.Join(", ", missing.Select(m => $"'{m}'"))}");
             case "type":
                 return source.Problem(pointer, $"expected {Describe(keywordNode)}: {message}");
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal):
@@ -128,10 +136,10 @@ internal static class SpecFileReader
         }
     }
 
-    private static string MissingKeys(string message, List<string> required)
+    private static List<string> MissingKeys(string message, List<string> required)
     {
         var named = required.Where(r => message.Contains('"' + r + '"', StringComparison.Ordinal)).ToList();
-        return string.Join(", ", (named.Count > 0 ? named : required).Select(r => $"'{r}'"));
+        return named.Count > 0 ? named : required;
     }
 
     private static string Describe(JsonNode? typeNode) => typeNode switch
