@@ -1,6 +1,6 @@
 using OutputForge.Data;
 using OutputForge.Demo;
-using OutputForge.Run;
+using OutputForge.Pipeline;
 using OutputForge.Spec;
 
 namespace OutputForge.Cli;

@@ -1,4 +1,4 @@
-using OutputForge.Run;
+using OutputForge.Pipeline;
 
 namespace OutputForge.Cli;
 

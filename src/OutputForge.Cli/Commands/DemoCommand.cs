@@ -1,6 +1,6 @@
 using System.CommandLine;
 using OutputForge.Demo;
-using OutputForge.Run;
+using OutputForge.Pipeline;
 
 namespace OutputForge.Cli.Commands;
 

@@ -1,5 +1,5 @@
 using System.CommandLine;
-using OutputForge.Run;
+using OutputForge.Pipeline;
 
 namespace OutputForge.Cli.Commands;
 

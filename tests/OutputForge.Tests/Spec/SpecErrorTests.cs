@@ -1,4 +1,4 @@
-using OutputForge.Run;
+using OutputForge.Pipeline;
 using OutputForge.Spec;
 using OutputForge.Tests.Support;
 

@@ -1,4 +1,4 @@
-namespace OutputForge.Run;
+namespace OutputForge.Pipeline;
 
 /// <summary>
 /// Collects a run's files in a staging folder beside the output folder and moves them into place

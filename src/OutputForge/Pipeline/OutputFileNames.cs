@@ -1,4 +1,4 @@
-namespace OutputForge.Run;
+namespace OutputForge.Pipeline;
 
 /// <summary>
 /// File names derived from table ids. Ids are restricted by the table schema to letters, digits,

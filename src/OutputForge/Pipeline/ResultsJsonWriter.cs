@@ -2,7 +2,7 @@ using System.Text.Json;
 using OutputForge.Layout;
 using OutputForge.Results;
 
-namespace OutputForge.Run;
+namespace OutputForge.Pipeline;
 
 /// <summary>
 /// Writes results.json: the run's facts, one entry per table (titles, population, warnings) and

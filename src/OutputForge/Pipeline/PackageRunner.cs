@@ -4,7 +4,7 @@ using OutputForge.Data;
 using OutputForge.Layout;
 using OutputForge.Spec;
 
-namespace OutputForge.Run;
+namespace OutputForge.Pipeline;
 
 /// <summary>
 /// Runs a whole table package: spec, data, every table's analysis and layout, every renderer,

@@ -1,6 +1,6 @@
 using System.Reflection;
 
-namespace OutputForge.Run;
+namespace OutputForge.Pipeline;
 
 /// <summary>OutputForge's version as printed in outputs and by --version.</summary>
 public static class ToolVersion

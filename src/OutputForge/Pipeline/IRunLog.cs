@@ -1,4 +1,4 @@
-namespace OutputForge.Run;
+namespace OutputForge.Pipeline;
 
 /// <summary>Where a run reports what it does: tables written, warnings, timing.</summary>
 public interface IRunLog
