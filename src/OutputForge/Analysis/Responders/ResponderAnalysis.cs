@@ -89,7 +89,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
         warnings.AddRange(SmallCountWarnings(comparisons, statistics.Test, control));
         warnings.AddRange(NotEstimableWarnings(rows));
         return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
-            new TableProvenance(table.Source.File, ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor);
+            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor);
     }
 
     private static ResponderCounts Count(PopulationSelection selection, TreatmentArm arm, EndpointRecords records,
