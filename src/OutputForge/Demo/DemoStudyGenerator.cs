@@ -90,7 +90,6 @@ public static class DemoStudyGenerator
             var site = draws[i].Site;
             subjects.Add(new DemoSubject
             {
-                EnrolmentOrder = subjects.Count,
                 Site = sites[site],
                 NumberAtSite = ++countAtSite[site],
                 RandomizationDate = FirstRandomization.AddDays(draws[i].Day),

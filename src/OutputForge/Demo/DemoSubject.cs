@@ -8,7 +8,6 @@ namespace OutputForge.Demo;
 /// </summary>
 internal sealed class DemoSubject
 {
-    public required int EnrolmentOrder { get; init; }
     public required StudySite Site { get; init; }
     public required int NumberAtSite { get; init; }
     public required DateOnly RandomizationDate { get; init; }
