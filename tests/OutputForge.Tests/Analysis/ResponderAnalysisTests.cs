@@ -43,7 +43,7 @@ public sealed class ResponderAnalysisTests
         Assert.Equal("Fisher's exact test", pValue.Method);
         // Table [[2, 0], [1, 1]]: both possible tables have probability 1/2, so the two-sided p is 1 (hand computation).
         Assert.Equal(1.0, pValue.Value!.Value, 12);
-        Assert.Contains(result.MethodNotes, n => n.Contains("Active vs Placebo: Fisher's exact test"));
+        Assert.Contains(result.MethodNotes, n => n.Contains("Fisher's exact test was used for every comparison"));
     }
 
     [Fact]

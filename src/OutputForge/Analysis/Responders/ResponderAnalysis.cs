@@ -135,14 +135,15 @@ public sealed class ResponderAnalysis : ITableAnalysis
 
     private static string TestNote(IReadOnlyList<ResponderComparison> comparisons, string choice, TreatmentArm control)
     {
+        if (choice != "auto")
+        {
+            return $"Two-sided p-value from {(choice == "fisher" ? "Fisher's exact test" : "Pearson's chi-square test")}, unstratified.";
+        }
         var used = comparisons.Select(c => c.Test.Method).Distinct().ToList();
-        var rule = choice == "auto"
-            ? "Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5"
-            : choice == "fisher" ? "Fisher's exact test" : "Pearson's chi-square test";
-        var detail = choice == "auto" && used.Count > 0
-            ? " (" + string.Join("; ", comparisons.Select(c => $"{c.Arm.Label} vs {control.Label}: {c.Test.Method}")) + ")"
-            : string.Empty;
-        return $"Two-sided p-value from {rule}, unstratified{detail}.";
+        var detail = used.Count == 1
+            ? $"; {used[0]} was used for every comparison"
+            : "; " + string.Join("; ", comparisons.Select(c => $"{c.Test.Method} for {c.Arm.Label} vs {control.Label}"));
+        return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
     }
 
     private static IEnumerable<string> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, string choice, TreatmentArm control)
