@@ -23,6 +23,40 @@ public static class CommonOptions
         Description = "Print only warnings and errors.",
     };
 
+    public static Option<string?> Timestamp() => new("--timestamp")
+    {
+        Description = "Run time to print in the outputs, as ISO 8601 (e.g. 2026-12-01T09:00:00Z); default: the SOURCE_DATE_EPOCH environment variable (seconds since 1970) if set, else now. The same specs, data and timestamp give the same outputs.",
+    };
+
+    /// <summary>The run time from --timestamp or SOURCE_DATE_EPOCH; null for "now". Invalid text is a usage error.</summary>
+    public static bool TryRunTime(string? text, TextWriter error, out DateTimeOffset? time)
+    {
+        time = null;
+        if (text is not null)
+        {
+            if (DateTimeOffset.TryParse(text, System.Globalization.CultureInfo.InvariantCulture,
+                    System.Globalization.DateTimeStyles.AssumeUniversal | System.Globalization.DateTimeStyles.AdjustToUniversal, out var parsed))
+            {
+                time = parsed;
+                return true;
+            }
+            error.WriteLine($"outputforge: error: --timestamp: '{text}' is not an ISO 8601 date and time (e.g. 2026-12-01T09:00:00Z)");
+            return false;
+        }
+        var epoch = Environment.GetEnvironmentVariable("SOURCE_DATE_EPOCH");
+        if (string.IsNullOrWhiteSpace(epoch))
+        {
+            return true;
+        }
+        if (long.TryParse(epoch, System.Globalization.NumberStyles.Integer, System.Globalization.CultureInfo.InvariantCulture, out var seconds))
+        {
+            time = DateTimeOffset.FromUnixTimeSeconds(seconds);
+            return true;
+        }
+        error.WriteLine($"outputforge: error: SOURCE_DATE_EPOCH: '{epoch}' is not a whole number of seconds since 1970-01-01");
+        return false;
+    }
+
     /// <summary>Resolves format names to renderers; an unknown name is a usage error naming the valid ones.</summary>
     public static IReadOnlyList<ITableRenderer> Renderers(string[]? requested, TextWriter error, out bool valid)
     {

@@ -20,14 +20,15 @@ public static class DemoCommand
         };
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
+        var timestamp = CommonOptions.Timestamp();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, formats, quiet,
+            output, subjects, formats, quiet, timestamp,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
             var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
-            if (!valid)
+            if (!valid || !CommonOptions.TryRunTime(parse.GetValue(timestamp), error, out var runTime))
             {
                 return ExitCodes.Usage;
             }
@@ -37,7 +38,7 @@ public static class DemoCommand
             DemoStudyGenerator.WriteCsv(dataFolder, new DemoStudyOptions(parse.GetValue(subjects)));
             var studyFile = DemoSpecFiles.Write(root);
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
-            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers), log);
+            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers) { RunTime = runTime }, log);
             return ExitCodes.Success;
         }));
         return command;

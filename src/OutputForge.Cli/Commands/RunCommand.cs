@@ -20,19 +20,20 @@ public static class RunCommand
         var output = CommonOptions.Output("Folder for the tables and results.json (created if needed; files of the same name are replaced only when the whole run succeeds).");
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
+        var timestamp = CommonOptions.Timestamp();
         var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
         {
-            spec, data, output, formats, quiet,
+            spec, data, output, formats, quiet, timestamp,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
             var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
-            if (!valid)
+            if (!valid || !CommonOptions.TryRunTime(parse.GetValue(timestamp), error, out var runTime))
             {
                 return ExitCodes.Usage;
             }
             var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers), log);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime }, log);
             return ExitCodes.Success;
         }));
         return command;

@@ -2,6 +2,7 @@ using System.Diagnostics;
 using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Layout;
+using OutputForge.Rendering;
 using OutputForge.Spec;
 
 namespace OutputForge.Pipeline;
@@ -17,6 +18,7 @@ public static class PackageRunner
     public static RunSummary Run(RunRequest request, IRunLog log)
     {
         var clock = Stopwatch.StartNew();
+        using var outputLock = OutputLock.Acquire(request.OutputFolder);
         var package = SpecLoader.Load(request.SpecPath);
         var study = package.Study;
         var dataFolder = request.DataFolder ?? DefaultDataFolder(study);
@@ -45,8 +47,15 @@ public static class PackageRunner
             foreach (var renderer in request.Renderers)
             {
                 var name = OutputFileNames.ForTable(table.Document.TableId, renderer.Extension);
+                using var buffer = new MemoryStream();
+                renderer.Write(table.Document, buffer);
+                var bytes = buffer.ToArray();
+                if (PackageNormalizer.IsPackage(bytes))
+                {
+                    bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
+                }
                 using var stream = staging.Create(name);
-                renderer.Write(table.Document, stream);
+                stream.Write(bytes);
             }
         }
         using (var stream = staging.Create(ResultsFileName))
