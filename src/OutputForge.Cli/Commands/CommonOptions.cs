@@ -23,6 +23,15 @@ public static class CommonOptions
         Description = "Print only warnings and errors.",
     };
 
+    public static Option<string> ControlCharacters() => new("--control-characters")
+    {
+        Description = "Control characters in data values, which Word and Excel cannot store: 'refuse' (stop with an error naming file, line and variable; default) or 'replace' (show U+FFFD and warn).",
+        DefaultValueFactory = _ => "refuse",
+    };
+
+    public static Data.DataReadOptions DataOptions(string? controlCharacters) =>
+        new(controlCharacters == "replace" ? Data.ControlCharacterPolicy.Replace : Data.ControlCharacterPolicy.Refuse);
+
     public static Option<string?> Timestamp() => new("--timestamp")
     {
         Description = "Run time to print in the outputs, as ISO 8601 (e.g. 2026-12-01T09:00:00Z); default: the SOURCE_DATE_EPOCH environment variable (seconds since 1970) if set, else now. The same specs, data and timestamp give the same outputs.",

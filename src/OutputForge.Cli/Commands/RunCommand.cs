@@ -21,9 +21,11 @@ public static class RunCommand
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
         var timestamp = CommonOptions.Timestamp();
+        var controlCharacters = CommonOptions.ControlCharacters();
+        controlCharacters.AcceptOnlyFromAmong("refuse", "replace");
         var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
         {
-            spec, data, output, formats, quiet, timestamp,
+            spec, data, output, formats, quiet, timestamp, controlCharacters,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -33,7 +35,7 @@ public static class RunCommand
                 return ExitCodes.Usage;
             }
             var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime }, log);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = CommonOptions.DataOptions(parse.GetValue(controlCharacters)) }, log);
             return ExitCodes.Success;
         }));
         return command;

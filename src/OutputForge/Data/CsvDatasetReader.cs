@@ -12,7 +12,16 @@ namespace OutputForge.Data;
 /// </summary>
 public static class CsvDatasetReader
 {
-    public static Dataset Read(string name, string path)
+    /// <summary>
+    /// The longest value read, in characters. ADaM text variables hold at most 200 characters (SAS
+    /// transport version 5); a field far beyond that is a broken file (e.g. a lost closing quote).
+    /// </summary>
+    public const int MaxFieldLength = 1 << 20;
+
+    public static Dataset Read(string name, string path) => Read(name, path, DataReadOptions.Default, _ => { });
+
+    /// <summary>Reads with <paramref name="options"/>; <paramref name="warn"/> receives the warnings (e.g. replaced control characters).</summary>
+    public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn)
     {
         byte[] bytes;
         try
@@ -24,7 +33,7 @@ public static class CsvDatasetReader
             throw new DataException(path, null, null, $"cannot read the file ({e.Message})");
         }
         var bodyStart = CheckEncoding(path, bytes);
-        return Parse(name, path, bytes, bodyStart);
+        return Parse(name, path, bytes, bodyStart, options, warn);
     }
 
     private static int CheckEncoding(string path, byte[] bytes)
@@ -69,9 +78,9 @@ public static class CsvDatasetReader
         return line;
     }
 
-    private static Dataset Parse(string name, string path, byte[] bytes, int bodyStart)
+    private static Dataset Parse(string name, string path, byte[] bytes, int bodyStart, DataReadOptions options, Action<string> warn)
     {
-        var options = new CsvReaderOptions
+        var csvOptions = new CsvReaderOptions
         {
             HasHeader = false,
             Separator = ',',
@@ -88,7 +97,7 @@ public static class CsvDatasetReader
         };
         try
         {
-            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(bytes, bodyStart, bytes.Length - bodyStart), options);
+            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(bytes, bodyStart, bytes.Length - bodyStart), csvOptions);
             if (!reader.Read())
             {
                 throw new DataException(path, 1, null, "the file has no header row");
@@ -97,6 +106,7 @@ public static class CsvDatasetReader
             CheckHeader(path, header);
             var values = header.Select(_ => new List<string?>()).ToArray();
             var lines = new List<int>();
+            var replaced = 0;
             while (reader.Read())
             {
                 var line = (int)reader.LineNumber;
@@ -111,14 +121,28 @@ public static class CsvDatasetReader
                 }
                 for (var c = 0; c < header.Length; c++)
                 {
-                    values[c].Add(reader.IsEmpty(c) ? null : reader.GetString(c));
+                    var value = reader.IsEmpty(c) ? null : reader.GetString(c);
+                    if (value is { Length: > MaxFieldLength })
+                    {
+                        throw new DataException(path, line, header[c],
+                            FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
+                    }
+                    if (value is not null && ControlCharacters.IndexIn(value) >= 0)
+                    {
+                        value = HandleControlCharacter(path, line, header[c], value, options, warn, ref replaced);
+                    }
+                    values[c].Add(value);
                 }
                 lines.Add(line);
+            }
+            if (replaced > 0)
+            {
+                warn($"{path}: {replaced} value{(replaced == 1 ? "" : "s")} held control characters, replaced by U+FFFD");
             }
             var columns = new List<DataColumn>(header.Length);
             for (var c = 0; c < header.Length; c++)
             {
-                columns.Add(TypeColumn(header[c], values[c].ToArray()));
+                columns.Add(TypeColumn(header[c], values[c].ToArray(), lines));
             }
             return new Dataset(name, path, lines.Count, columns, lines);
         }
@@ -126,6 +150,19 @@ public static class CsvDatasetReader
         {
             throw new DataException(path, e.LineNumber > 0 ? (int)e.LineNumber : null, null, DescribeMalformed(e.Message));
         }
+    }
+
+    private static string HandleControlCharacter(string path, int line, string variable, string value,
+        DataReadOptions options, Action<string> warn, ref int replaced)
+    {
+        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
+        {
+            var at = ControlCharacters.IndexIn(value);
+            throw new DataException(path, line, variable,
+                $"the value holds the control character U+{(int)value[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
+        }
+        replaced++;
+        return ControlCharacters.Replace(value);
     }
 
     private static string[] Fields(CsvReader reader)
@@ -168,8 +205,9 @@ public static class CsvDatasetReader
     /// A column is numeric when every non-missing value reads as an invariant-culture number, a
     /// date when every non-missing value is an ISO 8601 date (YYYY-MM-DD), and text otherwise.
     /// </summary>
-    private static DataColumn TypeColumn(string name, string?[] text)
+    private static DataColumn TypeColumn(string name, string?[] text, List<int> lines)
     {
+        string? firstText = null;
         var numbers = new double[text.Length];
         var numeric = true;
         var dates = true;
@@ -192,6 +230,7 @@ public static class CsvDatasetReader
                 else
                 {
                     numeric = false;
+                    firstText = $"'{Shorten(value)}' on line {lines[i]}";
                 }
             }
             if (dates && !(value.Length == 10 && DateOnly.TryParseExact(value, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out _)))
@@ -216,6 +255,8 @@ public static class CsvDatasetReader
             }
             return new DataColumn(name, VariableKind.Date, text, numbers);
         }
-        return new DataColumn(name, VariableKind.Text, text, null);
+        return new DataColumn(name, VariableKind.Text, text, null) { TextEvidence = firstText };
     }
+
+    private static string Shorten(string value) => value.Length <= 20 ? value : value[..20] + "...";
 }

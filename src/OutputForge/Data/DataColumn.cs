@@ -24,6 +24,11 @@ public sealed class DataColumn : IVariable
     public VariableKind Kind { get; }
     public int Length => _text.Length;
 
+    /// <summary>For a text column whose first values were numbers: the first value that is not (for messages).</summary>
+    public string? TextEvidence { get; init; }
+
+    string? IVariable.KindNote => TextEvidence;
+
     public bool IsMissing(int row) => _text[row] is null;
 
     public string? GetText(int row) => _text[row];

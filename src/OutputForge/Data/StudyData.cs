@@ -22,7 +22,10 @@ public sealed class StudyData
     public Dataset this[string name] => _datasets[name];
 
     /// <summary>Reads every dataset the study spec lists from <paramref name="folder"/>.</summary>
-    public static StudyData Load(StudySpec study, string folder)
+    public static StudyData Load(StudySpec study, string folder) => Load(study, folder, DataReadOptions.Default, _ => { });
+
+    /// <summary>Reads with <paramref name="options"/>, passing warnings about the data to <paramref name="warn"/>.</summary>
+    public static StudyData Load(StudySpec study, string folder, DataReadOptions options, Action<string> warn)
     {
         if (!Directory.Exists(folder))
         {
@@ -37,7 +40,7 @@ public sealed class StudyData
                 throw new DataException(path, null, null,
                     $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
             }
-            datasets[name] = CsvDatasetReader.Read(name, path);
+            datasets[name] = CsvDatasetReader.Read(name, path, options, warn);
         }
         var adsl = datasets["adsl"];
         AdamConformance.CheckSubjectLevel(adsl);

@@ -113,8 +113,9 @@ public sealed class Condition
         }
         if (variable.Kind == VariableKind.Text)
         {
+            var evidence = variable.KindNote is null ? string.Empty : $" ({variable.KindNote} is not a number)";
             throw new ConditionSyntaxException(
-                $"{variable.Name} holds text: put the value in quotes ('{literal}')", literal.Position);
+                $"{variable.Name} holds text{evidence}: put the value in quotes ('{literal}')", literal.Position);
         }
         if (variable.Kind == VariableKind.Date)
         {

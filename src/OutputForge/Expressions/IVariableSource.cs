@@ -8,6 +8,8 @@ public interface IVariable
 {
     string Name { get; }
     VariableKind Kind { get; }
+    /// <summary>Why the variable has its kind, where that may surprise (e.g. "'abc' on line 5"); null otherwise.</summary>
+    string? KindNote => null;
     bool IsMissing(int row);
     /// <summary>The value as written in the data (for text comparisons); null when missing.</summary>
     string? GetText(int row);

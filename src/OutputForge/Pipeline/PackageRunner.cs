@@ -22,7 +22,8 @@ public static class PackageRunner
         var package = SpecLoader.Load(request.SpecPath);
         var study = package.Study;
         var dataFolder = request.DataFolder ?? DefaultDataFolder(study);
-        var data = StudyData.Load(study, dataFolder);
+        var dataWarnings = new List<string>();
+        var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
@@ -34,6 +35,10 @@ public static class PackageRunner
         foreach (var table in package.Tables)
         {
             var result = TableAnalyses.For(table).Analyze(study, table, data);
+            if (dataWarnings.Count > 0)
+            {
+                result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
+            }
             foreach (var warning in result.Warnings)
             {
                 log.Warning($"table {table.Id}: {warning}");
