@@ -8,5 +8,11 @@ public sealed record IntervalResult(double Estimate, double Lower, double Upper,
 {
     public bool IsEstimable => NotEstimableReason is null;
 
+    /// <summary>
+    /// Remarks a reader of the table must see beside the number, for example that a bound was
+    /// truncated to the parameter space. Empty when there is nothing to say.
+    /// </summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
     public static IntervalResult NotEstimable(string reason) => new(0, 0, 0, reason);
 }

@@ -13,5 +13,11 @@ public sealed record TestResult(
 {
     public bool IsEstimable => NotEstimableReason is null;
 
+    /// <summary>
+    /// Warnings that must travel with the result (rows or columns dropped for a zero total, strata
+    /// skipped, small expected counts). Empty when there is nothing to say.
+    /// </summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
     public static TestResult NotEstimable(string method, string reason) => new(method, null, null, 0, reason);
 }

@@ -1,0 +1,45 @@
+using System.CommandLine;
+using OutputForge.Demo;
+using OutputForge.Pipeline;
+
+namespace OutputForge.Cli.Commands;
+
+/// <summary>
+/// `outputforge demo`: writes the invented demo study (data and specs) into a folder and runs
+/// every demo table, so a new user sees a whole package in one command.
+/// </summary>
+public static class DemoCommand
+{
+    public static Command Create(TextWriter error)
+    {
+        var output = CommonOptions.Output("Folder to write into: data/ (the invented study's CSV), specs/ (its specs) and output/ (the tables).");
+        var subjects = new Option<int>("--subjects")
+        {
+            Description = "Number of randomized subjects of the invented study.",
+            DefaultValueFactory = _ => new DemoStudyOptions().Subjects,
+        };
+        var formats = CommonOptions.Formats();
+        var quiet = CommonOptions.Quiet();
+        var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
+        {
+            output, subjects, formats, quiet,
+        };
+        command.SetAction(parse => FailureReport.Guard(error, () =>
+        {
+            var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
+            if (!valid)
+            {
+                return ExitCodes.Usage;
+            }
+            var root = parse.GetValue(output)!;
+            var log = new StderrRunLog(error, parse.GetValue(quiet));
+            var dataFolder = Path.Combine(root, "data");
+            DemoStudyGenerator.WriteCsv(dataFolder, new DemoStudyOptions(parse.GetValue(subjects)));
+            var studyFile = DemoSpecFiles.Write(root);
+            log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
+            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers), log);
+            return ExitCodes.Success;
+        }));
+        return command;
+    }
+}

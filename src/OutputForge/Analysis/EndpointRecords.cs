@@ -1,0 +1,77 @@
+using OutputForge.Data;
+using OutputForge.Expressions;
+using OutputForge.Naming;
+using OutputForge.Spec;
+
+namespace OutputForge.Analysis;
+
+/// <summary>
+/// The records an endpoint selects (PARAMCD, AVISIT and a further condition), at most one per
+/// subject, keyed by USUBJID.
+/// </summary>
+public sealed class EndpointRecords
+{
+    private EndpointRecords(Dataset dataset, IReadOnlyDictionary<string, int> rowOfSubject)
+    {
+        Dataset = dataset;
+        RowOfSubject = rowOfSubject;
+    }
+
+    public Dataset Dataset { get; }
+
+    /// <summary>The selected record (row index) of each subject that has one.</summary>
+    public IReadOnlyDictionary<string, int> RowOfSubject { get; }
+
+    public static EndpointRecords Select(TableSpec table, StudyData data)
+    {
+        var endpoint = table.Endpoint!;
+        var dataset = data[endpoint.Dataset];
+        var tests = new List<Func<int, bool>>();
+        if (endpoint.Parameter is not null)
+        {
+            tests.Add(ValueTest(dataset, "PARAMCD", endpoint.Parameter, table.Source, "/endpoint/parameter"));
+        }
+        if (endpoint.Visit is not null)
+        {
+            tests.Add(ValueTest(dataset, "AVISIT", endpoint.Visit, table.Source, "/endpoint/visit"));
+        }
+        if (endpoint.Where is not null)
+        {
+            tests.Add(new SpecConditionText(endpoint.Where, table.Source, "/endpoint/where").Compile(dataset).Matches);
+        }
+        var subjects = dataset.Get(AdamConformance.SubjectVariable);
+        var rowOfSubject = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (var row = 0; row < dataset.RowCount; row++)
+        {
+            if (!tests.TrueForAll(t => t(row)))
+            {
+                continue;
+            }
+            var subject = subjects.GetText(row)!;
+            if (!rowOfSubject.TryAdd(subject, row))
+            {
+                var first = dataset.LineOfRow[rowOfSubject[subject]];
+                throw new SpecException(table.Source.Problem(endpoint.Where is null ? "/endpoint" : "/endpoint/where",
+                    $"the endpoint selects more than one record of subject {subject} ({Path.GetFileName(dataset.File)} lines {first} and {dataset.LineOfRow[row]}); narrow the selection so that each subject has at most one record (e.g. ANL01FL = 'Y')"));
+            }
+        }
+        return new EndpointRecords(dataset, rowOfSubject);
+    }
+
+    private static Func<int, bool> ValueTest(Dataset dataset, string variableName, string value, SpecSource source, string pointer)
+    {
+        var variable = dataset.Find(variableName) ?? throw new SpecException(source.Problem(pointer,
+            $"{Path.GetFileName(dataset.File)} has no {variableName} variable, which this key selects on"));
+        var values = variable.DistinctValues();
+        if (!values.Contains(value, StringComparer.Ordinal))
+        {
+            throw new SpecException(source.Problem(pointer,
+                $"no record of {Path.GetFileName(dataset.File)} has {variableName} '{value}'{NearestName.Hint(value, values.ToList())}"));
+        }
+        return row => string.Equals(variable.GetText(row), value, StringComparison.Ordinal);
+    }
+
+    /// <summary>Compiles the endpoint's response condition against the endpoint's dataset.</summary>
+    public Condition CompileResponse(TableSpec table) =>
+        new SpecConditionText(table.Endpoint!.Response!, table.Source, "/endpoint/response").Compile(Dataset);
+}

@@ -1,0 +1,113 @@
+using OutputForge.Data;
+using OutputForge.Naming;
+using OutputForge.Spec;
+
+namespace OutputForge.Analysis;
+
+/// <summary>
+/// The subjects of one analysis population (optionally narrowed by a table's subset), grouped by
+/// treatment arm in display order. Subjects with no arm value are left out, and a warning says how many.
+/// </summary>
+public sealed class PopulationSelection
+{
+    private PopulationSelection(string name, string label, string treatmentVariable, IReadOnlyList<TreatmentArm> arms,
+        IReadOnlyDictionary<string, TreatmentArm> armOfSubject, IReadOnlyList<string> warnings)
+    {
+        Name = name;
+        Label = label;
+        TreatmentVariable = treatmentVariable;
+        Arms = arms;
+        ArmOfSubject = armOfSubject;
+        Warnings = warnings;
+    }
+
+    public string Name { get; }
+    public string Label { get; }
+    public string TreatmentVariable { get; }
+    public IReadOnlyList<TreatmentArm> Arms { get; }
+    public IReadOnlyDictionary<string, TreatmentArm> ArmOfSubject { get; }
+    public IReadOnlyList<string> Warnings { get; }
+
+    public TreatmentArm Control => Arms.First(a => a.IsControl);
+
+    /// <summary>Number of subjects of the population in <paramref name="arm"/> (the column's N).</summary>
+    public int Count(TreatmentArm arm) => _counts[arm];
+
+    private Dictionary<TreatmentArm, int> _counts = [];
+
+    public static PopulationSelection Select(StudySpec study, TableSpec table, StudyData data)
+    {
+        var population = study.Populations[table.Population];
+        var adsl = data.SubjectLevel;
+        var where = new SpecConditionText(population.Where, study.Source, $"/populations/{table.Population}/where").Compile(adsl);
+        var subset = table.Subset is null ? null : new SpecConditionText(table.Subset, table.Source, "/subset").Compile(adsl);
+        var treatmentPointer = population.Treatment is null ? "/treatment/variable" : $"/populations/{table.Population}/treatment";
+        var orderPointer = population.Treatment is null ? "/treatment/order" : $"/populations/{table.Population}/order";
+        var treatmentName = population.Treatment ?? study.Treatment.Variable;
+        var orderName = population.Treatment is null ? study.Treatment.Order : population.Order;
+        var treatment = FindVariable(adsl, treatmentName, study.Source, treatmentPointer);
+        var order = orderName is null ? null : FindVariable(adsl, orderName, study.Source, orderPointer);
+        var subjects = adsl.Get(AdamConformance.SubjectVariable);
+
+        var armByValue = new Dictionary<string, (double Order, List<string> Subjects)>(StringComparer.Ordinal);
+        var withoutArm = 0;
+        for (var row = 0; row < adsl.RowCount; row++)
+        {
+            if (!where.Matches(row) || (subset is not null && !subset.Matches(row)))
+            {
+                continue;
+            }
+            var value = treatment.GetText(row);
+            if (value is null)
+            {
+                withoutArm++;
+                continue;
+            }
+            if (!armByValue.TryGetValue(value, out var entry))
+            {
+                var rank = order?.GetNumber(row) ?? double.NaN;
+                entry = (double.IsNaN(rank) ? double.MaxValue : rank, []);
+                armByValue[value] = entry;
+            }
+            entry.Subjects.Add(subjects.GetText(row)!);
+        }
+        if (armByValue.Count == 0)
+        {
+            var condition = table.Subset is null ? population.Where : $"{population.Where}, subset {table.Subset}";
+            throw new SpecException(table.Source.Problem("/population",
+                $"population '{table.Population}' ({condition}) has no subjects with a value of {treatment.Name} in {Path.GetFileName(adsl.File)}"));
+        }
+        if (!armByValue.ContainsKey(study.Treatment.Control))
+        {
+            throw new SpecException(study.Source.Problem("/treatment/control",
+                $"control arm '{study.Treatment.Control}' is not a value of {treatment.Name} in population '{table.Population}'{NearestName.Hint(study.Treatment.Control, armByValue.Keys.ToList())}"));
+        }
+        var arms = armByValue
+            .OrderBy(a => a.Value.Order)
+            .ThenBy(a => a.Key, StringComparer.Ordinal)
+            .Select(a => new TreatmentArm(a.Key, study.Treatment.Labels?.GetValueOrDefault(a.Key) ?? a.Key, a.Value.Order,
+                a.Key == study.Treatment.Control))
+            .ToList();
+        var armOfSubject = new Dictionary<string, TreatmentArm>(StringComparer.Ordinal);
+        foreach (var arm in arms)
+        {
+            foreach (var subject in armByValue[arm.Value].Subjects)
+            {
+                armOfSubject[subject] = arm;
+            }
+        }
+        var warnings = new List<string>();
+        if (withoutArm > 0)
+        {
+            warnings.Add($"{withoutArm} subject{(withoutArm == 1 ? "" : "s")} of the population with no value of {treatment.Name} {(withoutArm == 1 ? "is" : "are")} not counted.");
+        }
+        return new PopulationSelection(table.Population, population.Label, treatment.Name, arms, armOfSubject, warnings)
+        {
+            _counts = arms.ToDictionary(a => a, a => armByValue[a.Value].Subjects.Count),
+        };
+    }
+
+    private static DataColumn FindVariable(Dataset adsl, string name, SpecSource source, string pointer) =>
+        adsl.Find(name) ?? throw new SpecException(source.Problem(pointer,
+            $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{NearestName.Hint(name, adsl.Columns.Select(c => c.Name).ToList())}"));
+}

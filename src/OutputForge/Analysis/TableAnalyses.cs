@@ -1,0 +1,20 @@
+using OutputForge.Analysis.Responders;
+using OutputForge.Spec;
+
+namespace OutputForge.Analysis;
+
+/// <summary>The table kinds OutputForge knows, by their spec name.</summary>
+public static class TableAnalyses
+{
+    private static readonly Dictionary<string, ITableAnalysis> ByKind = new ITableAnalysis[]
+    {
+        new ResponderAnalysis(),
+    }.ToDictionary(a => a.Kind, StringComparer.Ordinal);
+
+    public static IReadOnlyCollection<string> Kinds => ByKind.Keys;
+
+    public static ITableAnalysis For(TableSpec table) =>
+        ByKind.TryGetValue(table.Kind, out var analysis)
+            ? analysis
+            : throw table.Source.Error("/kind", $"unknown table kind '{table.Kind}'");
+}

@@ -1,0 +1,45 @@
+using OutputForge.Expressions;
+
+namespace OutputForge.Data;
+
+/// <summary>A dataset read from one file: named, typed columns of equal length.</summary>
+public sealed class Dataset : IVariableSource
+{
+    private readonly Dictionary<string, DataColumn> _columns;
+
+    public Dataset(string name, string file, int rowCount, IReadOnlyList<DataColumn> columns, IReadOnlyList<int> lineOfRow)
+    {
+        Name = name;
+        File = file;
+        RowCount = rowCount;
+        Columns = columns;
+        LineOfRow = lineOfRow;
+        _columns = columns.ToDictionary(c => c.Name, StringComparer.OrdinalIgnoreCase);
+    }
+
+    /// <summary>The dataset's name in the spec, e.g. "adsl".</summary>
+    public string Name { get; }
+
+    /// <summary>The file it was read from, as given (for messages).</summary>
+    public string File { get; }
+
+    public int RowCount { get; }
+
+    public IReadOnlyList<DataColumn> Columns { get; }
+
+    /// <summary>The line of the file on which each row starts (1-based; line 1 is the header).</summary>
+    public IReadOnlyList<int> LineOfRow { get; }
+
+    string IVariableSource.SourceName => $"dataset {Name} ({Path.GetFileName(File)})";
+
+    IReadOnlyCollection<string> IVariableSource.VariableNames => Columns.Select(c => c.Name).ToList();
+
+    IVariable? IVariableSource.FindVariable(string name) => Find(name);
+
+    public DataColumn? Find(string name) => _columns.GetValueOrDefault(name);
+
+    /// <summary>The column, or a <see cref="DataException"/> naming the dataset and the nearest variable.</summary>
+    public DataColumn Get(string name) =>
+        Find(name) ?? throw new DataException(File, null, null,
+            $"no variable {name}{Naming.NearestName.Hint(name, Columns.Select(c => c.Name).ToList())}");
+}

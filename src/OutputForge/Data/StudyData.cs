@@ -1,0 +1,50 @@
+using OutputForge.Spec;
+
+namespace OutputForge.Data;
+
+/// <summary>The datasets of one study, read from a data folder and checked against the ADaM conventions.</summary>
+public sealed class StudyData
+{
+    private readonly Dictionary<string, Dataset> _datasets;
+
+    private StudyData(string folder, Dictionary<string, Dataset> datasets)
+    {
+        Folder = folder;
+        _datasets = datasets;
+    }
+
+    public string Folder { get; }
+
+    public Dataset SubjectLevel => _datasets["adsl"];
+
+    public IReadOnlyCollection<Dataset> Datasets => _datasets.Values;
+
+    public Dataset this[string name] => _datasets[name];
+
+    /// <summary>Reads every dataset the study spec lists from <paramref name="folder"/>.</summary>
+    public static StudyData Load(StudySpec study, string folder)
+    {
+        if (!Directory.Exists(folder))
+        {
+            throw new DataException(folder, null, null, "no such data folder");
+        }
+        var datasets = new Dictionary<string, Dataset>(StringComparer.Ordinal);
+        foreach (var (name, fileName) in study.Data.Datasets.OrderBy(d => d.Key == "adsl" ? 0 : 1).ThenBy(d => d.Key, StringComparer.Ordinal))
+        {
+            var path = Path.Combine(folder, fileName);
+            if (!File.Exists(path))
+            {
+                throw new DataException(path, null, null,
+                    $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
+            }
+            datasets[name] = CsvDatasetReader.Read(name, path);
+        }
+        var adsl = datasets["adsl"];
+        AdamConformance.CheckSubjectLevel(adsl);
+        foreach (var dataset in datasets.Values.Where(d => d.Name != "adsl"))
+        {
+            AdamConformance.CheckAgainstSubjectLevel(dataset, adsl);
+        }
+        return new StudyData(folder, datasets);
+    }
+}

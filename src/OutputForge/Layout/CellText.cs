@@ -1,0 +1,67 @@
+using System.Globalization;
+using System.Text.RegularExpressions;
+using OutputForge.Results;
+
+namespace OutputForge.Layout;
+
+/// <summary>Formats single statistics and composes a cell's text from its pattern.</summary>
+public static partial class CellText
+{
+    /// <summary>Text shown for a number that could not be estimated; the reason goes to the footnotes.</summary>
+    public const string NotEstimable = "NE";
+
+    [GeneratedRegex(@"\{([A-Za-z0-9]+)\}")]
+    private static partial Regex Placeholder();
+
+    public static string Format(StatisticValue value, TableResult table)
+    {
+        if (value.Value is not { } number)
+        {
+            return NotEstimable;
+        }
+        return value.Format switch
+        {
+            ValueFormat.Count => NumberText.Count(number),
+            ValueFormat.Percent => NumberText.Fixed(number, value.Decimals),
+            ValueFormat.PValue => NumberText.PValue(number, table.PValueFloor),
+            _ => NumberText.Fixed(number, value.Decimals),
+        };
+    }
+
+    public static LayoutCell Compose(ResultCell cell, TableResult table)
+    {
+        if (cell.Pattern.Length == 0)
+        {
+            return LayoutCell.Empty;
+        }
+        var byName = cell.Values.ToDictionary(v => v.Statistic, StringComparer.Ordinal);
+        var names = Placeholder().Matches(cell.Pattern).Select(m => m.Groups[1].Value).ToList();
+        if (names.Any(n => !byName.TryGetValue(n, out var v) || v.Value is null))
+        {
+            return new LayoutCell(NotEstimable);
+        }
+        // A zero count shows as "0", not "0 (0.0)" (common practice).
+        if (cell.Pattern == "{n} ({percent})" && byName["n"].Value == 0)
+        {
+            return new LayoutCell("0", 0, "0");
+        }
+        var text = Placeholder().Replace(cell.Pattern, m => Format(byName[m.Groups[1].Value], table));
+        if (names.Count != 1 || cell.Pattern != "{" + names[0] + "}")
+        {
+            return new LayoutCell(text);
+        }
+        var single = byName[names[0]];
+        if (text.StartsWith('<') || text.StartsWith('>'))
+        {
+            return new LayoutCell(text);
+        }
+        var decimals = single.Format switch
+        {
+            ValueFormat.Count => 0,
+            ValueFormat.PValue => text.Length - text.IndexOf('.') - 1,
+            _ => single.Decimals,
+        };
+        var number = (double)decimal.Parse(text, NumberStyles.Float, CultureInfo.InvariantCulture);
+        return new LayoutCell(text, number, decimals == 0 ? "0" : "0." + new string('0', decimals));
+    }
+}

@@ -1,0 +1,7 @@
+namespace OutputForge.Layout;
+
+/// <summary>Facts of one run that appear in every table's source line.</summary>
+/// <param name="RunTime">When the run started (UTC).</param>
+/// <param name="ToolVersion">OutputForge's version.</param>
+/// <param name="DataFiles">File name of each dataset, by dataset name.</param>
+public sealed record RunFacts(DateTimeOffset RunTime, string ToolVersion, IReadOnlyDictionary<string, string> DataFiles);

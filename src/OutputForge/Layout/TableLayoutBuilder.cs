@@ -1,0 +1,79 @@
+using System.Globalization;
+using OutputForge.Results;
+
+namespace OutputForge.Layout;
+
+/// <summary>
+/// Turns a <see cref="TableResult"/> into the display that every renderer draws: header rows with
+/// "(N=xx)" under each column, formatted cells, footnotes (method notes, then warnings, then the
+/// spec's own), and the source line.
+/// </summary>
+public static class TableLayoutBuilder
+{
+    public const string Caution =
+        "Results must be verified under your own validated processes, the SAP and applicable regulatory guidance.";
+
+    public static LaidOutTable Build(TableResult table, string studyLine, RunFacts run, PageSettings page)
+    {
+        var columns = new List<LayoutColumn> { new("label", CellAlignment.Left) };
+        columns.AddRange(table.Columns.Select(c => new LayoutColumn(c.Key, CellAlignment.Center)));
+        var headers = new List<HeaderRow>
+        {
+            new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(c.Label))]),
+            new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(
+                c.SubjectCount is { } n ? string.Create(CultureInfo.InvariantCulture, $"(N={n})") : string.Empty))]),
+        };
+        var records = new List<ResultRecord>();
+        var rows = new List<BodyRow>();
+        var columnLabel = table.Columns.ToDictionary(c => c.Key, c => c.Label, StringComparer.Ordinal);
+        foreach (var column in table.Columns.Where(c => c.SubjectCount is not null))
+        {
+            records.Add(new ResultRecord(table.TableId, "header", column.Key, StatisticNames.Denominator, column.SubjectCount,
+                column.SubjectCount!.Value.ToString(CultureInfo.InvariantCulture), "(N=xx)", column.Label, null, null));
+        }
+        foreach (var row in table.Rows)
+        {
+            var cells = new List<LayoutCell>();
+            foreach (var column in table.Columns)
+            {
+                var cell = row.Cells.FirstOrDefault(c => c.Column == column.Key);
+                cells.Add(cell is null ? LayoutCell.Empty : CellText.Compose(cell, table));
+                if (cell is null)
+                {
+                    continue;
+                }
+                foreach (var value in cell.Values)
+                {
+                    records.Add(new ResultRecord(table.TableId, row.Key, column.Key, value.Statistic, value.Value,
+                        CellText.Format(value, table), row.Label, columnLabel[column.Key], value.Method, value.NotEstimableReason));
+                }
+            }
+            var kind = row.Kind switch
+            {
+                ResultRowKind.Section => RowKind.Section,
+                ResultRowKind.Blank => RowKind.Blank,
+                _ => RowKind.Data,
+            };
+            rows.Add(new BodyRow(row.Label, row.Indent, cells, kind));
+        }
+        var footnotes = new List<string>(table.MethodNotes);
+        footnotes.AddRange(table.Warnings.Select(w => "Warning: " + w));
+        if (rows.Any(r => r.Cells.Any(c => c.Text == CellText.NotEstimable)))
+        {
+            footnotes.Add("NE = not estimable.");
+        }
+        footnotes.AddRange(table.Footnotes);
+        var document = new TableDocument(table.TableId, table.Titles, table.Population, studyLine, columns, headers, rows,
+            footnotes, SourceLine(table, run), page);
+        return new LaidOutTable(document, records);
+    }
+
+    private static string SourceLine(TableResult table, RunFacts run)
+    {
+        var files = table.Provenance.Datasets
+            .Select(d => run.DataFiles.TryGetValue(d, out var f) ? f : d)
+            .Distinct(StringComparer.Ordinal);
+        var time = run.RunTime.UtcDateTime.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture);
+        return $"Source: {table.Provenance.SpecFile.Replace('\\', '/')}; data: {string.Join(", ", files)}; run {time}; OutputForge {run.ToolVersion}. {Caution}";
+    }
+}

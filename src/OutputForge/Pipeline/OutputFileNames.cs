@@ -1,0 +1,17 @@
+namespace OutputForge.Pipeline;
+
+/// <summary>
+/// File names derived from table ids. Ids are restricted by the table schema to letters, digits,
+/// dots, dashes and underscores; this guard keeps any other id from leaving the output folder.
+/// </summary>
+public static class OutputFileNames
+{
+    public static string ForTable(string tableId, string extension)
+    {
+        if (tableId.Length == 0 || tableId.Any(c => !(char.IsAsciiLetterOrDigit(c) || c is '.' or '-' or '_')) || tableId.StartsWith('.'))
+        {
+            throw new RunException($"table id '{tableId}' cannot name an output file (use letters, digits, '.', '-' and '_')");
+        }
+        return $"table-{tableId}{extension}";
+    }
+}

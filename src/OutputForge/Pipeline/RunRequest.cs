@@ -1,0 +1,10 @@
+using OutputForge.Rendering;
+
+namespace OutputForge.Pipeline;
+
+/// <summary>What to run: the spec (study file or folder), the data folder (null: the study file's own), the output folder and formats.</summary>
+public sealed record RunRequest(string SpecPath, string? DataFolder, string OutputFolder, IReadOnlyList<ITableRenderer> Renderers)
+{
+    /// <summary>The run time printed in outputs; null means now.</summary>
+    public DateTimeOffset? RunTime { get; init; }
+}

@@ -1,0 +1,177 @@
+using System.Text.Json;
+using System.Text.Json.Nodes;
+using Json.Schema;
+using OutputForge.Naming;
+
+namespace OutputForge.Spec;
+
+/// <summary>
+/// Reads one spec file: JSON syntax, then the shipped JSON Schema (every violation reported, with
+/// line, column and JSON path), then the typed model.
+/// </summary>
+internal static class SpecFileReader
+{
+    private static readonly JsonSerializerOptions ModelOptions = new()
+    {
+        PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
+        TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver(),
+        ReadCommentHandling = JsonCommentHandling.Skip,
+        AllowTrailingCommas = true,
+    };
+
+    public static T Read<T>(string file, string schemaName, Action<T, SpecSource> attach)
+    {
+        byte[] bytes;
+        try
+        {
+            bytes = File.ReadAllBytes(file);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new SpecException(new SpecProblem(file, null, null, "$", $"cannot read the spec file ({e.Message})"));
+        }
+        JsonDocument document;
+        try
+        {
+            document = JsonDocument.Parse(bytes, new JsonDocumentOptions
+            {
+                CommentHandling = JsonCommentHandling.Skip,
+                AllowTrailingCommas = true,
+            });
+        }
+        catch (JsonException e)
+        {
+            var message = e.Message;
+            var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+            if (cut > 0)
+            {
+                message = message[..cut];
+            }
+            throw new SpecException(new SpecProblem(file, (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1,
+                e.Path ?? "$", $"invalid JSON: {message.TrimEnd('.')}"));
+        }
+        using (document)
+        {
+            var source = new SpecSource(file, JsonPositionMap.Build(bytes));
+            var problems = Validate(document.RootElement, schemaName, source);
+            if (problems.Count > 0)
+            {
+                throw new SpecException(problems);
+            }
+            var model = document.RootElement.Deserialize<T>(ModelOptions)
+                ?? throw new SpecException(source.Problem(string.Empty, "the spec is empty"));
+            attach(model, source);
+            return model;
+        }
+    }
+
+    private static List<SpecProblem> Validate(JsonElement root, string schemaName, SpecSource source)
+    {
+        var (schema, schemaNode) = SpecSchemas.Get(schemaName);
+        var results = schema.Evaluate(root, new EvaluationOptions { OutputFormat = OutputFormat.List });
+        var problems = new List<SpecProblem>();
+        if (results.IsValid)
+        {
+            return problems;
+        }
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var detail in results.Details ?? [])
+        {
+            if (detail.Errors is null)
+            {
+                continue;
+            }
+            foreach (var (keyword, message) in detail.Errors)
+            {
+                var pointer = detail.InstanceLocation.ToString();
+                var evaluationPath = detail.EvaluationPath.ToString();
+                var problem = Explain(keyword, message, pointer, evaluationPath, schemaNode, source);
+                if (problem is not null && seen.Add(problem.ToString()))
+                {
+                    problems.Add(problem);
+                }
+            }
+        }
+        return problems
+            .OrderBy(p => p.Line ?? int.MaxValue)
+            .ThenBy(p => p.Column ?? int.MaxValue)
+            .ToList();
+    }
+
+    /// <summary>Turns one schema error into a message in the spec writer's terms.</summary>
+    private static SpecProblem? Explain(string keyword, string message, string pointer, string evaluationPath,
+        JsonNode schemaRoot, SpecSource source)
+    {
+        // A failed "if" only chooses whether "then" applies: it is not a problem of the spec.
+        if (evaluationPath.Contains("/if", StringComparison.Ordinal))
+        {
+            return null;
+        }
+        var schemaNode = Navigate(schemaRoot, evaluationPath);
+        var keywordNode = schemaNode is JsonObject obj && keyword.Length > 0 ? obj[keyword] : null;
+        if (evaluationPath.EndsWith("/additionalProperties", StringComparison.Ordinal) && schemaNode is JsonValue)
+        {
+            var parent = Navigate(schemaRoot, evaluationPath[..^"/additionalProperties".Length]);
+            var allowed = (parent?["properties"] as JsonObject)?.Select(p => p.Key).Where(k => k != "$schema").ToList() ?? [];
+            var key = pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
+            return source.KeyProblem(pointer, $"unknown key '{key}'{NearestName.Hint(key, allowed)}");
+        }
+        switch (keyword)
+        {
+            case "":
+                return null;
+            case "enum":
+                var values = (keywordNode as JsonArray)?.Select(v => v?.ToJsonString()).ToList() ?? [];
+                return source.Problem(pointer, $"expected one of {string.Join(", ", values)}");
+            case "required":
+                var requiredList = (keywordNode as JsonArray)?.Select(v => v!.GetValue<string>()).ToList() ?? [];
+                var missing = MissingKeys(message, requiredList);
+                return source.Problem(pointer, $"missing required key{(missing.Count == 1 ? "" : "s")}: {string.Join(", ", missing.Select(m => $"'{m}'"))}");
+            case "type":
+                return source.Problem(pointer, $"expected {Describe(keywordNode)}: {message}");
+            case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal):
+                return source.Problem(pointer, "expected a CSV file name in the data folder (no folders), ending in .csv");
+            default:
+                return source.Problem(pointer, message);
+        }
+    }
+
+    private static List<string> MissingKeys(string message, List<string> required)
+    {
+        var named = required.Where(r => message.Contains('"' + r + '"', StringComparison.Ordinal)).ToList();
+        return named.Count > 0 ? named : required;
+    }
+
+    private static string Describe(JsonNode? typeNode) => typeNode switch
+    {
+        JsonValue value => "a value of type " + value.GetValue<string>(),
+        JsonArray array => "one of the types " + string.Join(", ", array.Select(a => a!.GetValue<string>())),
+        _ => "another type",
+    };
+
+    /// <summary>Follows a schema evaluation path (a JSON Pointer into the schema, with local $ref steps).</summary>
+    private static JsonNode? Navigate(JsonNode root, string evaluationPath)
+    {
+        JsonNode? current = root;
+        foreach (var raw in evaluationPath.Split('/', StringSplitOptions.RemoveEmptyEntries))
+        {
+            var segment = raw.Replace("~1", "/").Replace("~0", "~");
+            if (current is null)
+            {
+                return null;
+            }
+            if (segment == "$ref" && current["$ref"] is JsonValue reference)
+            {
+                current = Navigate(root, reference.GetValue<string>().TrimStart('#'));
+                continue;
+            }
+            current = current switch
+            {
+                JsonObject obj => obj[segment],
+                JsonArray array when int.TryParse(segment, out var index) && index < array.Count => array[index],
+                _ => null,
+            };
+        }
+        return current;
+    }
+}

@@ -1,0 +1,78 @@
+using System.Text.Json.Serialization;
+
+namespace OutputForge.Spec;
+
+/// <summary>The study-level spec: study facts, datasets, treatment arms, analysis populations and the table list.</summary>
+public sealed class StudySpec
+{
+    public required StudyInfo Study { get; init; }
+    public required DataSpec Data { get; init; }
+    public required TreatmentSpec Treatment { get; init; }
+    public required Dictionary<string, PopulationSpec> Populations { get; init; }
+    public List<string> Tables { get; init; } = [];
+    public PageSpec? Page { get; init; }
+
+    [JsonIgnore]
+    public SpecSource Source { get; set; } = null!;
+
+    /// <summary>The folder the study file stands in; relative paths in it are taken from here.</summary>
+    [JsonIgnore]
+    public string Folder => Path.GetDirectoryName(Path.GetFullPath(Source.File))!;
+}
+
+public sealed class StudyInfo
+{
+    public required string Id { get; init; }
+    public required string Title { get; init; }
+    public string? Sponsor { get; init; }
+    public string? Compound { get; init; }
+}
+
+public sealed class DataSpec
+{
+    /// <summary>Default data folder, relative to the study file; the command line's --data overrides it.</summary>
+    public string? Folder { get; init; }
+
+    /// <summary>Dataset name (as used in table specs) to file name within the data folder. "adsl" is required.</summary>
+    public required Dictionary<string, string> Datasets { get; init; }
+}
+
+public sealed class TreatmentSpec
+{
+    /// <summary>The ADSL variable holding the arm label, e.g. TRT01P.</summary>
+    public required string Variable { get; init; }
+
+    /// <summary>The numeric ADSL variable giving the arms' display order, e.g. TRT01PN.</summary>
+    public string? Order { get; init; }
+
+    /// <summary>The control arm's label as it appears in the data.</summary>
+    public required string Control { get; init; }
+
+    /// <summary>Whether tables get a Total column where the kind has one.</summary>
+    public bool Total { get; init; }
+
+    /// <summary>Optional display labels by data value (e.g. to shorten long arm names).</summary>
+    public Dictionary<string, string>? Labels { get; init; }
+}
+
+public sealed class PopulationSpec
+{
+    public required string Label { get; init; }
+
+    /// <summary>Condition on ADSL selecting the population's subjects.</summary>
+    public required string Where { get; init; }
+
+    /// <summary>Treatment variable to group by in this population (e.g. TRT01A for safety), if not the study's.</summary>
+    public string? Treatment { get; init; }
+
+    /// <summary>Order variable going with <see cref="Treatment"/>.</summary>
+    public string? Order { get; init; }
+}
+
+public sealed class PageSpec
+{
+    public string? Paper { get; init; }
+    public string? Orientation { get; init; }
+    public string? Font { get; init; }
+    public double? FontSize { get; init; }
+}
