@@ -1,5 +1,8 @@
 using System.IO.Compression;
 using ClosedXML.Excel;
+using DocumentFormat.OpenXml;
+using DocumentFormat.OpenXml.Packaging;
+using DocumentFormat.OpenXml.Validation;
 using OutputForge.Layout;
 using OutputForge.Rendering;
 using OutputForge.Rendering.Excel;
@@ -212,6 +215,17 @@ public sealed class ExcelTableRendererTests
         Assert.Equal("Table 14.3.1.1", excel.Workbook.Worksheet(2).Cell(1, 1).GetString());
         // One title line in the long table: its header rows end on row 6.
         Assert.Equal(6, excel.Workbook.Worksheet(2).SheetView.SplitRow);
+    }
+
+    [Fact]
+    public void Open_xml_validator_reports_no_errors_in_the_workbook()
+    {
+        using var excel = new ExcelWorkbookReader(ResponderTableFixture.Responders(), ResponderTableFixture.LongTable());
+        using var package = SpreadsheetDocument.Open(new MemoryStream(excel.Bytes), false);
+
+        var errors = new OpenXmlValidator(FileFormatVersions.Office2010)
+            .Validate(package).Select(e => $"{e.Description} at {e.Part?.Uri} {e.Path?.XPath}").ToList();
+        Assert.True(errors.Count == 0, string.Join("\n", errors));
     }
 
     [Fact]

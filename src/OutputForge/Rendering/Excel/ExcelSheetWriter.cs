@@ -114,7 +114,7 @@ public sealed class ExcelSheetWriter
         {
             var layout = body.Cells[c];
             var cell = sheet.Cell(row, c + 2);
-            if (layout.Number is double number && layout.ExcelFormat is string format)
+            if (layout.Number is double number && double.IsFinite(number) && layout.ExcelFormat is string format)
             {
                 if (!ExcelNumberDisplay.Agrees(number, format, layout.Text))
                     throw new TableRenderException(
@@ -126,7 +126,8 @@ public sealed class ExcelSheetWriter
             }
             else
             {
-                // Without a format the spreadsheet could not show the layout's text: keep the text.
+                // Without a format (or with no finite number) the spreadsheet could not show the
+                // layout's text: keep the text.
                 SetText(cell, layout.Text);
             }
             cell.Style.Alignment.Horizontal = Horizontal(_document.Columns[c + 1].Alignment);
@@ -174,8 +175,9 @@ public sealed class ExcelSheetWriter
         page.Margins.Right = _document.Page.MarginInches;
         page.Margins.Top = _document.Page.MarginInches;
         page.Margins.Bottom = _document.Page.MarginInches;
-        page.Margins.Header = 0.5;
-        page.Margins.Footer = 0.5;
+        // As in the Word table: half an inch from the paper edge, or half a narrower margin.
+        page.Margins.Header = Math.Min(0.5, _document.Page.MarginInches / 2);
+        page.Margins.Footer = page.Margins.Header;
         page.PrintAreas.Add(1, 1, lastRow, ColumnCount);
 
         // "&" starts a header code in SpreadsheetML (ECMA-376 Part 1, 18.3.1.39); "&&" prints one.
