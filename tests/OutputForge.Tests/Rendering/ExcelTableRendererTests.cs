@@ -165,6 +165,19 @@ public sealed class ExcelTableRendererTests
     }
 
     [Fact]
+    public void Printed_page_header_has_the_study_line_and_page_x_of_y_in_the_table_font()
+    {
+        var document = ResponderTableFixture.Responders() with { StudyLine = "Study QF217-301 R&D" };
+        using var excel = new ExcelWorkbookReader(document);
+        using var zip = new ZipArchive(new MemoryStream(excel.Bytes));
+        using var reader = new StreamReader(zip.GetEntry("xl/worksheets/sheet1.xml")!.Open());
+        var header = System.Xml.Linq.XDocument.Parse(reader.ReadToEnd()).Descendants().Single(e => e.Name.LocalName == "oddHeader").Value;
+
+        // SpreadsheetML header codes (ECMA-376 Part 1, 18.3.1.39): &L left, &R right, &P page, &N pages, && an ampersand.
+        Assert.Equal("&L&9&\"Courier New,Regular\"Study QF217-301 R&&D&R&9&\"Courier New,Regular\"Page &P of &N", header);
+    }
+
+    [Fact]
     public void A4_portrait_comes_from_the_page_settings()
     {
         var page = new PageSettings(PaperSize.A4, PageOrientation.Portrait);

@@ -181,11 +181,22 @@ public sealed class ExcelSheetWriter
         page.PrintAreas.Add(1, 1, lastRow, ColumnCount);
 
         // "&" starts a header code in SpreadsheetML (ECMA-376 Part 1, 18.3.1.39); "&&" prints one.
-        page.Header.Left.AddText(_document.StudyLine.Replace("&", "&&", StringComparison.Ordinal));
-        page.Header.Right.AddText("Page ");
+        // Header and footer texts are codes (ECMA-376 Part 1, 18.3.1.39): "&&" prints one "&",
+        // &9 sets the size and &"Font,Regular" the font, so the page header uses the table's font.
+        // The size code comes first: digits right after it would be read as part of the size.
+        string font = FontCode();
+        page.Header.Left.AddText(font + _document.StudyLine.Replace("&", "&&", StringComparison.Ordinal));
+        page.Header.Right.AddText(font + "Page ");
         page.Header.Right.AddText(XLHFPredefinedText.PageNumber);
         page.Header.Right.AddText(" of ");
         page.Header.Right.AddText(XLHFPredefinedText.NumberOfPages);
+    }
+
+    private string FontCode()
+    {
+        int size = Math.Max(1, (int)Math.Round(_document.Page.FontSizePoints));
+        string name = _document.Page.FontName.Replace("\"", string.Empty, StringComparison.Ordinal);
+        return string.Create(CultureInfo.InvariantCulture, $"&{size}&\"{name},Regular\"");
     }
 
     private static XLAlignmentHorizontalValues Horizontal(CellAlignment alignment) => alignment switch
