@@ -52,6 +52,10 @@ public sealed class RendererEdgeCaseTests
         Assert.Contains(document.SourceLine, texts);
         Assert.All(document.Rows.Where(r => r.Kind != RowKind.Blank), r => Assert.Contains(r.Label, texts));
         Assert.DoesNotContain(excel.Sheet.CellsUsed(), c => c.DataType == XLDataType.Number && !double.IsFinite(c.GetDouble()));
+        int ruledAbove = excel.Sheet.RowsUsed().Count(r => r.Cell(1).Style.Border.TopBorder == XLBorderStyleValues.Thin);
+        int ruledBelow = excel.Sheet.RowsUsed().Count(r => r.Cell(1).Style.Border.BottomBorder == XLBorderStyleValues.Thin);
+        Assert.Equal(1, ruledAbove);
+        Assert.Equal(document.HeaderRows.Count > 0 && document.Rows.Count > 0 ? 2 : 1, ruledBelow);
     }
 
     [Theory]

@@ -42,15 +42,17 @@ public sealed class ExcelSheetWriter
         for (int h = 0; h < _document.HeaderRows.Count; h++)
             HeaderRow(sheet, row++, _document.HeaderRows[h], isLast: h == _document.HeaderRows.Count - 1);
         int lastHeaderRow = row - 1;
-        if (_document.HeaderRows.Count > 0)
-            RowRange(sheet, firstHeaderRow).Style.Border.TopBorder = XLBorderStyleValues.Thin;
 
         foreach (var body in _document.Rows)
             BodyRow(sheet, row++, body);
-        // The closing rule sits under the last body row, or under the header when there is no body.
+        // The opening rule sits above the first header row (or the first body row when there is
+        // no header), the closing rule under the last body row (or under the header).
         int lastTableRow = row - 1;
         if (lastTableRow >= firstHeaderRow)
+        {
+            RowRange(sheet, firstHeaderRow).Style.Border.TopBorder = XLBorderStyleValues.Thin;
             RowRange(sheet, lastTableRow).Style.Border.BottomBorder = XLBorderStyleValues.Thin;
+        }
         row++;
 
         foreach (var footnote in _document.Footnotes)
