@@ -42,15 +42,17 @@ public sealed class ExcelSheetWriter
         for (int h = 0; h < _document.HeaderRows.Count; h++)
             HeaderRow(sheet, row++, _document.HeaderRows[h], isLast: h == _document.HeaderRows.Count - 1);
         int lastHeaderRow = row - 1;
-        if (_document.HeaderRows.Count > 0)
-            RowRange(sheet, firstHeaderRow).Style.Border.TopBorder = XLBorderStyleValues.Thin;
 
         foreach (var body in _document.Rows)
             BodyRow(sheet, row++, body);
-        // The closing rule sits under the last body row, or under the header when there is no body.
+        // The opening rule sits above the first header row (or the first body row when there is
+        // no header), the closing rule under the last body row (or under the header).
         int lastTableRow = row - 1;
         if (lastTableRow >= firstHeaderRow)
+        {
+            RowRange(sheet, firstHeaderRow).Style.Border.TopBorder = XLBorderStyleValues.Thin;
             RowRange(sheet, lastTableRow).Style.Border.BottomBorder = XLBorderStyleValues.Thin;
+        }
         row++;
 
         foreach (var footnote in _document.Footnotes)
@@ -114,7 +116,7 @@ public sealed class ExcelSheetWriter
         {
             var layout = body.Cells[c];
             var cell = sheet.Cell(row, c + 2);
-            if (layout.Number is double number && layout.ExcelFormat is string format)
+            if (layout.Number is double number && double.IsFinite(number) && layout.ExcelFormat is string format)
             {
                 if (!ExcelNumberDisplay.Agrees(number, format, layout.Text))
                     throw new TableRenderException(
@@ -126,7 +128,8 @@ public sealed class ExcelSheetWriter
             }
             else
             {
-                // Without a format the spreadsheet could not show the layout's text: keep the text.
+                // Without a format (or with no finite number) the spreadsheet could not show the
+                // layout's text: keep the text.
                 SetText(cell, layout.Text);
             }
             cell.Style.Alignment.Horizontal = Horizontal(_document.Columns[c + 1].Alignment);
@@ -174,16 +177,28 @@ public sealed class ExcelSheetWriter
         page.Margins.Right = _document.Page.MarginInches;
         page.Margins.Top = _document.Page.MarginInches;
         page.Margins.Bottom = _document.Page.MarginInches;
-        page.Margins.Header = 0.5;
-        page.Margins.Footer = 0.5;
+        // As in the Word table: half an inch from the paper edge, or half a narrower margin.
+        page.Margins.Header = Math.Min(0.5, _document.Page.MarginInches / 2);
+        page.Margins.Footer = page.Margins.Header;
         page.PrintAreas.Add(1, 1, lastRow, ColumnCount);
 
         // "&" starts a header code in SpreadsheetML (ECMA-376 Part 1, 18.3.1.39); "&&" prints one.
-        page.Header.Left.AddText(_document.StudyLine.Replace("&", "&&", StringComparison.Ordinal));
-        page.Header.Right.AddText("Page ");
+        // Header and footer texts are codes (ECMA-376 Part 1, 18.3.1.39): "&&" prints one "&",
+        // &9 sets the size and &"Font,Regular" the font, so the page header uses the table's font.
+        // The size code comes first: digits right after it would be read as part of the size.
+        string font = FontCode();
+        page.Header.Left.AddText(font + _document.StudyLine.Replace("&", "&&", StringComparison.Ordinal));
+        page.Header.Right.AddText(font + "Page ");
         page.Header.Right.AddText(XLHFPredefinedText.PageNumber);
         page.Header.Right.AddText(" of ");
         page.Header.Right.AddText(XLHFPredefinedText.NumberOfPages);
+    }
+
+    private string FontCode()
+    {
+        int size = Math.Max(1, (int)Math.Round(_document.Page.FontSizePoints));
+        string name = _document.Page.FontName.Replace("\"", string.Empty, StringComparison.Ordinal);
+        return string.Create(CultureInfo.InvariantCulture, $"&{size}&\"{name},Regular\"");
     }
 
     private static XLAlignmentHorizontalValues Horizontal(CellAlignment alignment) => alignment switch

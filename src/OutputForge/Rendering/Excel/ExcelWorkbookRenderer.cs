@@ -18,9 +18,6 @@ public sealed class ExcelWorkbookRenderer
             TableShape.Check(document);
 
         using var workbook = new XLWorkbook();
-        var first = documents[0].Page;
-        workbook.Style.Font.FontName = first.FontName;
-        workbook.Style.Font.FontSize = first.FontSizePoints;
         workbook.Properties.Title = documents.Count == 1
             ? string.Join(" ", new[] { documents[0].Heading }.Concat(documents[0].Titles))
             : string.Join(", ", documents.Select(d => d.Heading));

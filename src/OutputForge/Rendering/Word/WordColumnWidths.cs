@@ -9,7 +9,7 @@ namespace OutputForge.Rendering.Word;
 /// </summary>
 public static class WordColumnWidths
 {
-    public const double MaxLabelShare = 0.45;
+    public const double MaxLabelShare = 0.6;
 
     public static int[] Compute(TableDocument document, int textWidth, WordFontMetrics font, int indentTwips, int cellMarginTwips)
     {

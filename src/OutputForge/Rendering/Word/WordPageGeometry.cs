@@ -10,8 +10,11 @@ public sealed record WordPageGeometry(int WidthTwips, int HeightTwips, int Margi
 {
     public const int TwipsPerInch = 1440;
 
-    /// <summary>Distance of the page header from the top edge: half an inch (common practice).</summary>
-    public const int HeaderDistanceTwips = 720;
+    /// <summary>
+    /// Distance of the page header (and footer) from the paper edge: half an inch (common
+    /// practice), or half the margin when the margin is narrower than an inch.
+    /// </summary>
+    public int HeaderDistanceTwips => Math.Min(720, MarginTwips / 2);
 
     public int TextWidthTwips => WidthTwips - 2 * MarginTwips;
 

@@ -15,6 +15,9 @@ public sealed class WordTableBuilder
     /// <summary>Label indentation per level: 0.15 inch (common practice).</summary>
     public const int IndentTwips = 216;
 
+    /// <summary>Extra indentation levels of the second and later lines of a wrapped label.</summary>
+    public const int ContinuationLevels = 2;
+
     /// <summary>Left and right cell padding: 0.06 inch.</summary>
     public const int CellMarginTwips = 86;
 
@@ -55,7 +58,7 @@ public sealed class WordTableBuilder
     }
 
     private TableProperties TableProperties() => new(
-        new TableWidth { Width = _widths.Sum().ToString(System.Globalization.CultureInfo.InvariantCulture), Type = TableWidthUnitValues.Dxa },
+        new TableWidth { Width = Twips(_widths.Sum()), Type = TableWidthUnitValues.Dxa },
         new TableIndentation { Width = 0, Type = TableWidthUnitValues.Dxa },
         // Rules are drawn on the cells, not the table, so that a repeated header row carries its
         // rules onto every page.
@@ -68,7 +71,7 @@ public sealed class WordTableBuilder
             new InsideVerticalBorder { Val = BorderValues.Nil }),
         new TableLayout { Type = TableLayoutValues.Fixed },
         new TableCellMarginDefault(
-            new TopMargin { Width = BodyPaddingTwips.ToString(System.Globalization.CultureInfo.InvariantCulture), Type = TableWidthUnitValues.Dxa },
+            new TopMargin { Width = Twips(BodyPaddingTwips), Type = TableWidthUnitValues.Dxa },
             new TableCellLeftMargin { Width = CellMarginTwips, Type = TableWidthValues.Dxa },
             new TableCellRightMargin { Width = CellMarginTwips, Type = TableWidthValues.Dxa }),
         new TableLook { Val = "0000", FirstRow = false, LastRow = false, FirstColumn = false, LastColumn = false, NoHorizontalBand = true, NoVerticalBand = true });
@@ -77,7 +80,7 @@ public sealed class WordTableBuilder
     {
         var grid = new TableGrid();
         foreach (var width in _widths)
-            grid.AppendChild(new GridColumn { Width = width.ToString(System.Globalization.CultureInfo.InvariantCulture) });
+            grid.AppendChild(new GridColumn { Width = Twips(width) });
         return grid;
     }
 
@@ -100,13 +103,17 @@ public sealed class WordTableBuilder
     private TableRow BodyRow(BodyRow body, bool isFirst, bool ruleAbove, bool ruleBelow)
     {
         var row = new TableRow(new TableRowProperties(new CantSplit()));
-        // Wrapped labels continue one level deeper than their first line (hanging indent), so a
-        // long label never looks like a new row.
-        var labelProperties = new ParagraphProperties(
+        // A wrapped label continues two levels deeper than its first line (hanging indent): one
+        // level deeper would put the continuation where the rows it introduces start.
+        var labelProperties = new ParagraphProperties();
+        // A section label stays on the page of the first row it introduces.
+        if (body.Kind == RowKind.Section)
+            labelProperties.AppendChild(new KeepNext());
+        labelProperties.Append(
             new Indentation
             {
-                Left = ((body.Indent + 1) * IndentTwips).ToString(System.Globalization.CultureInfo.InvariantCulture),
-                Hanging = IndentTwips.ToString(System.Globalization.CultureInfo.InvariantCulture),
+                Left = Twips((body.Indent + ContinuationLevels) * IndentTwips),
+                Hanging = Twips(ContinuationLevels * IndentTwips),
             },
             Justify(_document.Columns[0].Alignment));
         row.AppendChild(Cell(0, 1, WordText.Paragraph(body.Label, labelProperties), ruleAbove, ruleBelow, padAbove: isFirst, TableVerticalAlignmentValues.Top));
@@ -132,7 +139,7 @@ public sealed class WordTableBuilder
         for (int c = firstColumn; c < firstColumn + span; c++)
             width += _widths[c];
         var properties = new TableCellProperties(
-            new TableCellWidth { Width = width.ToString(System.Globalization.CultureInfo.InvariantCulture), Type = TableWidthUnitValues.Dxa });
+            new TableCellWidth { Width = Twips(width), Type = TableWidthUnitValues.Dxa });
         if (span > 1)
             properties.AppendChild(new GridSpan { Val = span });
         if (ruleAbove || ruleBelow)
@@ -148,12 +155,14 @@ public sealed class WordTableBuilder
         if (padAbove || ruleBelow)
         {
             properties.AppendChild(new TableCellMargin(
-                new TopMargin { Width = (padAbove ? RulePaddingTwips : BodyPaddingTwips).ToString(System.Globalization.CultureInfo.InvariantCulture), Type = TableWidthUnitValues.Dxa },
-                new BottomMargin { Width = (ruleBelow ? RulePaddingTwips : 0).ToString(System.Globalization.CultureInfo.InvariantCulture), Type = TableWidthUnitValues.Dxa }));
+                new TopMargin { Width = Twips(padAbove ? RulePaddingTwips : BodyPaddingTwips), Type = TableWidthUnitValues.Dxa },
+                new BottomMargin { Width = Twips(ruleBelow ? RulePaddingTwips : 0), Type = TableWidthUnitValues.Dxa }));
         }
         properties.AppendChild(new TableCellVerticalAlignment { Val = vertical });
         return new TableCell(properties, paragraph);
     }
+
+    private static string Twips(int value) => value.ToString(System.Globalization.CultureInfo.InvariantCulture);
 
     private static Justification Justify(CellAlignment alignment) => new()
     {

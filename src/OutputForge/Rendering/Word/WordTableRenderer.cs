@@ -85,8 +85,8 @@ public sealed class WordTableRenderer : ITableRenderer
             Bottom = geometry.MarginTwips,
             Left = (UInt32Value)(uint)geometry.MarginTwips,
             Right = (UInt32Value)(uint)geometry.MarginTwips,
-            Header = (UInt32Value)(uint)WordPageGeometry.HeaderDistanceTwips,
-            Footer = (UInt32Value)(uint)WordPageGeometry.HeaderDistanceTwips,
+            Header = (UInt32Value)(uint)geometry.HeaderDistanceTwips,
+            Footer = (UInt32Value)(uint)geometry.HeaderDistanceTwips,
             Gutter = 0U,
         });
 }
