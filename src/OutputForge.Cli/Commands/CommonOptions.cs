@@ -29,8 +29,21 @@ public static class CommonOptions
         DefaultValueFactory = _ => "refuse",
     };
 
-    public static Data.DataReadOptions DataOptions(string? controlCharacters) =>
-        new(controlCharacters == "replace" ? Data.ControlCharacterPolicy.Replace : Data.ControlCharacterPolicy.Refuse);
+    public static bool TryDataOptions(string? controlCharacters, TextWriter error, out Data.DataReadOptions options)
+    {
+        options = Data.DataReadOptions.Default;
+        switch (controlCharacters)
+        {
+            case null or "refuse":
+                return true;
+            case "replace":
+                options = new Data.DataReadOptions(Data.ControlCharacterPolicy.Replace);
+                return true;
+            default:
+                error.WriteLine($"outputforge: error: --control-characters: expected 'refuse' or 'replace', not '{controlCharacters}'");
+                return false;
+        }
+    }
 
     public static Option<string?> Timestamp() => new("--timestamp")
     {

@@ -22,7 +22,6 @@ public static class RunCommand
         var quiet = CommonOptions.Quiet();
         var timestamp = CommonOptions.Timestamp();
         var controlCharacters = CommonOptions.ControlCharacters();
-        controlCharacters.AcceptOnlyFromAmong("refuse", "replace");
         var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
         {
             spec, data, output, formats, quiet, timestamp, controlCharacters,
@@ -30,12 +29,13 @@ public static class RunCommand
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
             var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
-            if (!valid || !CommonOptions.TryRunTime(parse.GetValue(timestamp), error, out var runTime))
+            if (!valid || !CommonOptions.TryRunTime(parse.GetValue(timestamp), error, out var runTime)
+                || !CommonOptions.TryDataOptions(parse.GetValue(controlCharacters), error, out var dataOptions))
             {
                 return ExitCodes.Usage;
             }
             var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = CommonOptions.DataOptions(parse.GetValue(controlCharacters)) }, log);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = dataOptions }, log);
             return ExitCodes.Success;
         }));
         return command;

@@ -13,6 +13,10 @@ public static class AdamConformance
     {
         var subjects = adsl.Find(SubjectVariable)
             ?? throw new DataException(adsl.File, 1, null, $"ADSL has no {SubjectVariable} variable");
+        if (adsl.RowCount == 0)
+        {
+            throw new DataException(adsl.File, null, null, "ADSL has a header but no subjects");
+        }
         var firstLine = new Dictionary<string, int>(StringComparer.Ordinal);
         for (var row = 0; row < adsl.RowCount; row++)
         {

@@ -92,10 +92,32 @@ internal static class SpecFileReader
                 }
             }
         }
-        return problems
+        return WithoutTypoEchoes(problems)
             .OrderBy(p => p.Line ?? int.MaxValue)
             .ThenBy(p => p.Column ?? int.MaxValue)
             .ToList();
+    }
+
+    /// <summary>
+    /// A mistyped key produces two problems: the unknown key and the required key it was meant to
+    /// be. Only the first says what to do, so the second is dropped.
+    /// </summary>
+    private static IEnumerable<SpecProblem> WithoutTypoEchoes(List<SpecProblem> problems)
+    {
+        var meant = problems
+            .Select(p => System.Text.RegularExpressions.Regex.Match(p.Message, @"^unknown key '[^']*' \(did you mean '([^']*)'\?\)"))
+            .Where(m => m.Success)
+            .Select(m => m.Groups[1].Value)
+            .ToHashSet(StringComparer.Ordinal);
+        foreach (var problem in problems)
+        {
+            var missing = System.Text.RegularExpressions.Regex.Match(problem.Message, @"^missing required key: '([^']*)'$");
+            if (missing.Success && meant.Contains(missing.Groups[1].Value))
+            {
+                continue;
+            }
+            yield return problem;
+        }
     }
 
     /// <summary>Turns one schema error into a message in the spec writer's terms.</summary>

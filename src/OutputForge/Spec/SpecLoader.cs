@@ -17,9 +17,15 @@ public static class SpecLoader
         var study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
         var problems = new List<SpecProblem>();
         var tables = new List<TableSpec>();
+        var listed = new HashSet<string>(StringComparer.Ordinal);
         for (var i = 0; i < study.Tables.Count; i++)
         {
             var relative = study.Tables[i];
+            if (!listed.Add(Path.GetFullPath(Path.Combine(Path.GetDirectoryName(studyFile)!, relative))))
+            {
+                problems.Add(study.Source.Problem($"/tables/{i}", $"'{relative}' is listed twice"));
+                continue;
+            }
             var file = Path.Combine(Path.GetDirectoryName(studyFile)!, relative);
             if (!File.Exists(file))
             {

@@ -103,14 +103,14 @@ public static class BadInputCases
         yield return T("unknown variable in response", "AVALC = 'Y'", "AVALX = 'Y'", "$.endpoint.response", "no variable AVALX (did you mean 'AVALC'?)");
         yield return T("unknown variable in subset", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"AGEX >= 18\",", "$.subset", "no variable AGEX (did you mean 'AGE'?)");
         yield return S("unknown treatment variable", "\"variable\": \"TRT01P\"", "\"variable\": \"TRT01X\"", "$.treatment.variable", "no variable TRT01X (did you mean 'TRT01P'?)");
-        yield return S("unknown order variable", "\"order\": \"TRT01PN\"", "\"order\": \"TRT01PX\"", "$.treatment.order", "no variable TRT01PX (did you mean 'TRT01PN'?)");
+        yield return S("unknown order variable", "\"order\": \"TRT01PN\"", "\"order\": \"TRT01PX\"", "$.treatment.order", "no variable TRT01PX (did you mean");
         yield return S("unknown variable in population", "ITTFL = 'Y'", "ITTF = 'Y'", "$.populations.itt.where", "(did you mean 'ITTFL'?)");
         yield return S("control in the wrong case", "\"control\": \"Placebo\"", "\"control\": \"placebo\"", "$.treatment.control", "(did you mean 'Placebo'?)");
         yield return S("control not in the data", "\"control\": \"Placebo\"", "\"control\": \"Vehicle\"", "$.treatment.control", "control arm 'Vehicle' is not a value of TRT01P");
         yield return S("missing table file", "\"t1.json\"", "\"t2.json\"", "$.tables[0]", "no such table spec file 't2.json'");
         yield return S("population treatment variable unknown", "\"where\": \"ITTFL = 'Y'\"", "\"where\": \"ITTFL = 'Y'\", \"treatment\": \"TRT01AX\"", "$.populations.itt.treatment", "no variable TRT01AX");
         yield return S("order without treatment in a population", "\"where\": \"ITTFL = 'Y'\"", "\"where\": \"ITTFL = 'Y'\", \"order\": \"TRT01PN\"", "$.populations.itt.order", "'order' needs 'treatment'");
-        yield return S("the same table twice", "[\"t1.json\"]", "[\"t1.json\", \"t1.json\"]", "$.id", "already used");
+        yield return S("the same table twice", "[\"t1.json\"]", "[\"t1.json\", \"t1.json\"]", "$.tables[1]", "'t1.json' is listed twice");
 
         // condition syntax, pointing at the character
         yield return T("unquoted text value", "ANL01FL = 'Y'", "ANL01FL = Y", "$.endpoint.where", "put text values in quotes", "character 11");
@@ -126,7 +126,10 @@ public static class BadInputCases
         yield return T("date compared without ISO format", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"AGE = 1 or STUDYID = 1\",", "$.subset", "STUDYID holds text");
 
         // meaning
-        yield return S("empty population", "ITTFL = 'Y'", "ITTFL = 'X'", "$.population", "has no subjects");
+        yield return new BadInputCase("empty population", ["t1.json", "$.population", "population 'itt' (ITTFL = 'X') has no subjects"])
+        {
+            Study = [("ITTFL = 'Y'", "ITTFL = 'X'")],
+        };
         yield return new BadInputCase("two records for one subject", ["t1.json", "$.endpoint.where", "more than one record of subject T1-001", "lines 2 and 6"])
         {
             Adeff = Utf8(Adeff + "T1,T1-001,RESP,Week 4,Y,Y\n"),
@@ -144,7 +147,7 @@ public static class BadInputCases
         yield return AB("Latin-1 byte", [.. Utf8(AdslHeader + "T1,T1-001,Placebo,0,Y,40\nT1,T1-002,Plac"), 0xE9, .. Utf8("bo,0,Y,51\n")], "line 3", "not valid UTF-8");
         yield return A("empty file", "", "the file is empty");
         yield return AB("byte-order mark only", [0xEF, 0xBB, 0xBF], "no header row");
-        yield return A("header only", AdslHeader, "has no subjects");
+        yield return A("header only", AdslHeader, "ADSL has a header but no subjects");
         yield return A("duplicate column names", "STUDYID,USUBJID,TRT01P,TRT01PN,ITTFL,ITTFL\nT1,T1-001,Placebo,0,Y,Y\n", "line 1", "variable ITTFL", "appears twice");
         yield return A("empty column name", "STUDYID,,TRT01P\nT1,x,y\n", "line 1", "column 2 of the header has no variable name");
         yield return new BadInputCase("text in a numeric variable", ["t1.json", "$.subset", "AGE holds text ('abc' on line 3 is not a number)"])

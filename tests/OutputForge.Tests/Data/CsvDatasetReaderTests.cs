@@ -111,4 +111,27 @@ public sealed class CsvDatasetReaderTests : IDisposable
         var orphan = Assert.Throws<DataException>(() => AdamConformance.CheckAgainstSubjectLevel(bds, adsl));
         Assert.Contains("adeff.csv line 3, variable USUBJID: subject S9 is not in ADSL", orphan.Message);
     }
+
+    [Fact]
+    public void Mixed_line_endings_are_read()
+    {
+        var path = _folder.File("mixed.csv");
+        File.WriteAllBytes(path, "USUBJID,AGE\r\nS1,3\nS2,4\r\n"u8.ToArray());
+        var data = CsvDatasetReader.Read("adsl", path);
+        Assert.Equal(2, data.RowCount);
+        Assert.Equal(4, data.Get("AGE").GetNumber(1));
+    }
+
+    [Fact]
+    public void Control_characters_are_refused_or_replaced_with_a_warning()
+    {
+        var path = _folder.Write("ctl.csv", "USUBJID,TERM\nS1,a\u0007b\n");
+        var refused = Assert.Throws<DataException>(() => CsvDatasetReader.Read("adae", path));
+        Assert.Contains("ctl.csv line 2, variable TERM: the value holds the control character U+0007 at character 2", refused.Message);
+
+        var warnings = new List<string>();
+        var data = CsvDatasetReader.Read("adae", path, new DataReadOptions(ControlCharacterPolicy.Replace), warnings.Add);
+        Assert.Equal("a\uFFFDb", data.Get("TERM").GetText(0));
+        Assert.Contains("1 value held control characters, replaced by U+FFFD", Assert.Single(warnings));
+    }
 }
