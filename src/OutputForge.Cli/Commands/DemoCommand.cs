@@ -35,8 +35,7 @@ public static class DemoCommand
             var root = parse.GetValue(output)!;
             var log = new StderrRunLog(error, parse.GetValue(quiet));
             var dataFolder = Path.Combine(root, "data");
-            DemoStudyGenerator.WriteCsv(dataFolder, new DemoStudyOptions(parse.GetValue(subjects)));
-            var studyFile = DemoSpecFiles.Write(root);
+            var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
             PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers) { RunTime = runTime }, log);
             return ExitCodes.Success;
