@@ -22,9 +22,13 @@ public static class RunCommand
         var quiet = CommonOptions.Quiet();
         var timestamp = CommonOptions.Timestamp();
         var controlCharacters = CommonOptions.ControlCharacters();
+        var allowFolder = new Option<string[]>("--allow-folder")
+        {
+            Description = "A folder outside the spec's own folder tree that the spec may read from (e.g. a shared data folder named in data.folder); repeatable.",
+        };
         var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
         {
-            spec, data, output, formats, quiet, timestamp, controlCharacters,
+            spec, data, output, formats, quiet, timestamp, controlCharacters, allowFolder,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -35,7 +39,7 @@ public static class RunCommand
                 return ExitCodes.Usage;
             }
             var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = dataOptions }, log);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = dataOptions, AllowedFolders = parse.GetValue(allowFolder) ?? [] }, log);
             return ExitCodes.Success;
         }));
         return command;

@@ -19,9 +19,9 @@ public static class PackageRunner
     {
         var clock = Stopwatch.StartNew();
         using var outputLock = OutputLock.Acquire(request.OutputFolder);
-        var package = SpecLoader.Load(request.SpecPath);
+        var package = SpecLoader.Load(request.SpecPath, request.AllowedFolders);
         var study = package.Study;
-        var dataFolder = request.DataFolder ?? DefaultDataFolder(study);
+        var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
         var dataWarnings = new List<string>();
         var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
@@ -77,14 +77,20 @@ public static class PackageRunner
         return new RunSummary(files, laidOut.Count, warnings, clock.Elapsed);
     }
 
-    private static string DefaultDataFolder(StudySpec study)
+    private static string DefaultDataFolder(SpecPackage package)
     {
+        var study = package.Study;
         if (study.Data.Folder is null)
         {
             throw new SpecException(study.Source.Problem("/data",
                 "no data folder: give --data on the command line or data.folder in the study spec"));
         }
-        return Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
+        var folder = Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
+        if (!package.Folders.Allows(folder))
+        {
+            throw new SpecException(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder) + ", or give --data"));
+        }
+        return folder;
     }
 
     private static PageSettings PageFrom(PageSpec? spec)

@@ -8,6 +8,9 @@ public sealed record RunRequest(string SpecPath, string? DataFolder, string Outp
     /// <summary>The run time printed in outputs; null means now.</summary>
     public DateTimeOffset? RunTime { get; init; }
 
+    /// <summary>Folders outside the spec's own folder tree that the spec may read from.</summary>
+    public IReadOnlyList<string> AllowedFolders { get; init; } = [];
+
     /// <summary>How datasets are read (e.g. what to do with control characters).</summary>
     public Data.DataReadOptions DataOptions { get; init; } = Data.DataReadOptions.Default;
 }

@@ -11,10 +11,14 @@ public static class SpecLoader
     /// <summary>The file name looked for when --spec names a folder.</summary>
     public const string StudyFileName = "study.json";
 
-    public static SpecPackage Load(string specPath)
+    public static SpecPackage Load(string specPath) => Load(specPath, []);
+
+    /// <summary>Loads the package; besides the study file's own folder tree, files may come from <paramref name="allowedFolders"/>.</summary>
+    public static SpecPackage Load(string specPath, IReadOnlyList<string> allowedFolders)
     {
         var studyFile = ResolveStudyFile(specPath);
         var study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
+        var policy = new SpecFolderPolicy(Path.GetDirectoryName(Path.GetFullPath(studyFile))!, allowedFolders);
         var problems = new List<SpecProblem>();
         var tables = new List<TableSpec>();
         var listed = new HashSet<string>(StringComparer.Ordinal);
@@ -27,6 +31,11 @@ public static class SpecLoader
                 continue;
             }
             var file = Path.Combine(Path.GetDirectoryName(studyFile)!, relative);
+            if (!policy.Allows(file))
+            {
+                problems.Add(study.Source.Problem($"/tables/{i}", policy.Explain(relative)));
+                continue;
+            }
             if (!File.Exists(file))
             {
                 problems.Add(study.Source.Problem($"/tables/{i}", $"no such table spec file '{relative}' (relative to {Path.GetFileName(studyFile)})"));
@@ -47,7 +56,7 @@ public static class SpecLoader
         {
             throw new SpecException(problems);
         }
-        return new SpecPackage(study, tables);
+        return new SpecPackage(study, tables, policy);
     }
 
     /// <summary>A study file path: the file itself, or study.json inside a folder.</summary>
