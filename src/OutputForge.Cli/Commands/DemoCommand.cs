@@ -37,7 +37,10 @@ public static class DemoCommand
             DemoStudyGenerator.WriteCsv(dataFolder, new DemoStudyOptions(parse.GetValue(subjects)));
             var studyFile = DemoSpecFiles.Write(root);
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
-            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers), log);
+            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
+            {
+                CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
+            }, log);
             return ExitCodes.Success;
         }));
         return command;

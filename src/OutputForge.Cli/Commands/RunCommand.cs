@@ -20,9 +20,14 @@ public static class RunCommand
         var output = CommonOptions.Output("Folder for the tables and results.json (created if needed; files of the same name are replaced only when the whole run succeeds).");
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
-        var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
+        var tables = new Option<string[]>("--tables", "-t")
         {
-            spec, data, output, formats, quiet,
+            Description = "Only these tables, by id or pattern ('14.2.*'), comma-separated or repeated; the other tables' files, results and manifest entries in --out are kept.",
+            AllowMultipleArgumentsPerToken = true,
+        };
+        var command = new Command("run", "Produce every table of a study spec: Word, Excel, results.json and manifest.json.")
+        {
+            spec, data, output, formats, quiet, tables,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -32,7 +37,12 @@ public static class RunCommand
                 return ExitCodes.Usage;
             }
             var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers), log);
+            var selected = parse.GetValue(tables);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers)
+            {
+                CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
+                Tables = selected is { Length: > 0 } ? selected : null,
+            }, log);
             return ExitCodes.Success;
         }));
         return command;

@@ -7,4 +7,10 @@ public sealed record RunRequest(string SpecPath, string? DataFolder, string Outp
 {
     /// <summary>The run time printed in outputs; null means now.</summary>
     public DateTimeOffset? RunTime { get; init; }
+
+    /// <summary>The command line as given (recorded in manifest.json).</summary>
+    public IReadOnlyList<string> CommandLine { get; init; } = [];
+
+    /// <summary>Table ids or patterns to produce ("14.2.*"); null means every table of the package.</summary>
+    public IReadOnlyList<string>? Tables { get; init; }
 }
