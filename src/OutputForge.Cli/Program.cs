@@ -21,6 +21,7 @@ public static class Program
             RunCommand.Create(error),
             DemoCommand.Create(error),
             CompareCommand.Create(output, error),
+            ChangesCommand.Create(output, error),
         };
         var parse = root.Parse(args);
         return parse.Invoke(new InvocationConfiguration { Error = error });
