@@ -37,8 +37,14 @@ public static class CompareCommand
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
+            var rule = CompareTolerance.Parse(parse.GetValue(tolerance), out var problem);
+            if (rule is null)
+            {
+                error.WriteLine($"outputforge: error: {problem}");
+                return ExitCodes.Usage;
+            }
             var qcFile = parse.GetValue(qc)!;
-            var result = QcComparison.Run(parse.GetValue(production)!, qcFile, CompareTolerance.Parse(parse.GetValue(tolerance)));
+            var result = QcComparison.Run(parse.GetValue(production)!, qcFile, rule);
             var workbook = parse.GetValue(report) ?? Path.ChangeExtension(qcFile, ".compare.xlsx");
             CompareWorkbook.Save(result, workbook);
             var text = Path.ChangeExtension(workbook, ".txt");

@@ -27,7 +27,7 @@ public static class PackageRunner
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
         var inputs = RunInputs.Read(package, data);
-        var selected = TableSelection.Select(package.Tables, request.Tables);
+        var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames());
         var manifestTables = new List<ManifestTable>();
         var page = PageFrom(study.Page);

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using OutputForge.Data;
 using OutputForge.Pipeline;
 
 namespace OutputForge.Workflow;
@@ -38,7 +39,7 @@ public sealed class RunResults
         var path = Directory.Exists(runFolderOrFile) ? Path.Combine(runFolderOrFile, PackageRunner.ResultsFileName) : runFolderOrFile;
         if (!System.IO.File.Exists(path))
         {
-            throw new RunException($"{path}: no such file (give a run folder written by `outputforge run`, or its results.json)");
+            throw new DataException(path, null, null, $"no such file (give a run folder written by `outputforge run`, or its results.json)");
         }
         try
         {
@@ -49,14 +50,14 @@ public sealed class RunResults
             var duplicate = records.GroupBy(r => r.Address, StringComparer.Ordinal).FirstOrDefault(g => g.Count() > 1);
             if (duplicate is not null)
             {
-                throw new RunException($"{path}: two numbers share the key {duplicate.Key} (labels '{duplicate.First().RowLabel}' / '{duplicate.First().ColumnLabel}'), so they cannot be told apart; give the arms values that differ in letters or digits");
+                throw new DataException(path, null, null, $"two numbers share the key {duplicate.Key} (labels '{duplicate.First().RowLabel}' / '{duplicate.First().ColumnLabel}'), so they cannot be told apart; give the arms values that differ in letters or digits");
             }
             return new RunResults(path, root.GetProperty("study").GetString() ?? string.Empty,
                 root.GetProperty("runTime").GetString() ?? string.Empty, tables, records);
         }
         catch (Exception e) when (e is JsonException or KeyNotFoundException or InvalidOperationException)
         {
-            throw new RunException($"{path}: not a results.json written by OutputForge ({e.Message})");
+            throw new DataException(path, null, null, $"not a results.json written by OutputForge ({e.Message})");
         }
     }
 

@@ -1,5 +1,4 @@
 using System.Text.RegularExpressions;
-using OutputForge.Pipeline;
 using OutputForge.Spec;
 
 namespace OutputForge.Workflow;
@@ -10,7 +9,7 @@ namespace OutputForge.Workflow;
 /// </summary>
 public static class TableSelection
 {
-    public static IReadOnlyList<TableSpec> Select(IReadOnlyList<TableSpec> tables, IReadOnlyList<string>? patterns)
+    public static IReadOnlyList<TableSpec> Select(StudySpec study, IReadOnlyList<TableSpec> tables, IReadOnlyList<string>? patterns)
     {
         if (patterns is null || patterns.Count == 0)
         {
@@ -20,7 +19,7 @@ public static class TableSelection
         var unmatched = expanded.Where(p => !tables.Any(t => Matches(t.Id, p))).ToList();
         if (unmatched.Count > 0)
         {
-            throw new RunException($"--tables: no table id matches {string.Join(", ", unmatched.Select(u => $"'{u}'"))} (ids: {string.Join(", ", tables.Select(t => t.Id))})");
+            throw study.Source.Error("/tables", $"--tables: no table id matches {string.Join(", ", unmatched.Select(u => $"'{u}'"))} (ids: {string.Join(", ", tables.Select(t => t.Id))})");
         }
         return tables.Where(t => expanded.Any(p => Matches(t.Id, p))).ToList();
     }

@@ -1,5 +1,4 @@
 using System.Globalization;
-using OutputForge.Pipeline;
 
 namespace OutputForge.Workflow.Compare;
 
@@ -17,8 +16,10 @@ public sealed record CompareTolerance(double? Absolute)
 
     public bool IsDisplayed => Absolute is null;
 
-    public static CompareTolerance Parse(string? text)
+    /// <summary>Reads the command line's value; null with <paramref name="problem"/> set when it is neither "displayed" nor a number.</summary>
+    public static CompareTolerance? Parse(string? text, out string? problem)
     {
+        problem = null;
         if (text is null || text.Equals(DisplayedName, StringComparison.OrdinalIgnoreCase))
         {
             return Displayed;
@@ -27,7 +28,8 @@ public sealed record CompareTolerance(double? Absolute)
         {
             return new CompareTolerance(value);
         }
-        throw new RunException($"--tolerance: '{text}' is neither '{DisplayedName}' nor a non-negative number (e.g. 0.001)");
+        problem = $"--tolerance: '{text}' is neither '{DisplayedName}' nor a non-negative number (e.g. 0.001)";
+        return null;
     }
 
     public override string ToString() => Absolute is { } a

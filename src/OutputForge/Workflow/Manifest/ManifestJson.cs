@@ -1,5 +1,6 @@
 using System.Text.Json;
 using System.Text.Json.Serialization;
+using OutputForge.Data;
 using OutputForge.Pipeline;
 
 namespace OutputForge.Workflow.Manifest;
@@ -19,22 +20,22 @@ public static class ManifestJson
 
     public static void Write(Stream output, RunManifest manifest) => JsonSerializer.Serialize(output, manifest, Options);
 
-    /// <summary>The manifest of a run folder (or the file itself); a missing or unreadable one is a <see cref="RunException"/>.</summary>
+    /// <summary>The manifest of a run folder (or the file itself); a missing or unreadable one is a <see cref="DataException"/>.</summary>
     public static RunManifest Read(string runFolderOrFile)
     {
         var path = Directory.Exists(runFolderOrFile) ? Path.Combine(runFolderOrFile, FileName) : runFolderOrFile;
         if (!File.Exists(path))
         {
-            throw new RunException($"{path}: no {FileName} (is this a run folder written by `outputforge run`?)");
+            throw new DataException(path, null, null, $"no {FileName} (is this a run folder written by `outputforge run`?)");
         }
         try
         {
             return JsonSerializer.Deserialize<RunManifest>(File.ReadAllBytes(path), Options)
-                ?? throw new RunException($"{path}: the manifest is empty");
+                ?? throw new DataException(path, null, null, $"the manifest is empty");
         }
         catch (JsonException e)
         {
-            throw new RunException($"{path}: not a readable manifest ({e.Message})");
+            throw new DataException(path, null, null, $"not a readable manifest ({e.Message})");
         }
     }
 }
