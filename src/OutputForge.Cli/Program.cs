@@ -22,6 +22,7 @@ public static class Program
             DemoCommand.Create(error),
             CompareCommand.Create(output, error),
             ChangesCommand.Create(output, error),
+            CheckCommand.Create(output, error),
         };
         var parse = root.Parse(args);
         return parse.Invoke(new InvocationConfiguration { Error = error });

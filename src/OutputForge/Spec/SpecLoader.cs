@@ -13,9 +13,34 @@ public static class SpecLoader
 
     public static SpecPackage Load(string specPath)
     {
-        var studyFile = ResolveStudyFile(specPath);
-        var study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
         var problems = new List<SpecProblem>();
+        var package = LoadCollecting(specPath, problems);
+        if (problems.Count > 0)
+        {
+            throw new SpecException(problems);
+        }
+        return package!;
+    }
+
+    /// <summary>
+    /// Reads what can be read and adds every problem to <paramref name="problems"/> instead of
+    /// stopping: the study spec with the table specs that passed their schema, or null when the
+    /// study file itself cannot be used. For `check`, which reports everything at once.
+    /// </summary>
+    public static SpecPackage? LoadCollecting(string specPath, List<SpecProblem> problems)
+    {
+        string studyFile;
+        StudySpec study;
+        try
+        {
+            studyFile = ResolveStudyFile(specPath);
+            study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
+        }
+        catch (SpecException e)
+        {
+            problems.AddRange(e.Problems);
+            return null;
+        }
         var tables = new List<TableSpec>();
         for (var i = 0; i < study.Tables.Count; i++)
         {
@@ -37,10 +62,6 @@ public static class SpecLoader
         }
         problems.AddRange(CheckStudy(study));
         problems.AddRange(CheckReferences(study, tables));
-        if (problems.Count > 0)
-        {
-            throw new SpecException(problems);
-        }
         return new SpecPackage(study, tables);
     }
 
@@ -81,6 +102,21 @@ public static class SpecLoader
             if (population.Order is not null && population.Treatment is null)
             {
                 yield return study.Source.Problem($"/populations/{name}/order", "'order' needs 'treatment' beside it");
+            }
+        }
+        if (study.Treatment.Arms is { } arms)
+        {
+            for (var i = 0; i < arms.Count; i++)
+            {
+                if (arms.FindIndex(a => a.Value == arms[i].Value) < i)
+                {
+                    yield return study.Source.Problem($"/treatment/arms/{i}/value", $"arm '{arms[i].Value}' is listed twice");
+                }
+            }
+            if (!arms.Exists(a => a.Value == study.Treatment.Control))
+            {
+                yield return study.Source.Problem("/treatment/control",
+                    $"control arm '{study.Treatment.Control}' is not one of the arms listed{NearestName.Hint(study.Treatment.Control, arms.Select(a => a.Value).ToList())}");
             }
         }
     }
