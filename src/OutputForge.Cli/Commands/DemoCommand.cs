@@ -37,7 +37,11 @@ public static class DemoCommand
             var dataFolder = Path.Combine(root, "data");
             var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
-            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers) { RunTime = runTime }, log);
+            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
+            {
+                RunTime = runTime,
+                CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
+            }, log);
             return ExitCodes.Success;
         }));
         return command;

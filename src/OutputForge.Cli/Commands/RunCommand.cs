@@ -26,9 +26,14 @@ public static class RunCommand
         {
             Description = "A folder outside the spec's own folder tree that the spec may read from (e.g. a shared data folder named in data.folder); repeatable.",
         };
-        var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
+        var tables = new Option<string[]>("--tables", "-t")
         {
-            spec, data, output, formats, quiet, timestamp, controlCharacters, allowFolder,
+            Description = "Only these tables, by id or pattern ('14.2.*'), comma-separated or repeated; the other tables' files, results and manifest entries in --out are kept.",
+            AllowMultipleArgumentsPerToken = true,
+        };
+        var command = new Command("run", "Produce every table of a study spec: Word, Excel, results.json and manifest.json.")
+        {
+            spec, data, output, formats, quiet, timestamp, controlCharacters, allowFolder, tables,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -39,7 +44,15 @@ public static class RunCommand
                 return ExitCodes.Usage;
             }
             var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = dataOptions, AllowedFolders = parse.GetValue(allowFolder) ?? [] }, log);
+            var selected = parse.GetValue(tables);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers)
+            {
+                RunTime = runTime,
+                DataOptions = dataOptions,
+                AllowedFolders = parse.GetValue(allowFolder) ?? [],
+                CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
+                Tables = selected is { Length: > 0 } ? selected : null,
+            }, log);
             return ExitCodes.Success;
         }));
         return command;

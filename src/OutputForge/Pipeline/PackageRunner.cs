@@ -4,6 +4,8 @@ using OutputForge.Data;
 using OutputForge.Layout;
 using OutputForge.Rendering;
 using OutputForge.Spec;
+using OutputForge.Workflow;
+using OutputForge.Workflow.Manifest;
 
 namespace OutputForge.Pipeline;
 
@@ -27,18 +29,22 @@ public static class PackageRunner
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
-        var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text,
-            study.Data.Datasets.ToDictionary(d => d.Key, d => d.Value, StringComparer.Ordinal));
+        var inputs = RunInputs.Read(package, data);
+        var selected = TableSelection.Select(study, package.Tables, request.Tables);
+        var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames());
+        var manifestTables = new List<ManifestTable>();
         var page = PageFrom(study.Page);
         var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
         var laidOut = new List<(LaidOutTable Table, IReadOnlyList<string> Warnings)>();
-        foreach (var table in package.Tables)
+        foreach (var table in selected)
         {
             var result = TableAnalyses.For(table).Analyze(study, table, data);
             if (dataWarnings.Count > 0)
             {
                 result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
             }
+            manifestTables.Add(new ManifestTable(table.Id, inputs.ForTable(result.Provenance.SpecFile, result.Provenance.Datasets),
+                request.Renderers.Select(r => OutputFileNames.ForTable(table.Id, r.Extension)).ToList(), ManifestStaging.Timestamp(run.RunTime)));
             foreach (var warning in result.Warnings)
             {
                 log.Warning($"table {table.Id}: {warning}");
@@ -65,8 +71,13 @@ public static class PackageRunner
         }
         using (var stream = staging.Create(ResultsFileName))
         {
-            ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut);
+            var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
+            ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut, kept, package.Tables.Select(t => t.Id).ToList());
         }
+        var previous = request.Tables is not null && File.Exists(Path.Combine(request.OutputFolder, ManifestJson.FileName))
+            ? ManifestJson.Read(request.OutputFolder)
+            : null;
+        ManifestStaging.Write(staging, request, dataFolder, study.Study.Id, run.RunTime, inputs, manifestTables, previous);
         var files = staging.Commit();
         foreach (var (table, _) in laidOut)
         {

@@ -13,4 +13,10 @@ public sealed record RunRequest(string SpecPath, string? DataFolder, string Outp
 
     /// <summary>How datasets are read (e.g. what to do with control characters).</summary>
     public Data.DataReadOptions DataOptions { get; init; } = Data.DataReadOptions.Default;
+
+    /// <summary>The command line as given (recorded in manifest.json).</summary>
+    public IReadOnlyList<string> CommandLine { get; init; } = [];
+
+    /// <summary>Table ids or patterns to produce ("14.2.*"); null means every table of the package.</summary>
+    public IReadOnlyList<string>? Tables { get; init; }
 }

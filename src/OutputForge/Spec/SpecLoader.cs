@@ -16,10 +16,35 @@ public static class SpecLoader
     /// <summary>Loads the package; besides the study file's own folder tree, files may come from <paramref name="allowedFolders"/>.</summary>
     public static SpecPackage Load(string specPath, IReadOnlyList<string> allowedFolders)
     {
-        var studyFile = ResolveStudyFile(specPath);
-        var study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
-        var policy = new SpecFolderPolicy(Path.GetDirectoryName(Path.GetFullPath(studyFile))!, allowedFolders);
         var problems = new List<SpecProblem>();
+        var package = LoadCollecting(specPath, problems, allowedFolders);
+        if (problems.Count > 0)
+        {
+            throw new SpecException(problems);
+        }
+        return package!;
+    }
+
+    /// <summary>
+    /// Reads what can be read and adds every problem to <paramref name="problems"/> instead of
+    /// stopping: the study spec with the table specs that passed their schema, or null when the
+    /// study file itself cannot be used. For `check`, which reports everything at once.
+    /// </summary>
+    public static SpecPackage? LoadCollecting(string specPath, List<SpecProblem> problems, IReadOnlyList<string>? allowedFolders = null)
+    {
+        string studyFile;
+        StudySpec study;
+        try
+        {
+            studyFile = ResolveStudyFile(specPath);
+            study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
+        }
+        catch (SpecException e)
+        {
+            problems.AddRange(e.Problems);
+            return null;
+        }
+        var policy = new SpecFolderPolicy(Path.GetDirectoryName(Path.GetFullPath(studyFile))!, allowedFolders);
         var tables = new List<TableSpec>();
         var listed = new HashSet<string>(StringComparer.Ordinal);
         for (var i = 0; i < study.Tables.Count; i++)
@@ -52,10 +77,6 @@ public static class SpecLoader
         }
         problems.AddRange(CheckStudy(study));
         problems.AddRange(CheckReferences(study, tables));
-        if (problems.Count > 0)
-        {
-            throw new SpecException(problems);
-        }
         return new SpecPackage(study, tables, policy);
     }
 
@@ -96,6 +117,21 @@ public static class SpecLoader
             if (population.Order is not null && population.Treatment is null)
             {
                 yield return study.Source.Problem($"/populations/{name}/order", "'order' needs 'treatment' beside it");
+            }
+        }
+        if (study.Treatment.Arms is { } arms)
+        {
+            for (var i = 0; i < arms.Count; i++)
+            {
+                if (arms.FindIndex(a => a.Value == arms[i].Value) < i)
+                {
+                    yield return study.Source.Problem($"/treatment/arms/{i}/value", $"arm '{arms[i].Value}' is listed twice");
+                }
+            }
+            if (!arms.Exists(a => a.Value == study.Treatment.Control))
+            {
+                yield return study.Source.Problem("/treatment/control",
+                    $"control arm '{study.Treatment.Control}' is not one of the arms listed{NearestName.Hint(study.Treatment.Control, arms.Select(a => a.Value).ToList())}");
             }
         }
     }
