@@ -20,10 +20,11 @@ public static class DemoCommand
         };
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
+        var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, formats, quiet, timestamp,
+            output, subjects, formats, quiet, verbose, timestamp,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -33,7 +34,7 @@ public static class DemoCommand
                 return ExitCodes.Usage;
             }
             var root = parse.GetValue(output)!;
-            var log = new StderrRunLog(error, parse.GetValue(quiet));
+            var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
             var dataFolder = Path.Combine(root, "data");
             var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");

@@ -20,6 +20,7 @@ public static class RunCommand
         var output = CommonOptions.Output("Folder for the tables and results.json (created if needed; files of the same name are replaced only when the whole run succeeds).");
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
+        var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();
         var controlCharacters = CommonOptions.ControlCharacters();
         var allowFolder = new Option<string[]>("--allow-folder")
@@ -33,7 +34,7 @@ public static class RunCommand
         };
         var command = new Command("run", "Produce every table of a study spec: Word, Excel, results.json and manifest.json.")
         {
-            spec, data, output, formats, quiet, timestamp, controlCharacters, allowFolder, tables,
+            spec, data, output, formats, quiet, verbose, timestamp, controlCharacters, allowFolder, tables,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -43,7 +44,7 @@ public static class RunCommand
             {
                 return ExitCodes.Usage;
             }
-            var log = new StderrRunLog(error, parse.GetValue(quiet));
+            var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
             var selected = parse.GetValue(tables);
             PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers)
             {

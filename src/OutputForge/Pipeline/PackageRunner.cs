@@ -23,6 +23,7 @@ public static class PackageRunner
         using var outputLock = OutputLock.Acquire(request.OutputFolder);
         var package = SpecLoader.Load(request.SpecPath, request.AllowedFolders);
         var study = package.Study;
+        log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
         var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
         var dataWarnings = new List<string>();
         var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
@@ -32,39 +33,26 @@ public static class PackageRunner
         var inputs = RunInputs.Read(package, data);
         var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames());
-        var manifestTables = new List<ManifestTable>();
         var page = PageFrom(study.Page);
         var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
-        var laidOut = new List<(LaidOutTable Table, IReadOnlyList<string> Warnings)>();
-        foreach (var table in selected)
+        var building = Stopwatch.StartNew();
+        var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, log);
+        log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        var manifestTables = built.Select(b => b.Manifest).ToList();
+        var laidOut = built.Select(b => (b.Table, b.Warnings)).ToList();
+        foreach (var table in built)
         {
-            var result = TableAnalyses.For(table).Analyze(study, table, data);
-            if (dataWarnings.Count > 0)
+            foreach (var warning in table.Warnings)
             {
-                result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
+                log.Warning($"table {table.Table.Document.TableId}: {warning}");
             }
-            manifestTables.Add(new ManifestTable(table.Id, inputs.ForTable(result.Provenance.SpecFile, result.Provenance.Datasets),
-                request.Renderers.Select(r => OutputFileNames.ForTable(table.Id, r.Extension)).ToList(), ManifestStaging.Timestamp(run.RunTime)));
-            foreach (var warning in result.Warnings)
-            {
-                log.Warning($"table {table.Id}: {warning}");
-            }
-            laidOut.Add((TableLayoutBuilder.Build(result, studyLine, run, page), result.Warnings));
         }
 
         using var staging = new OutputStaging(request.OutputFolder);
-        foreach (var (table, _) in laidOut)
+        foreach (var table in built)
         {
-            foreach (var renderer in request.Renderers)
+            foreach (var (name, bytes) in table.Files)
             {
-                var name = OutputFileNames.ForTable(table.Document.TableId, renderer.Extension);
-                using var buffer = new MemoryStream();
-                renderer.Write(table.Document, buffer);
-                var bytes = buffer.ToArray();
-                if (PackageNormalizer.IsPackage(bytes))
-                {
-                    bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
-                }
                 using var stream = staging.Create(name);
                 stream.Write(bytes);
             }
@@ -86,6 +74,68 @@ public static class PackageRunner
         var warnings = laidOut.Sum(t => t.Warnings.Count);
         log.Info($"{laidOut.Count} table{(laidOut.Count == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}, {files.Count} files in {request.OutputFolder} ({clock.Elapsed.TotalSeconds:0.00} s)");
         return new RunSummary(files, laidOut.Count, warnings, clock.Elapsed);
+    }
+
+    /// <summary>One table analysed, laid out and rendered (to bytes, not yet written).</summary>
+    private sealed record BuiltTable(LaidOutTable Table, IReadOnlyList<string> Warnings, ManifestTable Manifest,
+        IReadOnlyList<(string Name, byte[] Bytes)> Files);
+
+    /// <summary>
+    /// Builds the tables in parallel (each reads the shared, immutable datasets) and returns them in
+    /// package order. When tables fail, the first failing table's error is the one reported, so the
+    /// message does not depend on thread timing.
+    /// </summary>
+    private static BuiltTable[] BuildTables(IReadOnlyList<TableSpec> selected, RunRequest request, StudySpec study, StudyData data,
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, IRunLog log)
+    {
+        var built = new BuiltTable[selected.Count];
+        var failures = new Exception?[selected.Count];
+        var done = 0;
+        Parallel.For(0, selected.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        {
+            try
+            {
+                var clock = Stopwatch.StartNew();
+                built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page);
+                log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms");
+            }
+            catch (Exception e)
+            {
+                failures[i] = e;
+            }
+            log.Progress(Interlocked.Increment(ref done), selected.Count, selected[i].Id);
+        });
+        if (failures.FirstOrDefault(f => f is not null) is { } failure)
+        {
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(failure).Throw();
+        }
+        return built;
+    }
+
+    private static BuiltTable BuildTable(TableSpec table, RunRequest request, StudySpec study, StudyData data,
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page)
+    {
+        var result = TableAnalyses.For(table).Analyze(study, table, data);
+        if (dataWarnings.Count > 0)
+        {
+            result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
+        }
+        var manifest = new ManifestTable(table.Id, inputs.ForTable(result.Provenance.SpecFile, result.Provenance.Datasets),
+            request.Renderers.Select(r => OutputFileNames.ForTable(table.Id, r.Extension)).ToList(), ManifestStaging.Timestamp(run.RunTime));
+        var laidOut = TableLayoutBuilder.Build(result, studyLine, run, page);
+        var files = new List<(string, byte[])>();
+        foreach (var renderer in request.Renderers)
+        {
+            using var buffer = new MemoryStream();
+            renderer.Write(laidOut.Document, buffer);
+            var bytes = buffer.ToArray();
+            if (PackageNormalizer.IsPackage(bytes))
+            {
+                bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
+            }
+            files.Add((OutputFileNames.ForTable(table.Id, renderer.Extension), bytes));
+        }
+        return new BuiltTable(laidOut, result.Warnings, manifest, files);
     }
 
     private static string DefaultDataFolder(SpecPackage package)
