@@ -32,7 +32,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         var control = selection.Control;
         var active = settings.Test == "fisher" ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
         var resultColumns = SummaryColumns.ToResultColumns(columns);
-        resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label} vs {control.Label} p-value [a]", null)));
+        resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value [a]", null)));
         var context = new RowContext(settings, columns, selection, active, control,
             settings.Severity?.Levels ?? [], resultColumns.Select(c => c.Key).ToList());
 
@@ -72,7 +72,12 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
 
         warnings.AddRange(context.Warnings.Distinct());
         warnings.AddRange(SummaryRows.NotEstimableWarnings(rows));
-        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, Notes(settings, selection, control, active.Count > 0),
+        var notes = Notes(settings, selection, control, active.Count > 0);
+        if (context.NeitherArmHasTheEvent)
+        {
+            notes.Insert(1, "Where neither arm of a comparison has the event, only one table fits the margins and the p-value is 1.");
+        }
+        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, notes,
             warnings, table.Footnotes, new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", settings.Dataset]),
             settings.Percent.Decimals, settings.PValueFloor, SummaryColumns.StyleOf(settings.Percent));
     }
@@ -137,7 +142,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         {
             notes.Add($"[a] Two-sided p-value from Fisher's exact test of each arm against {control.Label} (subjects with vs without the event), unstratified.");
         }
-        notes.Add($"N = number of subjects in the {selection.Label}; n (%) = subjects with at least one event, percentages of N. A subject is counted once per row, whatever the number of events.");
+        notes.Add($"N = number of subjects in each column ({selection.Label}); n (%) = subjects with at least one event, percentages of N. A subject is counted once per row, whatever the number of events.");
         if (settings.Events)
         {
             notes.Add("[E] = number of events.");
@@ -168,6 +173,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
     {
         public List<string> ColumnKeys { get; } = columnKeys;
         public List<string> Warnings { get; } = [];
+        public bool NeitherArmHasTheEvent { get; private set; }
 
         public IEnumerable<ResultRow> Rows(string key, string label, int indent, IReadOnlyCollection<AdverseEventRecord> records)
         {
@@ -182,7 +188,8 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             for (var level = 0; level < severities.Count; level++)
             {
                 var severity = severities[level];
-                yield return new ResultRow($"{key}/severity:{severity.Value}", severity.Label ?? severity.Value, indent + 1,
+                // A class's severity rows sit as deep as its terms' own, so that they do not read as terms.
+                yield return new ResultRow($"{key}/severity:{severity.Value}", severity.Label ?? severity.Value, key == AnyKey ? 1 : 2,
                     columns.Select(c => CountCells.CountPercent(c.Key, counts[c.Key].SubjectsAtMaximumSeverity[level], c.N, settings.Percent,
                         settings.Events ? counts[c.Key].EventsBySeverity[level] : null)).ToList());
             }
@@ -193,7 +200,16 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             var withEvent = counts[arm.Key].Subjects;
             var controlWithEvent = counts[control.Key].Subjects;
             var test = FisherExactTest.TwoByTwo(withEvent, selection.Count(arm) - withEvent, controlWithEvent, selection.Count(control) - controlWithEvent);
-            Warnings.AddRange(test.Notes.Select(n => $"{label}, {arm.Label} vs {control.Label}: {n}"));
+            if (withEvent + controlWithEvent == 0)
+            {
+                // Neither arm has the event (it occurs in another arm only): one table fits the margins and p is 1,
+                // which the method note states once rather than a warning per row.
+                NeitherArmHasTheEvent = true;
+            }
+            else
+            {
+                Warnings.AddRange(test.Notes.Select(n => $"{label}, {arm.Label} vs {control.Label}: {n}"));
+            }
             return CellFactory.PValueOf(PValueKey(arm), test);
         }
     }

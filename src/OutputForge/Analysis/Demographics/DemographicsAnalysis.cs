@@ -98,7 +98,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
         }
         var notes = new List<string>
         {
-            $"N = number of subjects in the {selection.Label}; percentages are of N. n = number of subjects with a value.",
+            $"N = number of subjects in each column ({selection.Label}); percentages are of N. n = number of subjects with a value.",
         };
         if (tested)
         {

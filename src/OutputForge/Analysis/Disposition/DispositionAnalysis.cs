@@ -64,7 +64,7 @@ public sealed class DispositionAnalysis : ITableAnalysis
         }
         var notes = new List<string>
         {
-            $"N = number of subjects in the {selection.Label}; percentages are of N.",
+            $"N = number of subjects in each column ({selection.Label}); percentages are of N.",
         };
         if (tested)
         {

@@ -53,7 +53,7 @@ public sealed class PopulationsAnalysis : ITableAnalysis
         }
         var notes = new List<string>
         {
-            $"N = number of subjects in the {selection.Label}; percentages are of N. Columns are the arms of {selection.TreatmentVariable}.",
+            $"N = number of subjects in each column ({selection.Label}); percentages are of N. Columns are the arms of {selection.TreatmentVariable}.",
         };
         var warnings = new List<string>(selection.Warnings);
         warnings.AddRange(SummaryRows.NotEstimableWarnings(rows));
