@@ -149,7 +149,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         }
         if (settings.Severity is { } severity)
         {
-            notes.Add($"Severity rows: each subject is counted once per row, at the maximum severity of its events in that row ({string.Join(" < ", severity.Levels.Select(l => l.Label ?? l.Value))}).");
+            notes.Add($"Severity rows: each subject is counted once per row, at the maximum severity of its events in that row ({string.Join(" < ", severity.Levels.Select(l => l.Label ?? l.Value))}){(settings.Events ? "; [E] is given on the rows above them only" : string.Empty)}.");
         }
         if (settings.Where is not null)
         {
@@ -190,8 +190,9 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
                 var severity = severities[level];
                 // A class's severity rows sit as deep as its terms' own, so that they do not read as terms.
                 yield return new ResultRow($"{key}/severity:{severity.Value}", severity.Label ?? severity.Value, key == AnyKey ? 1 : 2,
-                    columns.Select(c => CountCells.CountPercent(c.Key, counts[c.Key].SubjectsAtMaximumSeverity[level], c.N, settings.Percent,
-                        settings.Events ? counts[c.Key].EventsBySeverity[level] : null)).ToList());
+                    // No [E] here: a subject counted at its maximum severity may have events of other severities,
+                    // so an event count beside it would not describe the subjects counted.
+                    columns.Select(c => CountCells.CountPercent(c.Key, counts[c.Key].SubjectsAtMaximumSeverity[level], c.N, settings.Percent)).ToList());
             }
         }
 

@@ -7,7 +7,7 @@ namespace OutputForge.Analysis.AdverseEvents;
 /// event (each counted once, whatever the number of events), the number of events, and subjects by
 /// their maximum severity among the row's events.
 /// </summary>
-public sealed record AdverseEventCounts(int Subjects, int Events, IReadOnlyList<int> SubjectsAtMaximumSeverity, IReadOnlyList<int> EventsBySeverity)
+public sealed record AdverseEventCounts(int Subjects, int Events, IReadOnlyList<int> SubjectsAtMaximumSeverity)
 {
     public static AdverseEventCounts Of(IEnumerable<AdverseEventRecord> records, SummaryColumn column, int severityLevels)
     {
@@ -17,7 +17,6 @@ public sealed record AdverseEventCounts(int Subjects, int Events, IReadOnlyList<
         return new AdverseEventCounts(
             maximum.Count,
             inColumn.Count,
-            Enumerable.Range(0, levels).Select(level => maximum.Count(m => m == level)).ToList(),
-            Enumerable.Range(0, levels).Select(level => inColumn.Count(r => r.SeverityRank == level)).ToList());
+            Enumerable.Range(0, levels).Select(level => maximum.Count(m => m == level)).ToList());
     }
 }
