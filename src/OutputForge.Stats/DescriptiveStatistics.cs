@@ -1,110 +1,73 @@
+using MathNet.Numerics.Statistics;
+
 namespace OutputForge.Stats;
 
 /// <summary>
-/// n, mean, sample standard deviation (divisor n - 1), median, first and third quartiles, minimum
-/// and maximum of a sample. Values are taken as the decimals they were written as (see
-/// <see cref="ExactDecimal"/>): the mean and quantiles are then exact decimals, so a median that
-/// lies exactly on a rounding midpoint (40.25) stays on it. The SD uses two passes (deviations from
-/// the mean), which keeps its digits when the values share many leading digits.
+/// Descriptive statistics: n, mean, SD (divisor n - 1), median, Q1, Q3, minimum, maximum, geometric
+/// mean and coefficient of variation (100 SD / mean).
+/// <list type="bullet">
+/// <item>Mean and SD come from <see cref="CentralMoments"/> (exact decimal sums, or the corrected
+/// two-pass algorithm), so data with many constant leading digits keep their precision.</item>
+/// <item>The median is the middle value, or the average of the two middle values.</item>
+/// <item>Q1 and Q3 use a selectable MathNet <see cref="QuantileDefinition"/>. The default is
+/// <see cref="QuantileDefinition.R2"/> (alias SAS5): the empirical distribution function with
+/// averaging at discontinuities (Hyndman and Fan 1996, Am Stat 50:361-365, definition 2), which is
+/// the default of SAS PROC MEANS / UNIVARIATE (QNTLDEF = 5) and so what a second programmer in
+/// SAS reproduces. R's default is R7.</item>
+/// <item>Geometric mean exp(mean(ln x)) only when every value is positive; otherwise null with a note.</item>
+/// <item>CV% is null with a note when the mean is zero or the SD is unavailable.</item>
+/// </list>
+/// NaN or infinite values throw <see cref="ArgumentException"/>; missing values must be removed by the
+/// caller (the count n is then the number of non-missing values).
 /// </summary>
 public static class DescriptiveStatistics
 {
-    /// <summary>Summarizes <paramref name="values"/>; NaN values (missing) are not allowed: leave them out first.</summary>
-    public static DescriptiveSummary Compute(IReadOnlyList<double> values, QuantileMethod quantiles = QuantileMethod.HyndmanFan2)
+    public static DescriptiveSummary Compute(IReadOnlyList<double> values, QuantileDefinition quartileDefinition = QuantileDefinition.R2)
     {
         ArgumentNullException.ThrowIfNull(values);
-        if (values.Any(double.IsNaN))
+        if (values.Any(v => double.IsNaN(v) || double.IsInfinity(v)))
         {
-            throw new ArgumentException("The sample holds NaN; leave missing values out before summarizing.", nameof(values));
+            throw new ArgumentException("Values must be finite numbers; remove missing values before summarising.", nameof(values));
         }
         int n = values.Count;
         if (n == 0)
         {
-            return new DescriptiveSummary(0, null, null, null, null, null, null, null);
+            return new DescriptiveSummary(0, null, null, null, null, null, null, null, null, null) { Notes = ["No values."] };
         }
-        var exact = ExactDecimal.TryConvert(values);
-        if (exact is not null)
-        {
-            try
-            {
-                return FromDecimals(exact, quantiles);
-            }
-            catch (OverflowException)
-            {
-                // Squares beyond the decimal range: the double computation below is then the better one.
-            }
-        }
-        return FromDoubles(values, quantiles);
-    }
-
-    private static DescriptiveSummary FromDecimals(decimal[] values, QuantileMethod method)
-    {
-        var sorted = values.Order().ToArray();
-        int n = sorted.Length;
-        decimal mean = values.Sum() / n;
+        var notes = new List<string>();
+        var (mean, squares) = CentralMoments.Compute(values);
         double? sd = null;
-        if (n > 1)
+        if (n >= 2)
         {
-            decimal squares = 0m;
-            foreach (var value in values)
-            {
-                decimal deviation = value - mean;
-                squares += deviation * deviation;
-            }
-            sd = Math.Sqrt((double)(squares / (n - 1)));
+            sd = Math.Sqrt(squares / (n - 1));
         }
-        return new DescriptiveSummary(n, (double)mean, sd,
-            (double)Quantile(sorted, 0.5m, method), (double)Quantile(sorted, 0.25m, method), (double)Quantile(sorted, 0.75m, method),
-            (double)sorted[0], (double)sorted[^1]);
-    }
-
-    private static DescriptiveSummary FromDoubles(IReadOnlyList<double> values, QuantileMethod method)
-    {
-        var sorted = values.Order().ToArray();
-        int n = sorted.Length;
-        double mean = values.Sum() / n;
-        double? sd = n > 1 ? Math.Sqrt(values.Sum(v => (v - mean) * (v - mean)) / (n - 1)) : null;
-        return new DescriptiveSummary(n, mean, sd,
-            QuantileOfDoubles(sorted, 0.5, method), QuantileOfDoubles(sorted, 0.25, method), QuantileOfDoubles(sorted, 0.75, method),
-            sorted[0], sorted[^1]);
-    }
-
-    /// <summary>Hyndman and Fan (1996) types 2 and 7 on sorted values (order statistics x_1..x_n, here 0-based).</summary>
-    internal static decimal Quantile(decimal[] sorted, decimal p, QuantileMethod method)
-    {
-        int n = sorted.Length;
-        if (method == QuantileMethod.HyndmanFan7)
+        else
         {
-            decimal h = (n - 1) * p;
-            int low = (int)Math.Floor(h);
-            int high = Math.Min(low + 1, n - 1);
-            return sorted[low] + (h - low) * (sorted[high] - sorted[low]);
+            notes.Add("The standard deviation needs at least two values.");
         }
-        decimal np = n * p;
-        int j = (int)Math.Floor(np);
-        if (np > j)
+        var sorted = values.OrderBy(v => v).ToArray();
+        double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+        double q1 = SortedArrayStatistics.QuantileCustom(sorted, 0.25, quartileDefinition);
+        double q3 = SortedArrayStatistics.QuantileCustom(sorted, 0.75, quartileDefinition);
+        double? geometric = null;
+        if (sorted[0] > 0)
         {
-            return sorted[Math.Min(j, n - 1)];
+            var (logMean, _) = CentralMoments.Compute(values.Select(v => Math.Log(v)).ToArray());
+            geometric = Math.Exp(logMean);
         }
-        return j == 0 ? sorted[0] : (sorted[j - 1] + sorted[Math.Min(j, n - 1)]) / 2;
-    }
-
-    private static double QuantileOfDoubles(double[] sorted, double p, QuantileMethod method)
-    {
-        int n = sorted.Length;
-        if (method == QuantileMethod.HyndmanFan7)
+        else
         {
-            double h = (n - 1) * p;
-            int low = (int)Math.Floor(h);
-            int high = Math.Min(low + 1, n - 1);
-            return sorted[low] + (h - low) * (sorted[high] - sorted[low]);
+            notes.Add("The geometric mean needs every value to be positive.");
         }
-        double np = n * p;
-        int j = (int)Math.Floor(np);
-        if (np > j)
+        double? cv = null;
+        if (sd is not null && mean != 0)
         {
-            return sorted[Math.Min(j, n - 1)];
+            cv = 100 * sd.Value / mean;
         }
-        return j == 0 ? sorted[0] : (sorted[j - 1] + sorted[Math.Min(j, n - 1)]) / 2;
+        else if (sd is not null)
+        {
+            notes.Add("The coefficient of variation is undefined because the mean is zero.");
+        }
+        return new DescriptiveSummary(n, mean, sd, median, q1, q3, sorted[0], sorted[^1], geometric, cv) { Notes = notes };
     }
 }

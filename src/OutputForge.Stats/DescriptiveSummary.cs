@@ -1,8 +1,9 @@
 namespace OutputForge.Stats;
 
 /// <summary>
-/// The descriptive statistics of one sample. Statistics that need more observations than the
-/// sample has are null (the mean and quartiles of an empty sample, the SD of a single value).
+/// Descriptive statistics of one variable. A statistic that cannot be computed is null (never NaN)
+/// and <see cref="Notes"/> says why (for example the SD of a single value, or the geometric mean of
+/// data with non-positive values).
 /// </summary>
 public sealed record DescriptiveSummary(
     int N,
@@ -12,4 +13,9 @@ public sealed record DescriptiveSummary(
     double? FirstQuartile,
     double? ThirdQuartile,
     double? Minimum,
-    double? Maximum);
+    double? Maximum,
+    double? GeometricMean,
+    double? CoefficientOfVariationPercent)
+{
+    public IReadOnlyList<string> Notes { get; init; } = [];
+}

@@ -3,116 +3,98 @@ using MathNet.Numerics;
 namespace OutputForge.Stats;
 
 /// <summary>
-/// One-way analysis of variance F test of equal group means (Fisher 1925, Statistical Methods for
-/// Research Workers; Montgomery, Design and Analysis of Experiments, chapter 3):
-/// F = [SSB / (k - 1)] / [SSW / (N - k)]. Sums of squares are computed from the values as the
-/// decimals they were written as (exact sums, no cancellation), which is what NIST StRD's
-/// higher-difficulty datasets (13 constant leading digits) require. The p-value is the upper tail
-/// of the F distribution, I_x(df2/2, df1/2) with x = df2 / (df2 + df1 F), so small p-values keep their digits.
+/// One-way analysis of variance (Fisher 1925; any text, e.g. Montgomery, Design and Analysis of
+/// Experiments, chapter 3): SS_within = sum over groups of sum (y - group mean)^2, SS_between =
+/// sum n_g (group mean - grand mean)^2, df k - 1 and N - k, F = MS_between / MS_within, p from the
+/// F distribution's upper tail (Abramowitz and Stegun 26.6.2). Sums are formed as in <see cref="CentralMoments"/>, so the NIST StRD
+/// ANOVA data sets (SiRstv, SmLs01-09, AtmWtAg) are reproduced to their certified digits.
+/// Empty groups are dropped and reported; fewer than two non-empty groups, or no within-group degrees
+/// of freedom, make the table not estimable. A zero within-group sum of squares with a positive
+/// between-group one gives no finite F: not estimable, with that reason.
 /// </summary>
 public static class OneWayAnova
 {
-    public const string MethodName = "One-way ANOVA F test";
-
-    /// <summary>Groups with no values are left out (with a note); at least two non-empty groups and N above k are needed.</summary>
-    public static TestResult Test(IReadOnlyList<IReadOnlyList<double>> groups)
+    public static AnovaResult Compute(IReadOnlyList<IReadOnlyList<double>> groups)
     {
+        ArgumentNullException.ThrowIfNull(groups);
         var notes = new List<string>();
-        var kept = new List<IReadOnlyList<double>>();
-        for (int i = 0; i < groups.Count; i++)
+        var used = new List<IReadOnlyList<double>>();
+        for (int g = 0; g < groups.Count; g++)
         {
-            if (groups[i].Count == 0)
+            var values = groups[g] ?? throw new ArgumentException($"Group {g + 1} is missing.", nameof(groups));
+            if (values.Any(v => double.IsNaN(v) || double.IsInfinity(v)))
             {
-                notes.Add($"Group {i + 1} has no values and was left out of the analysis of variance.");
+                throw new ArgumentException($"Group {g + 1} contains a value that is not a finite number.", nameof(groups));
+            }
+            if (values.Count == 0)
+            {
+                notes.Add($"Group {g + 1} has no values and was left out.");
             }
             else
             {
-                kept.Add(groups[i]);
+                used.Add(values);
             }
         }
-        if (kept.Count < 2)
+        int k = used.Count;
+        int total = used.Sum(g => g.Count);
+        if (k < 2)
         {
-            return TestResult.NotEstimable(MethodName, "fewer than two groups have values") with { Notes = notes };
+            return AnovaResult.NotEstimable("fewer than two groups have values") with { Notes = notes };
         }
-        int total = kept.Sum(g => g.Count);
-        if (total <= kept.Count)
+        if (total - k < 1)
         {
-            return TestResult.NotEstimable(MethodName, "every group has a single value, so there is no within-group variation to test against") with { Notes = notes };
+            return AnovaResult.NotEstimable("no group has more than one value, so there is no within-group variation to test against") with { Notes = notes };
         }
-        var table = Compute(kept);
-        if (table.SumOfSquaresWithin == 0)
+        var (between, within) = SumsOfSquares(used);
+        int dfBetween = k - 1;
+        int dfWithin = total - k;
+        double msBetween = between / dfBetween;
+        double msWithin = within / dfWithin;
+        if (msWithin == 0)
         {
-            return TestResult.NotEstimable(MethodName, "the values do not vary within groups, so F is undefined") with { Notes = notes };
+            return AnovaResult.NotEstimable("every group is constant, so the within-group mean square is zero") with { Notes = notes };
         }
-        return table.ToTest(notes);
+        double f = msBetween / msWithin;
+        // Upper tail of F(d1, d2) as the regularized incomplete beta I_x(d2/2, d1/2), x = d2 / (d2 + d1 F),
+        // which keeps small p-values accurate (Abramowitz and Stegun 26.6.2).
+        double p = SpecialFunctions.BetaRegularized(dfWithin / 2.0, dfBetween / 2.0, dfWithin / (dfWithin + dfBetween * f));
+        double rSquared = between + within == 0 ? 0 : between / (between + within);
+        return new AnovaResult(dfBetween, dfWithin, between, within, msBetween, msWithin, f, p, rSquared, Math.Sqrt(msWithin)) { Notes = notes };
     }
 
-    /// <summary>The ANOVA table of non-empty groups (each with at least one value, N above the number of groups).</summary>
-    public static OneWayAnovaResult Compute(IReadOnlyList<IReadOnlyList<double>> groups)
+    /// <summary>Between- and within-group sums of squares, in decimal arithmetic when every group allows it.</summary>
+    private static (double Between, double Within) SumsOfSquares(List<IReadOnlyList<double>> groups)
     {
-        if (groups.Count < 2 || groups.Any(g => g.Count == 0) || groups.Sum(g => g.Count) <= groups.Count)
+        var all = groups.SelectMany(g => g).ToArray();
+        if (CentralMoments.TryExact(all, out decimal grand, out _))
         {
-            throw new ArgumentException("At least two non-empty groups and more values than groups are needed.", nameof(groups));
-        }
-        if (groups.Any(g => g.Any(double.IsNaN)))
-        {
-            throw new ArgumentException("A group holds NaN; leave missing values out first.", nameof(groups));
-        }
-        var exact = groups.Select(ExactDecimal.TryConvert).ToList();
-        var (between, within) = ExactSumsOfSquares(exact) ?? SumsOfSquares(groups);
-        int k = groups.Count;
-        int n = groups.Sum(g => g.Count);
-        int df1 = k - 1;
-        int df2 = n - k;
-        double msb = between / df1;
-        double msw = within / df2;
-        double f = msb / msw;
-        double p = within == 0 ? 0 : SpecialFunctions.BetaRegularized(df2 / 2.0, df1 / 2.0, df2 / (df2 + df1 * f));
-        return new OneWayAnovaResult(between, within, df1, df2, msb, msw, f, p, between / (between + within), Math.Sqrt(msw));
-    }
-
-    private static (double Between, double Within)? ExactSumsOfSquares(List<decimal[]?> groups)
-    {
-        if (groups.Any(g => g is null))
-        {
-            return null;
-        }
-        try
-        {
-            return SumsOfSquares(groups.Select(g => g!).ToList());
-        }
-        catch (OverflowException)
-        {
-            // Squares beyond the decimal range: the double computation is then the better one.
-            return null;
-        }
-    }
-
-    private static (double Between, double Within) SumsOfSquares(List<decimal[]> groups)
-    {
-        decimal grand = groups.Sum(g => g.Sum()) / groups.Sum(g => g.Length);
-        decimal between = 0m, within = 0m;
-        foreach (var group in groups)
-        {
-            decimal mean = group.Sum() / group.Length;
-            between += group.Length * (mean - grand) * (mean - grand);
-            foreach (var value in group)
+            decimal betweenExact = 0;
+            decimal withinExact = 0;
+            bool exact = true;
+            foreach (var g in groups)
             {
-                within += (value - mean) * (value - mean);
+                if (!CentralMoments.TryExact(g, out decimal mean, out decimal squares))
+                {
+                    exact = false;
+                    break;
+                }
+                decimal shift = mean - grand;
+                betweenExact += g.Count * shift * shift;
+                withinExact += squares;
+            }
+            if (exact)
+            {
+                return ((double)betweenExact, (double)withinExact);
             }
         }
-        return ((double)between, (double)within);
-    }
-
-    private static (double Between, double Within) SumsOfSquares(IReadOnlyList<IReadOnlyList<double>> groups)
-    {
-        double grand = groups.Sum(g => g.Sum()) / groups.Sum(g => g.Count);
-        double between = 0, within = 0;
-        foreach (var group in groups)
+        var (grandMean, _) = CentralMoments.Compute(all);
+        double between = 0;
+        double within = 0;
+        foreach (var g in groups)
         {
-            double mean = group.Average();
-            between += group.Count * (mean - grand) * (mean - grand);
-            within += group.Sum(v => (v - mean) * (v - mean));
+            var (mean, squares) = CentralMoments.Compute(g);
+            within += squares;
+            between += g.Count * (mean - grandMean) * (mean - grandMean);
         }
         return (between, within);
     }

@@ -82,6 +82,16 @@ public sealed class DemographicsAnalysisTests
     }
 
     [Fact]
+    public void A_median_on_a_decimal_midpoint_rounds_half_away_from_zero()
+    {
+        // Placebo weights 0.6 and 0.7: the median is 0.65, which shows as 0.7 with one decimal. Averaged in binary
+        // it would be 0.6499999999999999 (IEEE 754 double) and show as 0.6.
+        var adsl = SummaryStudy.Adsl.Replace(",F,60.5,", ",F,0.6,").Replace(",M,70.0,", ",M,0.7,");
+        using var study = new SummaryStudy(Table.Replace("\"label\": \"Weight\", \"missing\": true", "\"label\": \"Weight\", \"decimals\": { \"median\": 1 }"), adsl);
+        Assert.Equal("0.7", SummaryStudy.Displayed(study.Analyze(), "WEIGHTBL/median", "placebo"));
+    }
+
+    [Fact]
     public void Levels_follow_the_spec_list_and_unlisted_values_are_shown_with_a_warning()
     {
         using var study = new SummaryStudy(Table.Replace("\"label\": \"Sex\",", "\"label\": \"Sex\", \"levels\": [ { \"value\": \"M\", \"label\": \"Male\" }, { \"value\": \"U\" } ],"));

@@ -3,6 +3,7 @@ using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;
 using OutputForge.Stats;
+using QuantileDefinition = MathNet.Numerics.Statistics.QuantileDefinition;
 using static OutputForge.Results.StatisticNames;
 
 namespace OutputForge.Analysis.Demographics;
@@ -28,8 +29,9 @@ public static class ContinuousSummary
             warnings.Add($"{column.Name} is written with up to {dataDecimals} decimals; {StatisticDecimals.DetectionCap} are assumed (set \"dataDecimals\" to say how it was collected).");
             dataDecimals = StatisticDecimals.DetectionCap;
         }
-        var quantiles = settings.Quartiles == "hyndman-fan-7" ? QuantileMethod.HyndmanFan7 : QuantileMethod.HyndmanFan2;
-        var summaries = columns.ToDictionary(c => c.Key, c => DescriptiveStatistics.Compute(
+        // Hyndman-Fan definition 2 is SAS's default (QNTLDEF=5), definition 7 R's.
+        var quantiles = settings.Quartiles == "hyndman-fan-7" ? QuantileDefinition.R7 : QuantileDefinition.R2;
+        var summaries = columns.ToDictionary(c => c.Key, c => Summarize(
             subjects.Where(s => c.Holds(s.Arm) && !double.IsNaN(column.GetNumber(s.Row))).Select(s => column.GetNumber(s.Row)).ToList(),
             quantiles));
 
@@ -47,6 +49,23 @@ public static class ContinuousSummary
         var armValues = arms.Select(a => (IReadOnlyList<double>)subjects
             .Where(s => s.Arm == a && !double.IsNaN(column.GetNumber(s.Row))).Select(s => column.GetNumber(s.Row)).ToList()).ToList();
         return (rows, armValues, warnings);
+    }
+
+    /// <summary>
+    /// The descriptive statistics, with the median and quartiles taken on exact decimals, so that one
+    /// lying on a rounding midpoint (0.65 from 0.6 and 0.7) displays as it should.
+    /// </summary>
+    private static DescriptiveSummary Summarize(List<double> values, QuantileDefinition quantiles)
+    {
+        var summary = DescriptiveStatistics.Compute(values, quantiles);
+        return values.Count == 0
+            ? summary
+            : summary with
+            {
+                Median = ExactQuantiles.Median(values),
+                FirstQuartile = ExactQuantiles.Quantile(values, 0.25m, quantiles),
+                ThirdQuartile = ExactQuantiles.Quantile(values, 0.75m, quantiles),
+            };
     }
 
     private static StatisticValue Value(string name, DescriptiveSummary summary, int decimals)

@@ -20,6 +20,15 @@ public sealed class DemographicsAnalysis : ITableAnalysis
 
     public string Kind => "demographics";
 
+    /// <summary>The one-way ANOVA F test across the arms, as a test result (its degrees of freedom are the numerator's).</summary>
+    private static TestResult AnovaTest(IReadOnlyList<IReadOnlyList<double>> arms)
+    {
+        var anova = OneWayAnova.Compute(arms);
+        return anova.IsEstimable
+            ? new TestResult(AnovaResult.MethodName, anova.FStatistic, anova.BetweenDegreesOfFreedom, anova.PValue) { Notes = anova.Notes }
+            : TestResult.NotEstimable(AnovaResult.MethodName, anova.NotEstimableReason!) with { Notes = anova.Notes };
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var settings = table.Demographics!;
@@ -63,7 +72,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 warnings.AddRange(continuousWarnings.Select(w => $"{label}: {w}"));
                 if (spec.Test == "anova")
                 {
-                    test = OneWayAnova.Test(armValues);
+                    test = AnovaTest(armValues);
                     warnings.AddRange(test.Notes.Select(n => $"{label}: {n}"));
                     if (!test.IsEstimable)
                     {

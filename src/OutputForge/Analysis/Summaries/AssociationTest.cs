@@ -16,7 +16,7 @@ public static class AssociationTest
         TestResult test;
         if (choice == "fisher")
         {
-            test = FisherExactRxC.Compute(table);
+            test = FisherExactTest.Compute(table);
         }
         else
         {
