@@ -59,4 +59,12 @@ public sealed class PopulationsAnalysisTests
         using var study = new SummaryStudy(Table.Replace("{ \"population\": \"itt\" }", "{ \"population\": \"itt\", \"where\": \"AGE > 40\" }"));
         Assert.Throws<OutputForge.Spec.SpecException>(study.Analyze);
     }
+
+    [Fact]
+    public void A_kind_without_its_settings_is_refused_by_the_schema()
+    {
+        using var study = new SummaryStudy("""{ "id": "1", "title": ["x"], "population": "itt", "kind": "populations" }""");
+        var error = Assert.Throws<OutputForge.Spec.SpecException>(study.Analyze);
+        Assert.Contains("populations", error.Message);
+    }
 }
