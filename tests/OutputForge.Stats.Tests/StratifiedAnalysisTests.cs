@@ -1,7 +1,7 @@
 namespace OutputForge.Stats.Tests;
 
 /// <summary>
-/// 2 x 2 x K methods against R 4.2.2 mantelhaen.test and statsmodels 0.13.5 StratifiedTable (values in
+/// 2 x 2 x K methods against R 4.2.2 mantelhaen.test, the R package epiR 2.0.57 and statsmodels 0.13.5 StratifiedTable (values in
 /// Oracles/ratio_strata_oracles.json). The "rabbits" data are the penicillin example of Agresti (1990,
 /// Categorical Data Analysis, pp. 231-237) from R's mantelhaen.test documentation, whose corrected test
 /// gives p = 0.047 there.
@@ -48,6 +48,23 @@ public class StratifiedAnalysisTests
     {
         var result = MantelHaenszelRelativeRisk.Compute(ReferenceOracles.Strata(set));
         Assert.Equal(Oracle(set).GetProperty("statsmodels").GetProperty("rr").GetDouble(), result.Estimate, 1e-12);
+    }
+
+    /// <summary>epiR 2.0.57 epi.2by2: RR.mh.wald (Greenland-Robins variance) and ARisk.mh.sato (Sato variance).</summary>
+    [Theory]
+    [MemberData(nameof(Sets))]
+    public void RelativeRiskAndRiskDifferenceIntervalsMatchEpiR(string set)
+    {
+        var strata = ReferenceOracles.Strata(set);
+        var epir = Oracle(set).GetProperty("epir");
+        var rr = MantelHaenszelRelativeRisk.Compute(strata);
+        Assert.Equal(epir.GetProperty("rr").GetDouble(), rr.Estimate, 1e-12);
+        Assert.Equal(epir.GetProperty("rr_lower").GetDouble(), rr.Lower, 1e-10);
+        Assert.Equal(epir.GetProperty("rr_upper").GetDouble(), rr.Upper, 1e-10);
+        var rd = MantelHaenszelRiskDifference.Compute(strata);
+        Assert.Equal(epir.GetProperty("rd").GetDouble(), rd.Estimate, 1e-12);
+        Assert.Equal(epir.GetProperty("rd_lower").GetDouble(), rd.Lower, 1e-10);
+        Assert.Equal(epir.GetProperty("rd_upper").GetDouble(), rd.Upper, 1e-10);
     }
 
     [Theory]

@@ -11,6 +11,8 @@ It writes tests/OutputForge.Stats.Tests/Oracles/ratio_strata_oracles.json with
   statsmodels StratifiedTable (test_null_odds, oddsratio_pooled_confint, riskratio_pooled,
   test_equal_odds with and without Tarone's adjustment, on the strata that have both events and
   non-events),
+- the R package epiR's epi.2by2 (Mantel-Haenszel relative risk with the Greenland-Robins interval,
+  RR.mh.wald, and Mantel-Haenszel risk difference with Sato's variance, ARisk.mh.sato),
 and the library versions. Strata are written as (events1, total1, events2, total2). The "rabbits"
 set is the penicillin example of Agresti (1990, Categorical Data Analysis, pp. 231-237) used in R's
 mantelhaen.test documentation; the others are invented for the tests.
@@ -57,6 +59,22 @@ def r_mantelhaen(strata):
     return plain, corrected, out[2].strip()
 
 
+def r_epir(strata):
+    cells = []
+    for e1, n1, e2, n2 in strata:
+        cells += [e1, e2, n1 - e1, n2 - e2]
+    arr = f"array(c({', '.join(str(c) for c in cells)}), dim = c(2, 2, {len(strata)}))"
+    script = (
+        "suppressMessages(library(epiR)); "
+        f"r <- epi.2by2(as.table({arr}), method = 'cohort.count', units = 1)$massoc.detail; "
+        "cat(sprintf('%.17g ', c(unlist(r$RR.mh.wald), unlist(r$ARisk.mh.sato))), '\n'); "
+        "cat(as.character(packageVersion('epiR')), '\n')"
+    )
+    out = subprocess.run(["Rscript", "-e", script], check=True, capture_output=True, text=True).stdout.strip().splitlines()
+    values = [float(v) for v in out[0].split()]
+    return values, out[1].strip()
+
+
 def main():
     two = []
     for e1, n1, e2, n2 in TWO_GROUPS:
@@ -71,6 +89,7 @@ def main():
     for name, rows in STRATA.items():
         r_rows = [s for s in rows if s[1] + s[3] >= 2]
         plain, corrected, r_version = r_mantelhaen(r_rows)
+        epir, epir_version = r_epir(r_rows)
         st = StratifiedTable([table(s) for s in rows])
         null_plain = st.test_null_odds(correction=False)
         null_corr = st.test_null_odds(correction=True)
@@ -84,6 +103,8 @@ def main():
             "strata": [list(s) for s in rows],
             "r_cmh": {"statistic": plain[0], "p": plain[1], "or": plain[2], "or_lower": plain[3], "or_upper": plain[4]},
             "r_cmh_corrected": {"statistic": corrected[0], "p": corrected[1]},
+            "epir": {"rr": epir[0], "rr_lower": epir[1], "rr_upper": epir[2],
+                     "rd": epir[3], "rd_lower": epir[4], "rd_upper": epir[5]},
             "statsmodels": {
                 "cmh_statistic": float(null_plain.statistic), "cmh_p": float(null_plain.pvalue),
                 "cmh_corrected_statistic": float(null_corr.statistic), "cmh_corrected_p": float(null_corr.pvalue),
@@ -96,7 +117,7 @@ def main():
     result = {
         "generator": "tests/OutputForge.Stats.Tests/Oracles/generate_ratio_strata_oracles.py",
         "versions": {"scipy": scipy.__version__, "statsmodels": statsmodels.__version__,
-                     "numpy": numpy.__version__, "R": r_version},
+                     "numpy": numpy.__version__, "R": r_version, "epiR": epir_version},
         "two_groups": two,
         "strata": strata,
     }
