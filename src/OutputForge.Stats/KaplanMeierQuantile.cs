@@ -3,8 +3,8 @@ namespace OutputForge.Stats;
 /// <summary>
 /// A quantile of the Kaplan-Meier curve (the median for p = 0.5) with the Brookmeyer-Crowley
 /// confidence interval (Brookmeyer and Crowley, Biometrics 38, 1982): the interval is read off the
-/// pointwise log-log confidence curves, its lower bound as the time the upper curve reaches 1 - p and
-/// its upper bound as the time the lower curve does. Ties follow R survival 3.x (quantile.survfit):
+/// pointwise log-log confidence curves, its lower bound as the time the lower curve falls to 1 - p and
+/// its upper bound as the time the upper curve does. Ties follow R survival 3.x (quantile.survfit):
 /// where a curve equals 1 - p on a flat stretch, the quantile is the midpoint of that stretch; where
 /// it stays exactly at 1 - p to the end, the midpoint with the last observed time. A quantile the
 /// curve never reaches is not estimable (NE).
@@ -23,8 +23,8 @@ public sealed record KaplanMeierQuantile(double Probability, double? Estimate, d
         var times = curve.Steps.Select(s => s.Time).ToList();
         return new KaplanMeierQuantile(probability,
             Find(times, curve.Steps.Select(s => s.Survival).ToList(), probability, curve.LastTime),
-            Find(times, curve.Steps.Select(s => s.Upper).ToList(), probability, curve.LastTime),
-            Find(times, curve.Steps.Select(s => s.Lower).ToList(), probability, curve.LastTime));
+            Find(times, curve.Steps.Select(s => s.Lower).ToList(), probability, curve.LastTime),
+            Find(times, curve.Steps.Select(s => s.Upper).ToList(), probability, curve.LastTime));
     }
 
     /// <summary>
