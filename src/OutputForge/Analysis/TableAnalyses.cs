@@ -9,6 +9,7 @@ public static class TableAnalyses
     private static readonly Dictionary<string, ITableAnalysis> ByKind = new ITableAnalysis[]
     {
         new ResponderAnalysis(),
+        new Continuous.ContinuousAnalysis(),
     }.ToDictionary(a => a.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;
