@@ -10,6 +10,7 @@ public static class TableAnalyses
     {
         new ResponderAnalysis(),
         new Continuous.ContinuousAnalysis(),
+        new TimeToEvent.TimeToEventAnalysis(),
     }.ToDictionary(a => a.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;
