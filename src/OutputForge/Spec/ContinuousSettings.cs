@@ -10,8 +10,12 @@ public sealed class ContinuousSettings
     public required List<string> Visits { get; init; }
 
     public string Value { get; init; } = "AVAL";
-    public string Baseline { get; init; } = "BASE";
-    public string Change { get; init; } = "CHG";
+
+    /// <summary>Baseline variable; null (JSON null) for an endpoint without a baseline, which drops the baseline block.</summary>
+    public string? Baseline { get; init; } = "BASE";
+
+    /// <summary>Change variable, the model's response; null drops the change block and the model analyses the value.</summary>
+    public string? Change { get; init; } = "CHG";
 
     /// <summary>Decimals of the data as collected; means and medians get one more, SDs and SEs two more.</summary>
     public int Decimals { get; init; } = 1;

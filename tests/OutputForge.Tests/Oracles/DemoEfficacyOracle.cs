@@ -11,13 +11,14 @@ namespace OutputForge.Tests.Oracles;
 /// </summary>
 internal static class DemoEfficacyOracle
 {
-    private static readonly Lazy<JsonDocument> Document = new(() => JsonDocument.Parse(File.ReadAllText(
-        Path.Combine(RepositoryRoot.Path, "tests", "OutputForge.Tests", "Oracles", "demo_efficacy_oracles.json"))));
+    public static IEnumerable<JsonElement> Records(string file, string table)
+    {
+        using var document = JsonDocument.Parse(File.ReadAllText(Path.Combine(RepositoryRoot.Path, "tests", "OutputForge.Tests", "Oracles", file)));
+        return document.RootElement.GetProperty("records").EnumerateArray()
+            .Where(r => r.GetProperty("table").GetString() == table).Select(r => r.Clone()).ToList();
+    }
 
-    public static IEnumerable<JsonElement> Records(string table) =>
-        Document.Value.RootElement.GetProperty("records").EnumerateArray().Where(r => r.GetProperty("table").GetString() == table);
-
-    /// <summary>Every reference value of <paramref name="table"/> agrees with results.json (null = not estimable on both sides).</summary>
+    /// <summary>Every reference value of <paramref name="table"/> agrees with the run's results.json.</summary>
     public static void AssertAgrees(DemoRunFixture demo, string table, double relative)
     {
         using var json = JsonDocument.Parse(File.ReadAllText(demo.Output("results.json")));
@@ -25,11 +26,24 @@ internal static class DemoEfficacyOracle
             .Where(r => r.GetProperty("table").GetString() == table)
             .ToDictionary(r => (r.GetProperty("row").GetString()!, r.GetProperty("column").GetString()!, r.GetProperty("statistic").GetString()!),
                 r => r.GetProperty("value").ValueKind == JsonValueKind.Null ? (double?)null : r.GetProperty("value").GetDouble());
+        AssertAgrees(actual, Records("demo_efficacy_oracles.json", table), relative);
+    }
+
+    /// <summary>Every reference value agrees with the table's own values (null = not estimable on both sides).</summary>
+    public static void AssertAgrees(OutputForge.Results.TableResult result, string file, string table, double relative)
+    {
+        var actual = result.Rows.SelectMany(r => r.Cells.SelectMany(c => c.Values.Select(v => (Key: (r.Key, c.Column, v.Statistic), v.Value))))
+            .ToDictionary(p => p.Key, p => p.Value);
+        AssertAgrees(actual, Records(file, table), relative);
+    }
+
+    private static void AssertAgrees(Dictionary<(string, string, string), double?> actual, IEnumerable<JsonElement> records, double relative)
+    {
         var checkedCount = 0;
-        foreach (var expected in Records(table))
+        foreach (var expected in records)
         {
             var key = (expected.GetProperty("row").GetString()!, expected.GetProperty("column").GetString()!, expected.GetProperty("statistic").GetString()!);
-            Assert.True(actual.TryGetValue(key, out var value), $"results.json of {table} has no record {key}");
+            Assert.True(actual.TryGetValue(key, out var value), $"the table has no value {key}");
             var want = expected.GetProperty("value");
             if (want.ValueKind == JsonValueKind.Null)
             {
@@ -44,6 +58,6 @@ internal static class DemoEfficacyOracle
             }
             checkedCount++;
         }
-        Assert.True(checkedCount > 20, $"only {checkedCount} reference values for {table}");
+        Assert.True(checkedCount > 20, $"only {checkedCount} reference values");
     }
 }

@@ -5,6 +5,9 @@
 #   Rscript tests/OutputForge.Tests/Oracles/generate_demo_efficacy_oracles.R <folder>/data
 # Writes tests/OutputForge.Tests/Oracles/demo_efficacy_oracles.json: records keyed like results.json
 # (table, row, column, statistic, value). The data are pinned by SHA-256 in DemoStudyFingerprintTests.
+# When ../shared/data/cdiscpilot01/csv is present it also writes pilot_efficacy_oracles.json, the same
+# computations on the CDISC pilot study (CIBIC+ at Week 24; time to first dermatologic event): values
+# only, the pilot data are never copied into the repository.
 library(survival)
 args <- commandArgs(trailingOnly = TRUE)
 data <- args[1]
@@ -104,6 +107,55 @@ tte <- function(table, param, times, stratified, ties, cumulative) {
 tte("14.2.3.1", "TTRESP", c(29, 57, 85), TRUE, "efron", TRUE)
 tte("14.2.3.2", "TTDISC", c(28, 56, 84), FALSE, "breslow", FALSE)
 
-json <- paste0("{\n\"versions\": {\"R\": \"", R.version.string, "\", \"survival\": \"", as.character(packageVersion("survival")),
-               "\"},\n\"records\": [\n", paste(records, collapse = ",\n"), "\n]\n}\n")
-writeLines(json, "tests/OutputForge.Tests/Oracles/demo_efficacy_oracles.json")
+write_records <- function(file) {
+  json <- paste0("{\n\"versions\": {\"R\": \"", R.version.string, "\", \"survival\": \"", as.character(packageVersion("survival")),
+                 "\"},\n\"records\": [\n", paste(records, collapse = ",\n"), "\n]\n}\n")
+  writeLines(json, file.path("tests/OutputForge.Tests/Oracles", file))
+  records <<- character(0)
+}
+write_records("demo_efficacy_oracles.json")
+
+pilot <- "../shared/data/cdiscpilot01/csv"
+if (file.exists(file.path(pilot, "adqscibc.csv"))) {
+  padsl <- read.csv(file.path(pilot, "adsl.csv"), stringsAsFactors = FALSE, na.strings = "")
+  arms <- c("Placebo", "Xanomeline Low Dose", "Xanomeline High Dose")
+  keys <- c("placebo", "xanomeline-low-dose", "xanomeline-high-dose")
+  # CIBIC+ at Week 24 (ANL01FL = Y, LOCF rows included as the dataset flags them), efficacy population,
+  # ANCOVA of AVAL with treatment and pooled site group SITEGR1, dose-response with TRT01PN.
+  cibic <- read.csv(file.path(pilot, "adqscibc.csv"), stringsAsFactors = FALSE, na.strings = "")
+  c24 <- cibic[cibic$PARAMCD == "CIBICVAL" & cibic$ANL01FL %in% "Y" & cibic$AVISIT == "Week 24", c("USUBJID", "AVAL", "SITEGR1")]
+  c24 <- merge(c24, padsl[padsl$EFFFL == "Y", c("USUBJID", "TRT01P", "TRT01PN")], by = "USUBJID")
+  for (i in seq_along(arms)) {
+    x <- c24$AVAL[c24$TRT01P == arms[i]]; x <- x[!is.na(x)]
+    add("pilot-cibic", "week-24-value-n", keys[i], "n", length(x))
+    add("pilot-cibic", "week-24-value-mean", keys[i], "mean", mean(x))
+    add("pilot-cibic", "week-24-value-mean", keys[i], "sd", sd(x))
+    add("pilot-cibic", "week-24-value-median", keys[i], "median", median(x))
+  }
+  c24 <- c24[!is.na(c24$AVAL), ]
+  c24$TRT <- factor(c24$TRT01P, levels = arms); c24$SG <- factor(c24$SITEGR1)
+  fit <- lm(AVAL ~ TRT + SG, data = c24)
+  b <- coef(fit); V <- vcov(fit); df <- fit$df.residual; q <- qt(0.975, df); k <- nlevels(c24$SG)
+  lsv <- function(arm) c(1, arm == arms[2], arm == arms[3], rep(1 / k, k - 1))
+  for (i in seq_along(arms)) {
+    cv <- lsv(arms[i]); est <- sum(cv * b); se <- sqrt(drop(t(cv) %*% V %*% cv))
+    add("pilot-cibic", "week-24-lsmean", keys[i], "estimate", est); add("pilot-cibic", "week-24-lsmean", keys[i], "se", se)
+  }
+  for (i in 2:3) {
+    cv <- lsv(arms[i]) - lsv(arms[1]); est <- sum(cv * b); se <- sqrt(drop(t(cv) %*% V %*% cv))
+    add("pilot-cibic", "week-24-lsdiff", keys[i], "estimate", est); add("pilot-cibic", "week-24-lsdiff", keys[i], "se", se)
+    add("pilot-cibic", "week-24-lsdiff-ci", keys[i], "lower", est - q * se); add("pilot-cibic", "week-24-lsdiff-ci", keys[i], "upper", est + q * se)
+    add("pilot-cibic", "week-24-lsdiff-p-value", keys[i], "pValue", 2 * pt(-abs(est / se), df))
+  }
+  dfit <- summary(lm(AVAL ~ TRT01PN + SG, data = c24))$coefficients
+  add("pilot-cibic", "week-24-dose-response", "placebo", "estimate", dfit["TRT01PN", 1])
+  add("pilot-cibic", "week-24-dose-response", "placebo", "pValue", dfit["TRT01PN", 4])
+
+  # Time to first dermatologic event (TTDE), safety population by actual treatment (TRT01A), Efron ties.
+  # tte() reads the globals adtte, itt (subjects with their arm in TRT01P), arms and keys.
+  adtte <- read.csv(file.path(pilot, "adtte.csv"), stringsAsFactors = FALSE, na.strings = "")
+  safety <- padsl[padsl$SAFFL == "Y", ]
+  itt <- data.frame(USUBJID = safety$USUBJID, TRT01P = safety$TRT01A, stringsAsFactors = FALSE)
+  tte("pilot-ttde", "TTDE", c(30, 60, 90, 180), FALSE, "efron", FALSE)
+  write_records("pilot_efficacy_oracles.json")
+}

@@ -28,8 +28,10 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         var records = VisitRecords.Select(table, data);
         var dataset = records.Dataset;
         var value = RecordVariable.Find(settings.Value, dataset, data, table.Source, "/continuous/value");
-        var baseline = RecordVariable.Find(settings.Baseline, dataset, data, table.Source, "/continuous/baseline");
-        var change = RecordVariable.Find(settings.Change, dataset, data, table.Source, "/continuous/change");
+        var baseline = settings.Baseline is null ? null : RecordVariable.Find(settings.Baseline, dataset, data, table.Source, "/continuous/baseline");
+        var change = settings.Change is null ? null : RecordVariable.Find(settings.Change, dataset, data, table.Source, "/continuous/change");
+        // The model analyses the change from baseline, or the value itself for an endpoint without a baseline.
+        var response = change ?? value;
         var model = settings.Model;
         var covariates = model?.Covariates.Select((c, i) => RecordVariable.Find(c, dataset, data, table.Source, $"/continuous/model/covariates/{i}")).ToList() ?? [];
         var factors = model?.Factors.Select((f, i) => RecordVariable.Find(f, dataset, data, table.Source, $"/continuous/model/factors/{i}")).ToList() ?? [];
@@ -55,19 +57,25 @@ public sealed class ContinuousAnalysis : ITableAnalysis
                 .OrderBy(s => s.Row)
                 .ToList());
             rows.Add(Section(visitKey, visit, columns));
-            AddSummary(rows, $"{visitKey}-baseline", "Baseline", baseline, subjectsOf, columns, d);
+            if (baseline is not null)
+            {
+                AddSummary(rows, $"{visitKey}-baseline", "Baseline", baseline, subjectsOf, columns, d);
+            }
             AddSummary(rows, $"{visitKey}-value", $"Value at {visit}", value, subjectsOf, columns, d);
-            AddSummary(rows, $"{visitKey}-change", "Change from baseline", change, subjectsOf, columns, d);
+            if (change is not null)
+            {
+                AddSummary(rows, $"{visitKey}-change", "Change from baseline", change, subjectsOf, columns, d);
+            }
 
             if (modelVisits.Contains(visit))
             {
                 var candidates = subjectsOf.SelectMany(p => p.Value
-                        .Select(s => new ModelObservation(s.Subject, p.Key, s.Row, change.Number(s.Row, s.Subject))))
+                        .Select(s => new ModelObservation(s.Subject, p.Key, s.Row, response.Number(s.Row, s.Subject))))
                     .Where(o => double.IsFinite(o.Response))
                     .ToList();
                 var ancova = ContinuousAncova.Fit(selection.Arms, candidates, covariates, factors, dose, pairs, statistics.Level);
                 modelled.Add((visit, ancova));
-                AddModelRows(rows, visitKey, ancova, columns, selection, d, level);
+                AddModelRows(rows, visitKey, ancova, columns, selection, d, level, change is null ? "value" : "change from baseline");
                 if (ancova.NotEstimableReason is not null)
                 {
                     warnings.Add($"{visit}: the ANCOVA could not be fitted: {ancova.NotEstimableReason}.");
@@ -78,7 +86,7 @@ public sealed class ContinuousAnalysis : ITableAnalysis
                 }
                 foreach (var arm in selection.Arms.Where(a => ancova.CountInModel[a] == 0 && ancova.NotEstimableReason is null))
                 {
-                    warnings.Add($"{visit}: no subject of {arm.Label} has the change from baseline and all model covariates; it has no LS mean.");
+                    warnings.Add($"{visit}: no subject of {arm.Label} has {response.Name} and all model covariates; it has no LS mean.");
                 }
             }
             rows.Add(Blank(visitKey, columns));
@@ -87,11 +95,11 @@ public sealed class ContinuousAnalysis : ITableAnalysis
 
         var notes = new List<string>
         {
-            $"N = number of subjects in the {selection.Label}; n = subjects with a value. Baseline, value and change are summarized over subjects with a record at the visit.",
+            $"N = number of subjects in the {selection.Label}; n = subjects with a value. Values are summarized over the subjects with a record at the visit.",
         };
         if (model is not null)
         {
-            notes.Add("[a] " + ModelNote(model, settings, level, control, modelled));
+            notes.Add("[a] " + ModelNote(model, response.Name, level, control, modelled));
             if (dose is not null)
             {
                 notes.Add($"[b] Dose-response test: the same model with treatment entered as the number {dose.Name} instead of a factor; two-sided t test of its slope (slope per unit of {dose.Name} kept in results.json).");
@@ -135,11 +143,11 @@ public sealed class ContinuousAnalysis : ITableAnalysis
     }
 
     private static void AddModelRows(List<ResultRow> rows, string visitKey, ContinuousAncova ancova, IReadOnlyList<ResultColumn> columns,
-        PopulationSelection selection, int d, string level)
+        PopulationSelection selection, int d, string level, string analysed)
     {
         var armOfColumn = selection.Arms.ToDictionary(a => a.Key);
         var control = selection.Control;
-        rows.Add(new ResultRow($"{visitKey}-ancova", "ANCOVA of change from baseline [a]", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
+        rows.Add(new ResultRow($"{visitKey}-ancova", $"ANCOVA of {analysed} [a]", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
         rows.Add(new ResultRow($"{visitKey}-model-n", "n in model", 2,
             columns.Select(c => CellFactory.Count(c.Key, ancova.CountInModel[armOfColumn[c.Key]])).ToList()));
         rows.Add(new ResultRow($"{visitKey}-lsmean", "LS mean (SE)", 2, columns.Select(c =>
@@ -216,7 +224,7 @@ public sealed class ContinuousAnalysis : ITableAnalysis
                 pattern.Contains("{pValue}") ? ValueFormat.PValue : ValueFormat.Decimal, reason),
         ]);
 
-    private static string ModelNote(ContinuousModelSettings model, ContinuousSettings settings, string level, TreatmentArm control,
+    private static string ModelNote(ContinuousModelSettings model, string response, string level, TreatmentArm control,
         IReadOnlyList<(string Visit, ContinuousAncova Ancova)> modelled)
     {
         var terms = new List<string> { "treatment (factor)" };
@@ -226,10 +234,10 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         var balance = model.Factors.Count > 0
             ? $"LS means at the observed mean of {(model.Covariates.Count > 0 ? string.Join(", ", model.Covariates) : "no covariate")} with the levels of {string.Join(", ", model.Factors)} weighted equally"
             : model.Covariates.Count > 0 ? $"LS means at the observed mean of {string.Join(", ", model.Covariates)}" : "LS means";
-        return $"ANCOVA (general linear model, least squares) of {settings.Change} with {string.Join(", ", terms)}, fitted at each visit separately " +
-            $"on the subjects with {settings.Change} and every model variable; {balance}. Differences are each arm minus {control.Label} " +
+        return $"ANCOVA (general linear model, least squares) of {response} with {string.Join(", ", terms)}, fitted at each visit separately " +
+            $"on the subjects with {response} and every model variable; {balance}. Differences are each arm minus {control.Label} " +
             $"(or as labelled), with {level} CIs and two-sided p-values from the t distribution on the residual degrees of freedom." +
-            (excluded.Count > 0 ? $" Subjects with a change but a missing covariate, left out of the model: {string.Join("; ", excluded)}." : string.Empty);
+            (excluded.Count > 0 ? $" Subjects with a value but a missing covariate, left out of the model: {string.Join("; ", excluded)}." : string.Empty);
     }
 
     private static List<(TreatmentArm First, TreatmentArm Second)> ResolvePairs(ContinuousModelSettings model, PopulationSelection selection, SpecSource source)

@@ -49,7 +49,7 @@ internal sealed class ContinuousAncova
         };
         if (fitted.Count < 2)
         {
-            return Failed("fewer than two arms have subjects with the change from baseline and all covariates");
+            return Failed("fewer than two arms have subjects with the analysed value and all covariates");
         }
         var treatment = new LinearModelFactor("treatment", fitted.Select(a => a.Value).ToList(),
             observations.Select(o => fitted.IndexOf(o.Arm)).ToList());
