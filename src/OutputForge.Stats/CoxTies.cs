@@ -5,6 +5,6 @@ public enum CoxTies
 {
     /// <summary>Efron (JASA 72, 1977): the default of R survival's coxph.</summary>
     Efron,
-    /// <summary>Breslow (Biometrics 30, 1974): the default of SAS PROC PHREG.</summary>
+    /// <summary>Breslow (Biometrics 30, 1974); the default of several other packages (recalled from memory).</summary>
     Breslow,
 }

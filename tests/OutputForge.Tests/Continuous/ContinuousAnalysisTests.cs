@@ -103,4 +103,23 @@ public sealed class ContinuousAnalysisTests
         Assert.Equal(Value(result, "week-4-lsdiff", "active", "estimate")!.Value, Value(result, "week-4-dose-response", "placebo", "estimate")!.Value, 10);
         Assert.Equal(Value(result, "week-4-lsdiff-p-value", "active", "pValue")!.Value, Value(result, "week-4-dose-response", "placebo", "pValue")!.Value, 10);
     }
+
+    [Fact]
+    public void A_text_covariate_is_a_spec_error_that_points_to_factors()
+    {
+        using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table("""{ "covariates": ["SITEGR"] }"""));
+        var error = Assert.Throws<SpecException>(() => Analyze(study));
+        Assert.Contains("SITEGR", error.Message);
+        Assert.Contains("factors", error.Message);
+    }
+
+    [Fact]
+    public void A_continuous_table_without_its_settings_is_a_schema_error()
+    {
+        using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: """
+            { "id": "1", "title": ["Change"], "population": "itt", "kind": "continuous", "endpoint": { "dataset": "adeff" } }
+            """);
+        var error = Assert.Throws<SpecException>(() => SpecLoader.Load(study.Folder));
+        Assert.Contains("continuous", error.Message);
+    }
 }

@@ -33,9 +33,12 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         // The model analyses the change from baseline, or the value itself for an endpoint without a baseline.
         var response = change ?? value;
         var model = settings.Model;
-        var covariates = model?.Covariates.Select((c, i) => RecordVariable.Find(c, dataset, data, table.Source, $"/continuous/model/covariates/{i}")).ToList() ?? [];
+        var covariates = model?.Covariates.Select((c, i) => Numeric(RecordVariable.Find(c, dataset, data, table.Source, $"/continuous/model/covariates/{i}"),
+            table.Source, $"/continuous/model/covariates/{i}", "list it under \"factors\" to use it as a class covariate")).ToList() ?? [];
         var factors = model?.Factors.Select((f, i) => RecordVariable.Find(f, dataset, data, table.Source, $"/continuous/model/factors/{i}")).ToList() ?? [];
-        var dose = model?.DoseVariable is { } doseName ? RecordVariable.Find(doseName, dataset, data, table.Source, "/continuous/model/doseVariable") : null;
+        var dose = model?.DoseVariable is { } doseName
+            ? Numeric(RecordVariable.Find(doseName, dataset, data, table.Source, "/continuous/model/doseVariable"), table.Source, "/continuous/model/doseVariable", "the dose-response test needs the dose as a number")
+            : null;
         var pairs = model is null ? [] : ResolvePairs(model, selection, table.Source);
         var modelVisits = model is null ? [] : ResolveModelVisits(model, settings, table.Source);
 
@@ -109,6 +112,10 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
             new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), statistics.PercentDecimals, statistics.PValueFloor);
     }
+
+    private static RecordVariable Numeric(RecordVariable variable, SpecSource source, string pointer, string hint) =>
+        variable.IsNumeric ? variable : throw new SpecException(source.Problem(pointer,
+            $"{variable.Name} in {variable.DatasetFile} is not numeric; {hint}"));
 
     private static void AddSummary(List<ResultRow> rows, string key, string label, RecordVariable variable,
         Dictionary<TreatmentArm, List<(string Subject, int Row)>> subjectsOf, IReadOnlyList<ResultColumn> columns, int d)
