@@ -120,7 +120,7 @@ public sealed class ContinuousAnalysis : ITableAnalysis
     private static void AddSummary(List<ResultRow> rows, string key, string label, RecordVariable variable,
         Dictionary<TreatmentArm, List<(string Subject, int Row)>> subjectsOf, IReadOnlyList<ResultColumn> columns, int d)
     {
-        var summaries = subjectsOf.ToDictionary(p => p.Key.Key, p => SampleSummary.Of(p.Value
+        var summaries = subjectsOf.ToDictionary(p => p.Key.Key, p => DescriptiveStatistics.Compute(p.Value
             .Select(s => variable.Number(s.Row, s.Subject)).Where(double.IsFinite).ToList()));
         rows.Add(new ResultRow(key, label, 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
         rows.Add(new ResultRow($"{key}-n", "n", 2, columns.Select(c => CellFactory.Count(c.Key, summaries[c.Key].N)).ToList()));
@@ -132,21 +132,21 @@ public sealed class ContinuousAnalysis : ITableAnalysis
             (Minimum, s => s.Minimum, d), (Maximum, s => s.Maximum, d))).ToList()));
     }
 
-    private static ResultCell Cell(string column, string pattern, SampleSummary summary,
-        params (string Name, Func<SampleSummary, double> Get, int Decimals)[] parts)
+    private static ResultCell Cell(string column, string pattern, DescriptiveSummary summary,
+        params (string Name, Func<DescriptiveSummary, double?> Get, int Decimals)[] parts)
     {
         if (summary.N == 0)
         {
             return CellFactory.Empty(column);
         }
         // A value that cannot be computed (the SD of one value) prints as NE inside the cell, the rest stays.
-        foreach (var part in parts.Where(p => !double.IsFinite(p.Get(summary))))
+        foreach (var part in parts.Where(p => p.Get(summary) is null))
         {
             pattern = pattern.Replace("{" + part.Name + "}", CellTextNotEstimable, StringComparison.Ordinal);
         }
-        return new ResultCell(column, pattern, parts.Select(p => double.IsFinite(p.Get(summary))
-            ? new StatisticValue(p.Name, p.Get(summary), ValueFormat.Decimal, p.Decimals)
-            : StatisticValue.NotEstimable(p.Name, ValueFormat.Decimal, summary.N < 2 ? "fewer than two values" : "no values")).ToList());
+        return new ResultCell(column, pattern, parts.Select(p => p.Get(summary) is { } v
+            ? new StatisticValue(p.Name, v, ValueFormat.Decimal, p.Decimals)
+            : StatisticValue.NotEstimable(p.Name, ValueFormat.Decimal, (summary.Notes.FirstOrDefault() ?? "not computable").TrimEnd('.'))).ToList());
     }
 
     private static void AddModelRows(List<ResultRow> rows, string visitKey, ContinuousAncova ancova, IReadOnlyList<ResultColumn> columns,
