@@ -8,14 +8,14 @@ namespace OutputForge.Stats;
 /// S0, S1, S2 and tied-set sums T0, T1, T2 uses, for r = 0..d-1, the weight w = r/d in
 /// log(S0 - w T0), with Breslow's w = 0 (Therneau and Grambsch, Modeling Survival Data, 2000, section 3.3).
 /// </summary>
-internal sealed class PartialLikelihood
+internal sealed class CoxPartialLikelihood
 {
     private readonly SurvivalData _data;
     private readonly Matrix<double> _x;
     private readonly CoxTies _ties;
     private readonly List<List<int>> _strata;
 
-    public PartialLikelihood(SurvivalData data, Matrix<double> x, CoxTies ties, IReadOnlyList<int>? stratum)
+    public CoxPartialLikelihood(SurvivalData data, Matrix<double> x, CoxTies ties, IReadOnlyList<int>? stratum)
     {
         _data = data;
         _x = x;

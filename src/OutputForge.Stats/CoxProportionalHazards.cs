@@ -32,7 +32,7 @@ public static class CoxProportionalHazards
             return NotEstimable(ties, "there are no events");
         }
         var x = Matrix<double>.Build.DenseOfArray(covariates);
-        var problem = new PartialLikelihood(data, x, ties, stratum);
+        var problem = new CoxPartialLikelihood(data, x, ties, stratum);
         var beta = Vector<double>.Build.Dense(p);
         var current = problem.Evaluate(beta);
         if (!IsInvertible(current.Information))

@@ -2,9 +2,6 @@ using OutputForge.Stats;
 
 namespace OutputForge.Analysis.Continuous;
 
-/// <summary>One observation of the model: subject, arm, change from baseline and the record it came from.</summary>
-internal sealed record ModelObservation(string Subject, TreatmentArm Arm, int Row, double Response);
-
 /// <summary>
 /// The ANCOVA of one visit: change from baseline = treatment + numeric covariates + factors, fitted by
 /// least squares (OutputForge.Stats.LinearModel); LS means per arm, LS mean differences (each active arm

@@ -38,6 +38,3 @@ internal sealed record TimeToEventComparison(TreatmentArm Arm, TestResult LogRan
         return new TimeToEventComparison(arm, logRank, fit.HazardRatio(0, level), fit.Iterations);
     }
 }
-
-/// <summary>One subject's time, event indicator and stratum (the strata variables' values joined).</summary>
-internal sealed record TimeToEventSubject(string Subject, TreatmentArm Arm, double Time, bool Event, string? Stratum);
