@@ -31,7 +31,7 @@ public static class PackageRunner
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames());
         var manifestTables = new List<ManifestTable>();
         var page = PageFrom(study.Page);
-        var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
+        var studyLine = StudyLine(study);
         var laidOut = new List<(LaidOutTable Table, IReadOnlyList<string> Warnings)>();
         foreach (var table in selected)
         {
@@ -84,7 +84,11 @@ public static class PackageRunner
         return Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
     }
 
-    private static PageSettings PageFrom(PageSpec? spec)
+    /// <summary>The study identification of the page header: "QF217-301 (Sponsor)".</summary>
+    public static string StudyLine(StudySpec study) =>
+        $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
+
+    public static PageSettings PageFrom(PageSpec? spec)
     {
         var page = PageSettings.Default;
         if (spec is null)
