@@ -34,7 +34,7 @@ public static class PackageRunner
         var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames());
         var page = PageFrom(study.Page);
-        var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
+        var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
         var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, log);
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
@@ -154,7 +154,11 @@ public static class PackageRunner
         return folder;
     }
 
-    private static PageSettings PageFrom(PageSpec? spec)
+    /// <summary>The study identification of the page header: "QF217-301 (Sponsor)".</summary>
+    public static string StudyLine(StudySpec study) =>
+        $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
+
+    public static PageSettings PageFrom(PageSpec? spec)
     {
         var page = PageSettings.Default;
         if (spec is null)
