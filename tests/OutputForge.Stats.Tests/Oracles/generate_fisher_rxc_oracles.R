@@ -2,7 +2,9 @@
 # Mehta and Patel's network algorithm). Run from the repository root:
 #   Rscript tests/OutputForge.Stats.Tests/Oracles/generate_fisher_rxc_oracles.R
 # It writes tests/OutputForge.Stats.Tests/Oracles/fisher_rxc_oracles.json with the R version.
-# The tables are invented for the tests; the fifth is the 10 x 3 table with n = 250.
+# The tables are invented for the tests; the fifth is a 10 x 3 table with n = 250 and evenly spread
+# counts (hard: p near 0.37), the ninth a 10 x 3 table with n = 250 concentrated in a few categories,
+# as in a clinical table of grades or categories by arm.
 tables <- list(
   matrix(c(3, 1, 4,
            1, 5, 2), nrow = 2, byrow = TRUE),
@@ -32,7 +34,17 @@ tables <- list(
            3, 4, 0,
            5, 0, 1), nrow = 3, byrow = TRUE),
   matrix(c(1, 1, 1,
-           1, 1, 1), nrow = 2, byrow = TRUE)
+           1, 1, 1), nrow = 2, byrow = TRUE),
+  matrix(c(60, 55, 60,
+           10, 12,  8,
+            5,  3,  6,
+            2,  4,  3,
+            1,  2,  1,
+            3,  1,  2,
+            0,  2,  1,
+            1,  0,  2,
+            2,  1,  0,
+            1,  2,  0), nrow = 10, byrow = TRUE)
 )
 rows <- character(0)
 for (t in tables) {
