@@ -8,7 +8,7 @@ public class PearsonChiSquareTestTests
         row.GetProperty("statistic").GetDouble(), row.GetProperty("p").GetDouble(), row.GetProperty("df").GetInt32(),
     });
 
-    /// <summary>scipy 1.10.1 chi2_contingency(correction=False), values in Oracles/phase1_oracles.json.</summary>
+    /// <summary>scipy 1.10.1 chi2_contingency(correction=False), values in Oracles/proportion_table_oracles.json.</summary>
     [Theory]
     [MemberData(nameof(ScipyCases))]
     public void MatchesScipy(int[][] rows, double statistic, double p, int df)
