@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using MathNet.Numerics;
 
 namespace OutputForge.Stats;
@@ -29,7 +30,7 @@ namespace OutputForge.Stats;
 /// </summary>
 internal sealed class FisherNetworkEnumeration
 {
-    internal const long WorkLimit = 100_000_000;
+    internal const long WorkLimit = 1_000_000_000;
     private const double LogTolerance = 1e-7;
     private const double MergeResolution = 1e10;
 
@@ -123,7 +124,7 @@ internal sealed class FisherNetworkEnumeration
                         for (int i = counted; i < carried; i++)
                         {
                             long key = (long)Math.Round((pasts.Values[i] + step) * MergeResolution);
-                            childPaths[key] = childPaths.GetValueOrDefault(key) + pasts.Counts[i];
+                            CollectionsMarshal.GetValueRefOrAddDefault(childPaths, key, out _) += pasts.Counts[i];
                         }
                         _work += carried - counted;
                     }
