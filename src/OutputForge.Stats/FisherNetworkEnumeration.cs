@@ -24,13 +24,15 @@ namespace OutputForge.Stats;
 /// <para>
 /// "No more probable" allows a tolerance of 1e-7 on the log scale, the relative tolerance R's
 /// fisher.test applies to 2 x 2 tables (FEXACT uses 3.45e-7); past values that agree to 1e-10 are
-/// merged. The work is bounded: beyond <see cref="WorkLimit"/> carried paths the enumeration stops and
-/// reports that the table is too large rather than running on (or approximating).
+/// merged. The work is bounded: beyond <see cref="WorkLimit"/> steps, or when one column could be split
+/// over the rows in more than <see cref="SplitLimit"/> ways, the enumeration stops and reports that the
+/// table is too large rather than running on (or approximating).
 /// </para>
 /// </summary>
 internal sealed class FisherNetworkEnumeration
 {
     internal const long WorkLimit = 1_000_000_000;
+    internal const double SplitLimit = 5_000_000;
     private const double LogTolerance = 1e-7;
     private const double MergeResolution = 1e10;
 
@@ -74,7 +76,20 @@ internal sealed class FisherNetworkEnumeration
             }
         }
         double constant = rowTotals.Sum(v => network._logFactorial[v]) + columnTotals.Sum(v => network._logFactorial[v]) - network._logFactorial[n];
-        return network.Enumerate(rowTotals, observed + LogTolerance, constant);
+        try
+        {
+            // Splits of a column are listed one node at a time; a column with more than SplitLimit
+            // possible splits makes the table too large before any such list is built.
+            if (columnTotals.Any(total => SplitCount(total, r) > SplitLimit))
+            {
+                return null;
+            }
+            return network.Enumerate(rowTotals, observed + LogTolerance, constant);
+        }
+        catch (WorkLimitReachedException)
+        {
+            return null;
+        }
     }
 
     private double? Enumerate(int[] rowTotals, double threshold, double constant)
@@ -319,14 +334,17 @@ internal sealed class FisherNetworkEnumeration
             var (childMax, childMin) = Bounds(stage + 1, child);
             max = Math.Max(max, step + childMax);
             min = Math.Min(min, step + childMin);
-            _work++;
+            if (++_work > WorkLimit)
+            {
+                throw new WorkLimitReachedException();
+            }
         }
         _bounds[stage][node] = (max, min);
         return (max, min);
     }
 
     /// <summary>Every way to split a column total over the rows without exceeding their remaining totals.</summary>
-    private static List<int[]> Allocations(int[] capacities, int total)
+    private List<int[]> Allocations(int[] capacities, int total)
     {
         var result = new List<int[]>();
         var suffixCapacity = new int[capacities.Length + 1];
@@ -344,6 +362,10 @@ internal sealed class FisherNetworkEnumeration
             {
                 current[row] = left;
                 result.Add((int[])current.Clone());
+                if (++_work > WorkLimit)
+                {
+                    throw new WorkLimitReachedException();
+                }
                 return;
             }
             int lowest = Math.Max(0, left - suffixCapacity[row + 1]);
@@ -400,4 +422,7 @@ internal sealed class FisherNetworkEnumeration
 
         public override int GetHashCode() => _hash;
     }
+
+    /// <summary>Unwinds the bound recursion when the work limit is reached; never leaves this class.</summary>
+    private sealed class WorkLimitReachedException : Exception;
 }

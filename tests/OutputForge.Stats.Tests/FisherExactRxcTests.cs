@@ -102,6 +102,28 @@ public class FisherExactRxcTests
         Assert.Equal(p, FisherExactTest.Compute(permuted).PValue, 1e-12);
     }
 
+    /// <summary>
+    /// A 6 x 6 table with n = 600 is far beyond exact enumeration: the result must say so, quickly,
+    /// instead of running on or approximating.
+    /// </summary>
+    [Fact]
+    public void HugeTableIsReportedAsTooLarge()
+    {
+        var table = new int[6, 6];
+        for (int i = 0; i < 6; i++)
+        {
+            for (int j = 0; j < 6; j++)
+            {
+                table[i, j] = 10 + (i * 7 + j * 3) % 11;
+            }
+        }
+        var clock = Stopwatch.StartNew();
+        var result = FisherExactTest.Compute(table);
+        Assert.False(result.IsEstimable);
+        Assert.Contains("too large", result.NotEstimableReason);
+        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(400), $"took {clock.Elapsed}");
+    }
+
     [Fact]
     public void ZeroRowIsDroppedAndReported()
     {
