@@ -4,7 +4,7 @@
 # It writes tests/OutputForge.Stats.Tests/Oracles/fisher_rxc_oracles.json with the R version.
 # The tables are invented for the tests; the fifth is a 10 x 3 table with n = 250 and evenly spread
 # counts (hard: p near 0.37), the ninth a 10 x 3 table with n = 250 concentrated in a few categories,
-# as in a clinical table of grades or categories by arm.
+# as in a clinical table of grades or categories by arm, the tenth a 5 x 5 table with n = 100.
 tables <- list(
   matrix(c(3, 1, 4,
            1, 5, 2), nrow = 2, byrow = TRUE),
@@ -44,7 +44,12 @@ tables <- list(
             0,  2,  1,
             1,  0,  2,
             2,  1,  0,
-            1,  2,  0), nrow = 10, byrow = TRUE)
+            1,  2,  0), nrow = 10, byrow = TRUE),
+  matrix(c(5, 3, 4, 6, 2,
+           4, 5, 3, 2, 6,
+           3, 6, 5, 4, 2,
+           6, 2, 4, 5, 3,
+           2, 4, 6, 3, 5), nrow = 5, byrow = TRUE)
 )
 # For the evenly spread 10 x 3 table the exact FEXACT value disagrees with R's own Monte Carlo
 # p-value (same statistic, same tie rule), so a Monte Carlo estimate with its standard error is
