@@ -37,7 +37,7 @@ public static class ShellsCommand
             }
             var selected = parse.GetValue(tables);
             ShellPackage.Write(parse.GetValue(spec)!, parse.GetValue(output)!, renderers, selected is { Length: > 0 } ? selected : null,
-                new StderrRunLog(error, parse.GetValue(quiet)));
+                CommonOptions.Log(error, parse.GetValue(quiet), verbose: false));
             return ExitCodes.Success;
         }));
         return command;

@@ -1,3 +1,4 @@
+using OutputForge.Tests.Support;
 using ClosedXML.Excel;
 
 namespace OutputForge.Tests.Workflow;
@@ -50,9 +51,12 @@ public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixtur
         var (code, output, error) = WorkflowDemoFixture.Run(["changes", "--before", demo.Before, "--after", demo.After, "--report", report]);
 
         Assert.True(code == 0, error);
-        Assert.Contains("Inputs changed: 1 of 8", output);
+        var study = DemoStudyTables.Read();
+        Assert.Contains($"Inputs changed: 1 of {1 + study.TableFiles.Count + study.DataFiles.Count}", output);
         Assert.Contains("data adeff.csv: changed (SHA-256 ", output);
-        Assert.Contains("Tables unchanged: 2: 14.2.1.3, 14.2.1.4", output);
+        var changed = demo.FlippedSubjectInPerProtocol ? new[] { "14.2.1.1", "14.2.1.2" } : ["14.2.1.1"];
+        var unchanged = study.TableIds.Where(id => !changed.Contains(id)).ToList();
+        Assert.Contains($"Tables unchanged: {unchanged.Count}: {string.Join(", ", unchanged)}", output);
         Assert.Matches(@"responders / qf-217-10-mg / n \(Responders, n \(%\) / QF-217 10 mg\): (\d+) -> \d+", output);
         using var workbook = new XLWorkbook(report);
         var numbers = workbook.Worksheet("Numbers");
@@ -67,7 +71,7 @@ public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixtur
 
         Assert.Empty(changes.ChangedInputs);
         Assert.Empty(changes.ChangedTables);
-        Assert.Equal(4, changes.Tables.Count);
+        Assert.Equal(DemoStudyTables.Read().TableIds.Count, changes.Tables.Count);
     }
 
     [Fact]
@@ -80,7 +84,7 @@ public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixtur
 
         var changes = OutputForge.Workflow.Changes.RunComparison.Compare(demo.Before, output);
 
-        Assert.Equal(["14.2.1.2", "14.2.1.3", "14.2.1.4"],
+        Assert.Equal(DemoStudyTables.Read().TableIds.Where(id => id != "14.2.1.1"),
             changes.Tables.Where(t => t.Status == OutputForge.Workflow.Changes.ChangeStatus.Removed).Select(t => t.Id).ToArray());
         Assert.Equal(OutputForge.Workflow.Changes.ChangeStatus.Unchanged, changes.Tables.Single(t => t.Id == "14.2.1.1").Status);
         Assert.Empty(changes.ChangedInputs);

@@ -20,6 +20,15 @@ public static class ShellData
 
     private const string Subject = AdamConformance.SubjectVariable;
 
+    /// <summary>
+    /// The kinds whose stand-in records this class can make: those defined by a population and one
+    /// endpoint record per subject. Kinds whose rows depend on data values (levels, terms, visits)
+    /// need stand-ins of their own and are skipped with a warning until they have them.
+    /// </summary>
+    public static readonly IReadOnlyList<string> SupportedKinds = ["responders"];
+
+    public static bool Supports(string kind) => SupportedKinds.Contains(kind, StringComparer.Ordinal);
+
     public static StudyData For(StudySpec study, TableSpec table)
     {
         var arms = study.Treatment.Arms ?? throw new SpecException(study.Source.Problem("/treatment",

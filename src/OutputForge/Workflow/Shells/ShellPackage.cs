@@ -18,7 +18,12 @@ public static class ShellPackage
         var study = package.Study;
         var run = new RunFacts(DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
         var page = PackageRunner.PageFrom(study.Page);
-        var shells = TableSelection.Select(study, package.Tables, tables)
+        var selected = TableSelection.Select(study, package.Tables, tables);
+        foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
+        {
+            log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", ShellData.SupportedKinds)})");
+        }
+        var shells = selected.Where(t => ShellData.Supports(t.Kind))
             .Select(t => ShellBuilder.Build(study, t, PackageRunner.StudyLine(study), run, page))
             .ToList();
         using var staging = new OutputStaging(outputFolder);
