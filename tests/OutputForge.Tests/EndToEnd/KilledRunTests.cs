@@ -30,6 +30,9 @@ public sealed class KilledRunTests
             UseShellExecute = false,
         };
         using var process = Process.Start(start)!;
+        // Drain stderr as it comes: a run with many warnings would otherwise block on a full pipe.
+        process.ErrorDataReceived += (_, _) => { };
+        process.BeginErrorReadLine();
         var clock = Stopwatch.StartNew();
         var killedWhileWriting = false;
         while (!process.HasExited && clock.Elapsed < TimeSpan.FromSeconds(60))
@@ -42,6 +45,10 @@ public sealed class KilledRunTests
                 break;
             }
             Thread.Sleep(1);
+        }
+        if (!process.HasExited)
+        {
+            process.Kill(entireProcessTree: true);
         }
         process.WaitForExit();
 
