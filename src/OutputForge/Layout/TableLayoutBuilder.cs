@@ -13,7 +13,8 @@ public static class TableLayoutBuilder
     public const string Caution =
         "Results must be verified under your own validated processes, the SAP and applicable regulatory guidance.";
 
-    public static LaidOutTable Build(TableResult table, string studyLine, RunFacts run, PageSettings page)
+    public static LaidOutTable Build(TableResult table, string studyLine, RunFacts run, PageSettings page,
+        IReadOnlyList<ColumnGroup>? groups = null)
     {
         var columns = new List<LayoutColumn> { new("label", CellAlignment.Left) };
         columns.AddRange(table.Columns.Select(c => new LayoutColumn(c.Key, CellAlignment.Center)));
@@ -23,6 +24,10 @@ public static class TableLayoutBuilder
             new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(
                 c.SubjectCount is { } n ? string.Create(CultureInfo.InvariantCulture, $"(N={n})") : string.Empty))]),
         };
+        if (groups is { Count: > 0 } && ColumnGroupHeader.Build(table.Columns, groups) is { } groupRow)
+        {
+            headers.Insert(0, groupRow);
+        }
         var records = new List<ResultRecord>();
         var rows = new List<BodyRow>();
         var columnLabel = table.Columns.ToDictionary(c => c.Key, c => c.Label, StringComparer.Ordinal);

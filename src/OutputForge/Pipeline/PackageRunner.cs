@@ -31,6 +31,7 @@ public static class PackageRunner
             study.Data.Datasets.ToDictionary(d => d.Key, d => d.Value, StringComparer.Ordinal));
         var page = PageFrom(study.Page);
         var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
+        var groups = ColumnGroupsOf(study);
         var laidOut = new List<(LaidOutTable Table, IReadOnlyList<string> Warnings)>();
         foreach (var table in package.Tables)
         {
@@ -43,7 +44,14 @@ public static class PackageRunner
             {
                 log.Warning($"table {table.Id}: {warning}");
             }
-            laidOut.Add((TableLayoutBuilder.Build(result, studyLine, run, page), result.Warnings));
+            try
+            {
+                laidOut.Add((TableLayoutBuilder.Build(result, studyLine, run, page, groups), result.Warnings));
+            }
+            catch (ColumnGroupException e)
+            {
+                throw new SpecException(study.Source.Problem(e.Where, $"table {table.Id}: {e.Message}"));
+            }
         }
 
         using var staging = new OutputStaging(request.OutputFolder);
@@ -76,6 +84,12 @@ public static class PackageRunner
         log.Info($"{laidOut.Count} table{(laidOut.Count == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}, {files.Count} files in {request.OutputFolder} ({clock.Elapsed.TotalSeconds:0.00} s)");
         return new RunSummary(files, laidOut.Count, warnings, clock.Elapsed);
     }
+
+    /// <summary>The study's arm groups, keyed like the result columns (the arm value as a results key).</summary>
+    private static IReadOnlyList<ColumnGroup> ColumnGroupsOf(StudySpec study) =>
+        (study.Treatment.Groups ?? [])
+            .Select((g, i) => new ColumnGroup(g.Label, g.Arms.Select(ResultKeys.FromLabel).ToList(), $"/treatment/groups/{i}"))
+            .ToList();
 
     private static string DefaultDataFolder(StudySpec study)
     {

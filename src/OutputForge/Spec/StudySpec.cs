@@ -53,6 +53,17 @@ public sealed class TreatmentSpec
 
     /// <summary>Optional display labels by data value (e.g. to shorten long arm names).</summary>
     public Dictionary<string, string>? Labels { get; init; }
+
+    /// <summary>Optional groupings of arms printed as a spanning header over their columns (e.g. all doses of one compound).</summary>
+    public List<ArmGroupSpec>? Groups { get; init; }
+}
+
+/// <summary>A spanning column header over the arms it names (values of the treatment variable), which must stand side by side.</summary>
+public sealed class ArmGroupSpec
+{
+    public required string Label { get; init; }
+
+    public required List<string> Arms { get; init; }
 }
 
 public sealed class PopulationSpec
