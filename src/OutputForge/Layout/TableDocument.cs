@@ -68,6 +68,15 @@ public sealed record BodyRow(string Label, int Indent, IReadOnlyList<LayoutCell>
 public sealed record LayoutCell(string Text, double? Number = null, string? ExcelFormat = null)
 {
     public static readonly LayoutCell Empty = new(string.Empty);
+
+    /// <summary>
+    /// <see cref="Text"/> padded with no-break spaces so that it lines up with the other cells of
+    /// its column (see <see cref="NumberAlignment"/>); null when the cell needs no padding.
+    /// </summary>
+    public string? Aligned { get; init; }
+
+    /// <summary>The text a paged renderer draws: the aligned text when there is one.</summary>
+    public string Display => Aligned ?? Text;
 }
 
 public enum PaperSize { Letter, A4 }

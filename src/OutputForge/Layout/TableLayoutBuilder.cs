@@ -61,6 +61,7 @@ public static class TableLayoutBuilder
             };
             rows.Add(new BodyRow(row.Label, row.Indent, cells, kind));
         }
+        rows = [.. NumberAlignment.Apply(rows)];
         var footnotes = new List<string>(table.MethodNotes);
         footnotes.AddRange(table.Warnings.Select(w => "Warning: " + w));
         if (rows.Any(r => r.Cells.Any(c => c.Text == CellText.NotEstimable)))

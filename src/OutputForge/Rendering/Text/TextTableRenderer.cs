@@ -116,7 +116,7 @@ public sealed class TextTableRenderer : ITableRenderer
         }
         int tableWidth = starts[^1] + widths[^1];
         var labelLines = CellLines.Split(row.Label);
-        var cellLines = row.Cells.Select(c => CellLines.Split(c.Text)).ToArray();
+        var cellLines = row.Cells.Select(c => CellLines.Split(c.Display.Replace(NumberAlignment.Pad, ' '))).ToArray();
         int height = Math.Max(labelLines.Length, cellLines.Select(l => l.Length).DefaultIfEmpty(1).Max());
         int indent = row.Indent * IndentWidth;
         for (int i = 0; i < height; i++)
