@@ -4,4 +4,8 @@ namespace OutputForge.Layout;
 /// <param name="RunTime">When the run started (UTC).</param>
 /// <param name="ToolVersion">OutputForge's version.</param>
 /// <param name="DataFiles">File name of each dataset, by dataset name.</param>
-public sealed record RunFacts(DateTimeOffset RunTime, string ToolVersion, IReadOnlyDictionary<string, string> DataFiles);
+public sealed record RunFacts(DateTimeOffset RunTime, string ToolVersion, IReadOnlyDictionary<string, string> DataFiles)
+{
+    /// <summary>Short SHA-256 digest of each dataset's file, by dataset name (empty when not known).</summary>
+    public IReadOnlyDictionary<string, string> DataDigests { get; init; } = new Dictionary<string, string>();
+}

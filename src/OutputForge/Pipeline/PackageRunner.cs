@@ -28,7 +28,12 @@ public static class PackageRunner
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text,
-            study.Data.Datasets.ToDictionary(d => d.Key, d => d.Value, StringComparer.Ordinal));
+            study.Data.Datasets.ToDictionary(d => d.Key, d => d.Value, StringComparer.Ordinal))
+        {
+            DataDigests = study.Data.Datasets
+                .Where(d => File.Exists(Path.Combine(dataFolder, d.Value)))
+                .ToDictionary(d => d.Key, d => FileDigest.Short(Path.Combine(dataFolder, d.Value)), StringComparer.Ordinal),
+        };
         var page = PageFrom(study.Page);
         var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
         var groups = ColumnGroupsOf(study);

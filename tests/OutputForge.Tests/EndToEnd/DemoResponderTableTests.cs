@@ -162,7 +162,7 @@ public sealed class DemoResponderTableTests(DemoRunFixture demo) : IClassFixture
     [Fact]
     public void Every_document_carries_the_caution_and_the_source()
     {
-        var paragraphs = DocumentReader.WordParagraphs(demo.Output("table-14.2.1.1.docx"));
+        var paragraphs = DocumentReader.WordFooterParagraphs(demo.Output("table-14.2.1.1.docx"));
         Assert.Contains(paragraphs, p => p.StartsWith("Source: tables/14.2.1.1-itch-responders-week12-itt.json") && p.Contains("verified under your own validated processes"));
         var text = File.ReadAllText(demo.Output("table-14.2.1.1.txt"));
         Assert.Contains("Table 14.2.1.1", text);
