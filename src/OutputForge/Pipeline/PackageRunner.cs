@@ -4,6 +4,7 @@ using OutputForge.Data;
 using OutputForge.Layout;
 using OutputForge.Rendering;
 using OutputForge.Spec;
+using OutputForge.Templates;
 
 namespace OutputForge.Pipeline;
 
@@ -21,6 +22,7 @@ public static class PackageRunner
         using var outputLock = OutputLock.Acquire(request.OutputFolder);
         var package = SpecLoader.Load(request.SpecPath);
         var study = package.Study;
+        var templates = TemplateSet.Load(study.Folder);
         var dataFolder = request.DataFolder ?? DefaultDataFolder(study);
         var dataWarnings = new List<string>();
         var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
@@ -51,7 +53,9 @@ public static class PackageRunner
             }
             try
             {
-                laidOut.Add((TableLayoutBuilder.Build(result, studyLine, run, page, groups), result.Warnings));
+                var built = TableLayoutBuilder.Build(result, studyLine, run, page, groups);
+                var document = TableTemplates.Apply(templates, built.Document, TemplateValues.For(study, table, result, built.Document, run));
+                laidOut.Add((built with { Document = document }, result.Warnings));
             }
             catch (ColumnGroupException e)
             {
