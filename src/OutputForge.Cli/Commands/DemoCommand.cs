@@ -21,9 +21,10 @@ public static class DemoCommand
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
         var timestamp = CommonOptions.Timestamp();
+        var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, formats, quiet, timestamp,
+            output, subjects, formats, quiet, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -38,7 +39,7 @@ public static class DemoCommand
             DemoStudyGenerator.WriteCsv(dataFolder, new DemoStudyOptions(parse.GetValue(subjects)));
             var studyFile = DemoSpecFiles.Write(root);
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
-            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers) { RunTime = runTime }, log);
+            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers) { RunTime = runTime, Combined = parse.GetValue(combined) }, log);
             return ExitCodes.Success;
         }));
         return command;

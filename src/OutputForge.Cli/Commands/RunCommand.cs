@@ -21,10 +21,11 @@ public static class RunCommand
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
         var timestamp = CommonOptions.Timestamp();
+        var combined = CommonOptions.Combined();
         var controlCharacters = CommonOptions.ControlCharacters();
         var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
         {
-            spec, data, output, formats, quiet, timestamp, controlCharacters,
+            spec, data, output, formats, quiet, timestamp, combined, controlCharacters,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -35,7 +36,7 @@ public static class RunCommand
                 return ExitCodes.Usage;
             }
             var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = dataOptions }, log);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = dataOptions, Combined = parse.GetValue(combined) }, log);
             return ExitCodes.Success;
         }));
         return command;

@@ -80,6 +80,10 @@ public static class PackageRunner
                 stream.Write(bytes);
             }
         }
+        if (request.Combined && laidOut.Count > 0)
+        {
+            CombinedOutputs.Write(staging, request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime);
+        }
         using (var stream = staging.Create(ResultsFileName))
         {
             ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut);
