@@ -63,7 +63,9 @@ public static class FisherExactTest
     /// <summary>
     /// An r x c table. Rows and columns with a zero total are dropped (and reported); a table that
     /// reduces to 2 x 2 is computed exactly as <see cref="TwoByTwo"/>, one that reduces to a single
-    /// row or column admits only the observed table and has p = 1 (with a note).
+    /// row or column admits only the observed table and has p = 1 (with a note). Larger tables use the
+    /// network algorithm of Mehta and Patel (1983) in <see cref="FisherNetworkEnumeration"/>; a table
+    /// too large to enumerate within its work limit is reported as not estimable, never approximated.
     /// </summary>
     public static TestResult Compute(int[,] table)
     {
@@ -87,6 +89,9 @@ public static class FisherExactTest
         {
             return TwoByTwo(reduced[0, 0], reduced[0, 1], reduced[1, 0], reduced[1, 1]) with { Notes = notes };
         }
-        throw new NotSupportedException("Fisher's exact test for tables larger than 2 x 2 is not available in this version.");
+        double? p = FisherNetworkEnumeration.PValue(reduced);
+        return p is null
+            ? TestResult.NotEstimable(MethodName, "the table is too large for exact enumeration within the work limit")
+            : new TestResult(MethodName, null, null, p.Value) { Notes = notes };
     }
 }

@@ -23,6 +23,20 @@ public static class CommonOptions
         Description = "Print only warnings and errors.",
     };
 
+    public static Option<bool> Verbose() => new("--verbose", "-v")
+    {
+        Description = "Also print details: each table's build time and the stages' timings.",
+    };
+
+    /// <summary>The log for a run: a progress line on a terminal, plain lines otherwise (redirected, CI, tests).</summary>
+    public static Pipeline.IRunLog Log(TextWriter error, bool quiet, bool verbose)
+    {
+        var verbosity = quiet ? Verbosity.Quiet : verbose ? Verbosity.Verbose : Verbosity.Normal;
+        return ReferenceEquals(error, Console.Error) && TerminalRunLog.Available
+            ? new TerminalRunLog(verbosity)
+            : new StderrRunLog(error, verbosity);
+    }
+
     public static Option<string> ControlCharacters() => new("--control-characters")
     {
         Description = "Control characters in data values, which Word and Excel cannot store: 'refuse' (stop with an error naming file, line and variable; default) or 'replace' (show U+FFFD and warn).",

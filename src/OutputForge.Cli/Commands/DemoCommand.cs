@@ -20,11 +20,12 @@ public static class DemoCommand
         };
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
+        var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();
         var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, formats, quiet, timestamp, combined,
+            output, subjects, formats, quiet, verbose, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -34,12 +35,16 @@ public static class DemoCommand
                 return ExitCodes.Usage;
             }
             var root = parse.GetValue(output)!;
-            var log = new StderrRunLog(error, parse.GetValue(quiet));
+            var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
             var dataFolder = Path.Combine(root, "data");
-            DemoStudyGenerator.WriteCsv(dataFolder, new DemoStudyOptions(parse.GetValue(subjects)));
-            var studyFile = DemoSpecFiles.Write(root);
+            var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
-            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers) { RunTime = runTime, Combined = parse.GetValue(combined) }, log);
+            PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
+            {
+                RunTime = runTime,
+                Combined = parse.GetValue(combined),
+                CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
+            }, log);
             return ExitCodes.Success;
         }));
         return command;

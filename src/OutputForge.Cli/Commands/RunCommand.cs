@@ -20,12 +20,22 @@ public static class RunCommand
         var output = CommonOptions.Output("Folder for the tables and results.json (created if needed; files of the same name are replaced only when the whole run succeeds).");
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
+        var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();
         var combined = CommonOptions.Combined();
         var controlCharacters = CommonOptions.ControlCharacters();
-        var command = new Command("run", "Produce every table of a study spec: Word, Excel and results.json.")
+        var allowFolder = new Option<string[]>("--allow-folder")
         {
-            spec, data, output, formats, quiet, timestamp, combined, controlCharacters,
+            Description = "A folder outside the spec's own folder tree that the spec may read from (e.g. a shared data folder named in data.folder); repeatable.",
+        };
+        var tables = new Option<string[]>("--tables", "-t")
+        {
+            Description = "Only these tables, by id or pattern ('14.2.*'), comma-separated or repeated; the other tables' files, results and manifest entries in --out are kept.",
+            AllowMultipleArgumentsPerToken = true,
+        };
+        var command = new Command("run", "Produce every table of a study spec: Word, Excel, results.json and manifest.json.")
+        {
+            spec, data, output, formats, quiet, verbose, timestamp, combined, controlCharacters, allowFolder, tables,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -35,8 +45,17 @@ public static class RunCommand
             {
                 return ExitCodes.Usage;
             }
-            var log = new StderrRunLog(error, parse.GetValue(quiet));
-            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers) { RunTime = runTime, DataOptions = dataOptions, Combined = parse.GetValue(combined) }, log);
+            var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
+            var selected = parse.GetValue(tables);
+            PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers)
+            {
+                RunTime = runTime,
+                Combined = parse.GetValue(combined),
+                DataOptions = dataOptions,
+                AllowedFolders = parse.GetValue(allowFolder) ?? [],
+                CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
+                Tables = selected is { Length: > 0 } ? selected : null,
+            }, log);
             return ExitCodes.Success;
         }));
         return command;

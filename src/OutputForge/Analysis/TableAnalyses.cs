@@ -9,6 +9,10 @@ public static class TableAnalyses
     private static readonly Dictionary<string, ITableAnalysis> ByKind = new ITableAnalysis[]
     {
         new ResponderAnalysis(),
+        new Populations.PopulationsAnalysis(),
+        new Disposition.DispositionAnalysis(),
+        new Demographics.DemographicsAnalysis(),
+        new AdverseEvents.AdverseEventAnalysis(),
     }.ToDictionary(a => a.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;

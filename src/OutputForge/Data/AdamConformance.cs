@@ -9,13 +9,31 @@ public static class AdamConformance
 {
     public const string SubjectVariable = "USUBJID";
 
-    public static void CheckSubjectLevel(Dataset adsl)
+    public static void CheckSubjectLevel(Dataset adsl) => ThrowFirst(SubjectLevelProblems(adsl));
+
+    public static void CheckAgainstSubjectLevel(Dataset dataset, Dataset adsl) => ThrowFirst(ProblemsAgainstSubjectLevel(dataset, adsl));
+
+    private static void ThrowFirst(IEnumerable<DataException> problems)
     {
-        var subjects = adsl.Find(SubjectVariable)
-            ?? throw new DataException(adsl.File, 1, null, $"ADSL has no {SubjectVariable} variable");
+        if (problems.FirstOrDefault() is { } first)
+        {
+            throw first;
+        }
+    }
+
+    /// <summary>Every breach of the ADSL conventions, in file order (the run stops at the first; `check` lists them all).</summary>
+    public static IEnumerable<DataException> SubjectLevelProblems(Dataset adsl)
+    {
+        var subjects = adsl.Find(SubjectVariable);
+        if (subjects is null)
+        {
+            yield return new DataException(adsl.File, 1, null, $"ADSL has no {SubjectVariable} variable");
+            yield break;
+        }
         if (adsl.RowCount == 0)
         {
-            throw new DataException(adsl.File, null, null, "ADSL has a header but no subjects");
+            yield return new DataException(adsl.File, null, null, "ADSL has a header but no subjects");
+            yield break;
         }
         var firstLine = new Dictionary<string, int>(StringComparer.Ordinal);
         for (var row = 0; row < adsl.RowCount; row++)
@@ -23,47 +41,58 @@ public static class AdamConformance
             var id = subjects.GetText(row);
             if (id is null)
             {
-                throw new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable, "USUBJID is missing");
+                yield return new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable, "USUBJID is missing");
             }
-            if (!firstLine.TryAdd(id, adsl.LineOfRow[row]))
+            else if (!firstLine.TryAdd(id, adsl.LineOfRow[row]))
             {
-                throw new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable,
+                yield return new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable,
                     $"subject {id} has a second ADSL row (first on line {firstLine[id]}); ADSL has one row per subject");
             }
         }
-        CheckFlags(adsl);
+        foreach (var problem in FlagProblems(adsl))
+        {
+            yield return problem;
+        }
     }
 
-    public static void CheckAgainstSubjectLevel(Dataset dataset, Dataset adsl)
+    /// <summary>Every breach of the conventions linking a BDS or OCCDS dataset to ADSL, in file order.</summary>
+    public static IEnumerable<DataException> ProblemsAgainstSubjectLevel(Dataset dataset, Dataset adsl)
     {
-        CheckFlags(dataset);
+        foreach (var problem in FlagProblems(dataset))
+        {
+            yield return problem;
+        }
         var subjects = dataset.Find(SubjectVariable);
         if (subjects is null)
         {
-            throw new DataException(dataset.File, 1, null, $"the dataset has no {SubjectVariable} variable, so its records cannot be linked to ADSL");
+            yield return new DataException(dataset.File, 1, null, $"the dataset has no {SubjectVariable} variable, so its records cannot be linked to ADSL");
+            yield break;
         }
         var known = new HashSet<string>(StringComparer.Ordinal);
-        var adslSubjects = adsl.Get(SubjectVariable);
-        for (var row = 0; row < adsl.RowCount; row++)
+        var adslSubjects = adsl.Find(SubjectVariable);
+        for (var row = 0; adslSubjects is not null && row < adsl.RowCount; row++)
         {
-            known.Add(adslSubjects.GetText(row)!);
+            if (adslSubjects.GetText(row) is { } id)
+            {
+                known.Add(id);
+            }
         }
         for (var row = 0; row < dataset.RowCount; row++)
         {
             var id = subjects.GetText(row);
             if (id is null)
             {
-                throw new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable, "USUBJID is missing");
+                yield return new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable, "USUBJID is missing");
             }
-            if (!known.Contains(id))
+            else if (!known.Contains(id))
             {
-                throw new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable,
+                yield return new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable,
                     $"subject {id} is not in ADSL ({Path.GetFileName(adsl.File)})");
             }
         }
     }
 
-    private static void CheckFlags(Dataset dataset)
+    private static IEnumerable<DataException> FlagProblems(Dataset dataset)
     {
         foreach (var column in dataset.Columns)
         {
@@ -76,7 +105,7 @@ public static class AdamConformance
                 var value = column.GetText(row);
                 if (value is not null and not "Y" and not "N")
                 {
-                    throw new DataException(dataset.File, dataset.LineOfRow[row], column.Name,
+                    yield return new DataException(dataset.File, dataset.LineOfRow[row], column.Name,
                         $"flag value '{value}' (ADaM flags hold Y, N or nothing)");
                 }
             }

@@ -22,11 +22,16 @@ public static partial class CellText
         return value.Format switch
         {
             ValueFormat.Count => NumberText.Count(number),
-            ValueFormat.Percent => NumberText.Fixed(number, value.Decimals),
+            ValueFormat.Percent => (table.PercentStyle ?? PercentStyle.Default).EdgeMarks
+                ? NumberText.PercentWithEdges(number, value.Decimals)
+                : NumberText.Fixed(number, value.Decimals),
             ValueFormat.PValue => NumberText.PValue(number, table.PValueFloor),
             _ => NumberText.Fixed(number, value.Decimals),
         };
     }
+
+    private static bool IsCountPercent(string pattern) =>
+        pattern.StartsWith("{n} ({percent}", StringComparison.Ordinal);
 
     public static LayoutCell Compose(ResultCell cell, TableResult table)
     {
@@ -40,8 +45,9 @@ public static partial class CellText
         {
             return new LayoutCell(NotEstimable);
         }
-        // A zero count shows as "0", not "0 (0.0)" (common practice).
-        if (cell.Pattern == "{n} ({percent})" && byName["n"].Value == 0)
+        // A zero count shows as "0", not "0 (0.0)" (common practice), unless the table asks for the percentage;
+        // this holds for every "n (%)" pattern, with or without a percent sign or an event count.
+        if (IsCountPercent(cell.Pattern) && byName["n"].Value == 0 && (table.PercentStyle ?? PercentStyle.Default).ZeroAsCountOnly)
         {
             return new LayoutCell("0", 0, "0");
         }

@@ -32,6 +32,26 @@ public static class NumberText
     public static string Count(double value) => Fixed(value, 0);
 
     /// <summary>
+    /// A percentage that marks its edges: one above 0 that would round to 0 shows as "&lt;0.1"
+    /// (with 1 decimal; "&lt;1" with none), one below 100 that would round to 100 as "&gt;99.9",
+    /// so that the text never claims none or all when that is not so (common practice).
+    /// </summary>
+    public static string PercentWithEdges(double percent, int decimals)
+    {
+        var rounded = Rounded(percent, decimals);
+        var step = Math.Pow(10, -decimals);
+        if (percent > 0 && rounded == 0m)
+        {
+            return "<" + Fixed(step, decimals);
+        }
+        if (percent < 100 && rounded == 100m)
+        {
+            return ">" + Fixed(100 - step, decimals);
+        }
+        return Fixed(percent, decimals);
+    }
+
+    /// <summary>
     /// A p-value: "&lt;floor" below the floor (e.g. "&lt;0.001"), "&gt;0.999" above 1 minus the floor's
     /// step, otherwise with as many decimals as the floor has (at least 3).
     /// </summary>

@@ -77,8 +77,7 @@ public static class TableLayoutBuilder
     private static string SourceLine(TableResult table, RunFacts run)
     {
         var files = table.Provenance.Datasets
-            .Select(d => (run.DataFiles.TryGetValue(d, out var f) ? f : d)
-                + (run.DataDigests.TryGetValue(d, out var digest) ? $" (sha256 {digest})" : string.Empty))
+            .Select(d => run.DataFiles.TryGetValue(d, out var f) ? f : d)
             .Distinct(StringComparer.Ordinal);
         var time = run.RunTime.UtcDateTime.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture);
         return $"Source: {table.Provenance.SpecFile.Replace('\\', '/')}; data: {string.Join(", ", files)}; run {time}; OutputForge {run.ToolVersion}. {Caution}";

@@ -18,12 +18,32 @@ public sealed class OutputStaging : IDisposable
         try
         {
             Directory.CreateDirectory(parent);
+            RemoveLeftovers(parent, Path.GetFileName(_outputFolder));
             Folder = Path.Combine(parent, $".{Path.GetFileName(_outputFolder)}.staging-{Environment.ProcessId}-{Guid.NewGuid():N}");
             Directory.CreateDirectory(Folder);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             throw new RunException($"{outputFolder}: cannot create the output folder ({e.Message})");
+        }
+    }
+
+    /// <summary>
+    /// Deletes staging folders that a killed run left behind. Only called while this run holds the
+    /// output folder's <see cref="OutputLock"/>, so no other run can be using them.
+    /// </summary>
+    private static void RemoveLeftovers(string parent, string outputName)
+    {
+        foreach (var leftover in Directory.GetDirectories(parent, $".{outputName}.staging-*"))
+        {
+            try
+            {
+                Directory.Delete(leftover, recursive: true);
+            }
+            catch (IOException)
+            {
+                // A leftover that cannot be removed now is retried by the next run; it never reaches the outputs.
+            }
         }
     }
 

@@ -5,6 +5,8 @@ using OutputForge.Layout;
 using OutputForge.Rendering;
 using OutputForge.Spec;
 using OutputForge.Templates;
+using OutputForge.Workflow;
+using OutputForge.Workflow.Manifest;
 
 namespace OutputForge.Pipeline;
 
@@ -20,62 +22,44 @@ public static class PackageRunner
     {
         var clock = Stopwatch.StartNew();
         using var outputLock = OutputLock.Acquire(request.OutputFolder);
-        var package = SpecLoader.Load(request.SpecPath);
+        var package = SpecLoader.Load(request.SpecPath, request.AllowedFolders);
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder);
-        var dataFolder = request.DataFolder ?? DefaultDataFolder(study);
+        log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
+        var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
         var dataWarnings = new List<string>();
         var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
-        var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text,
-            study.Data.Datasets.ToDictionary(d => d.Key, d => d.Value, StringComparer.Ordinal))
+        var inputs = RunInputs.Read(package, data);
+        var selected = TableSelection.Select(study, package.Tables, request.Tables);
+        var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
         {
-            DataDigests = study.Data.Datasets
-                .Where(d => File.Exists(Path.Combine(dataFolder, d.Value)))
-                .ToDictionary(d => d.Key, d => FileDigest.Short(Path.Combine(dataFolder, d.Value)), StringComparer.Ordinal),
+            DataDigests = inputs.Data.Where(d => d.Dataset is not null)
+                .ToDictionary(d => d.Dataset!, d => FileDigest.Short(d.Sha256), StringComparer.Ordinal),
         };
         var page = PageFrom(study.Page);
         var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
-        var groups = ColumnGroupsOf(study);
-        var laidOut = new List<(LaidOutTable Table, IReadOnlyList<string> Warnings)>();
-        foreach (var table in package.Tables)
+        var building = Stopwatch.StartNew();
+        var context = new LayoutContext(templates, ColumnGroupsOf(study));
+        var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log);
+        log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        var manifestTables = built.Select(b => b.Manifest).ToList();
+        var laidOut = built.Select(b => (b.Table, b.Warnings)).ToList();
+        foreach (var table in built)
         {
-            var result = TableAnalyses.For(table).Analyze(study, table, data);
-            if (dataWarnings.Count > 0)
+            foreach (var warning in table.Warnings)
             {
-                result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
-            }
-            foreach (var warning in result.Warnings)
-            {
-                log.Warning($"table {table.Id}: {warning}");
-            }
-            try
-            {
-                var built = TableLayoutBuilder.Build(result, studyLine, run, page, groups);
-                var document = TableTemplates.Apply(templates, built.Document, TemplateValues.For(study, table, result, built.Document, run));
-                laidOut.Add((built with { Document = document }, result.Warnings));
-            }
-            catch (ColumnGroupException e)
-            {
-                throw new SpecException(study.Source.Problem(e.Where, $"table {table.Id}: {e.Message}"));
+                log.Warning($"table {table.Table.Document.TableId}: {warning}");
             }
         }
 
         using var staging = new OutputStaging(request.OutputFolder);
-        foreach (var (table, _) in laidOut)
+        foreach (var table in built)
         {
-            foreach (var renderer in request.Renderers)
+            foreach (var (name, bytes) in table.Files)
             {
-                var name = OutputFileNames.ForTable(table.Document.TableId, renderer.Extension);
-                using var buffer = new MemoryStream();
-                renderer.Write(table.Document, buffer);
-                var bytes = buffer.ToArray();
-                if (PackageNormalizer.IsPackage(bytes))
-                {
-                    bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
-                }
                 using var stream = staging.Create(name);
                 stream.Write(bytes);
             }
@@ -86,8 +70,13 @@ public static class PackageRunner
         }
         using (var stream = staging.Create(ResultsFileName))
         {
-            ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut);
+            var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
+            ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut, kept, package.Tables.Select(t => t.Id).ToList());
         }
+        var previous = request.Tables is not null && File.Exists(Path.Combine(request.OutputFolder, ManifestJson.FileName))
+            ? ManifestJson.Read(request.OutputFolder)
+            : null;
+        ManifestStaging.Write(staging, request, dataFolder, study.Study.Id, run.RunTime, inputs, manifestTables, previous);
         var files = staging.Commit();
         foreach (var (table, _) in laidOut)
         {
@@ -98,20 +87,103 @@ public static class PackageRunner
         return new RunSummary(files, laidOut.Count, warnings, clock.Elapsed);
     }
 
+    /// <summary>What every table's layout shares: the run's templates and the study's arm groups.</summary>
+    private sealed record LayoutContext(TemplateSet Templates, IReadOnlyList<ColumnGroup> Groups);
+
     /// <summary>The study's arm groups, keyed like the result columns (the arm value as a results key).</summary>
     private static IReadOnlyList<ColumnGroup> ColumnGroupsOf(StudySpec study) =>
         (study.Treatment.Groups ?? [])
             .Select((g, i) => new ColumnGroup(g.Label, g.Arms.Select(ResultKeys.FromLabel).ToList(), $"/treatment/groups/{i}"))
             .ToList();
 
-    private static string DefaultDataFolder(StudySpec study)
+    /// <summary>One table analysed, laid out and rendered (to bytes, not yet written).</summary>
+    private sealed record BuiltTable(LaidOutTable Table, IReadOnlyList<string> Warnings, ManifestTable Manifest,
+        IReadOnlyList<(string Name, byte[] Bytes)> Files);
+
+    /// <summary>
+    /// Builds the tables in parallel (each reads the shared, immutable datasets) and returns them in
+    /// package order. When tables fail, the first failing table's error is the one reported, so the
+    /// message does not depend on thread timing.
+    /// </summary>
+    private static BuiltTable[] BuildTables(IReadOnlyList<TableSpec> selected, RunRequest request, StudySpec study, StudyData data,
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context, IRunLog log)
     {
+        var built = new BuiltTable[selected.Count];
+        var failures = new Exception?[selected.Count];
+        var done = 0;
+        Parallel.For(0, selected.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        {
+            try
+            {
+                var clock = Stopwatch.StartNew();
+                built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page, context);
+                log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms");
+            }
+            catch (Exception e)
+            {
+                failures[i] = e;
+            }
+            log.Progress(Interlocked.Increment(ref done), selected.Count, selected[i].Id);
+        });
+        if (failures.FirstOrDefault(f => f is not null) is { } failure)
+        {
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(failure).Throw();
+        }
+        return built;
+    }
+
+    private static BuiltTable BuildTable(TableSpec table, RunRequest request, StudySpec study, StudyData data,
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context)
+    {
+        var result = TableAnalyses.For(table).Analyze(study, table, data);
+        if (dataWarnings.Count > 0)
+        {
+            result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
+        }
+        var manifest = new ManifestTable(table.Id, inputs.ForTable(result.Provenance.SpecFile, result.Provenance.Datasets),
+            request.Renderers.Select(r => OutputFileNames.ForTable(table.Id, r.Extension)).ToList(), ManifestStaging.Timestamp(run.RunTime));
+        LaidOutTable laidOut;
+        try
+        {
+            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, context.Groups);
+        }
+        catch (ColumnGroupException e)
+        {
+            throw new SpecException(study.Source.Problem(e.Where, $"table {table.Id}: {e.Message}"));
+        }
+        laidOut = laidOut with
+        {
+            Document = TableTemplates.Apply(context.Templates, laidOut.Document, TemplateValues.For(study, table, result, laidOut.Document, run)),
+        };
+        var files = new List<(string, byte[])>();
+        foreach (var renderer in request.Renderers)
+        {
+            using var buffer = new MemoryStream();
+            renderer.Write(laidOut.Document, buffer);
+            var bytes = buffer.ToArray();
+            if (PackageNormalizer.IsPackage(bytes))
+            {
+                bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
+            }
+            files.Add((OutputFileNames.ForTable(table.Id, renderer.Extension), bytes));
+        }
+        return new BuiltTable(laidOut, result.Warnings, manifest, files);
+    }
+
+    private static string DefaultDataFolder(SpecPackage package)
+    {
+        var study = package.Study;
         if (study.Data.Folder is null)
         {
             throw new SpecException(study.Source.Problem("/data",
                 "no data folder: give --data on the command line or data.folder in the study spec"));
         }
-        return Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
+        var folder = Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
+        if (!package.Folders.Allows(folder))
+        {
+            throw new SpecException(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder) + ", or give --data"));
+        }
+        return folder;
     }
 
     private static PageSettings PageFrom(PageSpec? spec)

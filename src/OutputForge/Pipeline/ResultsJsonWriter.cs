@@ -11,8 +11,13 @@ namespace OutputForge.Pipeline;
 /// </summary>
 public static class ResultsJsonWriter
 {
-    public static void Write(Stream output, string studyId, RunFacts run, IReadOnlyList<(LaidOutTable Table, IReadOnlyList<string> Warnings)> tables)
+    /// <param name="kept">When only some tables were produced: the existing entries of the others, written back in <paramref name="tableOrder"/>.</param>
+    /// <param name="tableOrder">Every table id of the package, in package order (needed with <paramref name="kept"/>).</param>
+    public static void Write(Stream output, string studyId, RunFacts run, IReadOnlyList<(LaidOutTable Table, IReadOnlyList<string> Warnings)> tables,
+        Workflow.KeptResults? kept = null, IReadOnlyList<string>? tableOrder = null)
     {
+        var produced = tables.ToDictionary(t => t.Table.Document.TableId, StringComparer.Ordinal);
+        var order = kept is null || tableOrder is null ? produced.Keys.ToList() : tableOrder;
         using var json = new Utf8JsonWriter(output, new JsonWriterOptions { Indented = true });
         json.WriteStartObject();
         json.WriteString("tool", "OutputForge");
@@ -21,8 +26,17 @@ public static class ResultsJsonWriter
         json.WriteString("runTime", run.RunTime.UtcDateTime.ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", System.Globalization.CultureInfo.InvariantCulture));
         json.WriteString("caution", TableLayoutBuilder.Caution);
         json.WriteStartArray("tables");
-        foreach (var (table, warnings) in tables)
+        foreach (var id in order)
         {
+            if (!produced.TryGetValue(id, out var entry))
+            {
+                if (kept is not null && kept.Tables.TryGetValue(id, out var keptTable))
+                {
+                    keptTable.WriteTo(json);
+                }
+                continue;
+            }
+            var (table, warnings) = entry;
             var document = table.Document;
             json.WriteStartObject();
             json.WriteString("id", document.TableId);
@@ -43,11 +57,21 @@ public static class ResultsJsonWriter
         }
         json.WriteEndArray();
         json.WriteStartArray("records");
-        foreach (var (table, _) in tables)
+        foreach (var id in order)
         {
-            foreach (var record in table.Records)
+            if (produced.TryGetValue(id, out var entry))
             {
-                WriteRecord(json, record);
+                foreach (var record in entry.Table.Records)
+                {
+                    WriteRecord(json, record);
+                }
+            }
+            else if (kept is not null && kept.Records.TryGetValue(id, out var keptRecords))
+            {
+                foreach (var record in keptRecords)
+                {
+                    record.WriteTo(json);
+                }
             }
         }
         json.WriteEndArray();

@@ -19,10 +19,12 @@ public static class StatisticNames
     public const string ThirdQuartile = "q3";
     public const string Minimum = "min";
     public const string Maximum = "max";
+    public const string EventCount = "events";
 
     public static readonly IReadOnlyList<string> All =
     [
         SubjectCount, Denominator, Percent, Estimate, Lower, Upper, PValue, TestStatistic, DegreesOfFreedom,
         Mean, StandardDeviation, Median, FirstQuartile, ThirdQuartile, Minimum, Maximum,
+        EventCount,
     ];
 }

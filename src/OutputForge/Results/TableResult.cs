@@ -15,7 +15,8 @@ public sealed record TableResult(
     IReadOnlyList<string> Footnotes,
     TableProvenance Provenance,
     int PercentDecimals = 1,
-    double PValueFloor = 0.001);
+    double PValueFloor = 0.001,
+    PercentStyle? PercentStyle = null);
 
 /// <summary>
 /// A result column. <paramref name="Key"/> is the stable key used in results.json (e.g. the arm

@@ -11,11 +11,40 @@ public static class SpecLoader
     /// <summary>The file name looked for when --spec names a folder.</summary>
     public const string StudyFileName = "study.json";
 
-    public static SpecPackage Load(string specPath)
+    public static SpecPackage Load(string specPath) => Load(specPath, []);
+
+    /// <summary>Loads the package; besides the study file's own folder tree, files may come from <paramref name="allowedFolders"/>.</summary>
+    public static SpecPackage Load(string specPath, IReadOnlyList<string> allowedFolders)
     {
-        var studyFile = ResolveStudyFile(specPath);
-        var study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
         var problems = new List<SpecProblem>();
+        var package = LoadCollecting(specPath, problems, allowedFolders);
+        if (problems.Count > 0)
+        {
+            throw new SpecException(problems);
+        }
+        return package!;
+    }
+
+    /// <summary>
+    /// Reads what can be read and adds every problem to <paramref name="problems"/> instead of
+    /// stopping: the study spec with the table specs that passed their schema, or null when the
+    /// study file itself cannot be used. For `check`, which reports everything at once.
+    /// </summary>
+    public static SpecPackage? LoadCollecting(string specPath, List<SpecProblem> problems, IReadOnlyList<string>? allowedFolders = null)
+    {
+        string studyFile;
+        StudySpec study;
+        try
+        {
+            studyFile = ResolveStudyFile(specPath);
+            study = SpecFileReader.Read<StudySpec>(studyFile, SpecSchemas.Study, (s, source) => s.Source = source);
+        }
+        catch (SpecException e)
+        {
+            problems.AddRange(e.Problems);
+            return null;
+        }
+        var policy = new SpecFolderPolicy(Path.GetDirectoryName(Path.GetFullPath(studyFile))!, allowedFolders);
         var tables = new List<TableSpec>();
         var listed = new HashSet<string>(StringComparer.Ordinal);
         for (var i = 0; i < study.Tables.Count; i++)
@@ -27,6 +56,11 @@ public static class SpecLoader
                 continue;
             }
             var file = Path.Combine(Path.GetDirectoryName(studyFile)!, relative);
+            if (!policy.Allows(file))
+            {
+                problems.Add(study.Source.Problem($"/tables/{i}", policy.Explain(relative)));
+                continue;
+            }
             if (!File.Exists(file))
             {
                 problems.Add(study.Source.Problem($"/tables/{i}", $"no such table spec file '{relative}' (relative to {Path.GetFileName(studyFile)})"));
@@ -43,11 +77,7 @@ public static class SpecLoader
         }
         problems.AddRange(CheckStudy(study));
         problems.AddRange(CheckReferences(study, tables));
-        if (problems.Count > 0)
-        {
-            throw new SpecException(problems);
-        }
-        return new SpecPackage(study, tables);
+        return new SpecPackage(study, tables, policy);
     }
 
     /// <summary>A study file path: the file itself, or study.json inside a folder.</summary>
@@ -87,6 +117,21 @@ public static class SpecLoader
             if (population.Order is not null && population.Treatment is null)
             {
                 yield return study.Source.Problem($"/populations/{name}/order", "'order' needs 'treatment' beside it");
+            }
+        }
+        if (study.Treatment.Arms is { } arms)
+        {
+            for (var i = 0; i < arms.Count; i++)
+            {
+                if (arms.FindIndex(a => a.Value == arms[i].Value) < i)
+                {
+                    yield return study.Source.Problem($"/treatment/arms/{i}/value", $"arm '{arms[i].Value}' is listed twice");
+                }
+            }
+            if (!arms.Exists(a => a.Value == study.Treatment.Control))
+            {
+                yield return study.Source.Problem("/treatment/control",
+                    $"control arm '{study.Treatment.Control}' is not one of the arms listed{NearestName.Hint(study.Treatment.Control, arms.Select(a => a.Value).ToList())}");
             }
         }
     }

@@ -54,6 +54,12 @@ public sealed class TreatmentSpec
     /// <summary>Optional display labels by data value (e.g. to shorten long arm names).</summary>
     public Dictionary<string, string>? Labels { get; init; }
 
+    /// <summary>
+    /// Optional list of the arms (values of the treatment variable) with their display order: used
+    /// by mock shells, which have no data, and checked against the data by `check`.
+    /// </summary>
+    public List<ArmSpec>? Arms { get; init; }
+
     /// <summary>Optional groupings of arms printed as a spanning header over their columns (e.g. all doses of one compound).</summary>
     public List<ArmGroupSpec>? Groups { get; init; }
 }
@@ -64,6 +70,13 @@ public sealed class ArmGroupSpec
     public required string Label { get; init; }
 
     public required List<string> Arms { get; init; }
+}
+
+/// <summary>One treatment arm as the study spec lists it: its value of the treatment variable and its display order.</summary>
+public sealed class ArmSpec
+{
+    public required string Value { get; init; }
+    public double Order { get; init; }
 }
 
 public sealed class PopulationSpec

@@ -15,6 +15,10 @@ public sealed class TableSpec
     public string? Subset { get; init; }
 
     public EndpointSpec? Endpoint { get; init; }
+    public PopulationsTableSpec? Populations { get; init; }
+    public DispositionTableSpec? Disposition { get; init; }
+    public DemographicsTableSpec? Demographics { get; init; }
+    public AdverseEventsTableSpec? AdverseEvents { get; init; }
     public StatisticsSpec Statistics { get; init; } = new();
     public List<string> Footnotes { get; init; } = [];
 

@@ -31,7 +31,7 @@ public static class TemplateValues
                 ("method_notes", Array(result.MethodNotes)),
                 ("warnings", Array(result.Warnings)),
                 ("spec_footnotes", Array(result.Footnotes)),
-                ("data_files", DataFiles(result, run))),
+                ("data_files", DataFiles(study, result, run))),
             ["population"] = Object(
                 ("key", spec.Population),
                 ("label", result.Population),
@@ -60,15 +60,16 @@ public static class TemplateValues
         return arms;
     }
 
-    private static ScriptArray DataFiles(TableResult result, RunFacts run)
+    private static ScriptArray DataFiles(StudySpec study, TableResult result, RunFacts run)
     {
         var files = new ScriptArray();
         foreach (var name in result.Provenance.Datasets.Distinct(StringComparer.Ordinal))
         {
             files.Add(Object(
                 ("name", name),
-                ("file", run.DataFiles.GetValueOrDefault(name) ?? name),
-                ("sha256", run.DataDigests.GetValueOrDefault(name) ?? string.Empty)));
+                ("file", study.Data.Datasets.GetValueOrDefault(name) ?? name),
+                ("sha256", run.DataDigests.GetValueOrDefault(name) ?? string.Empty),
+                ("text", run.DataFiles.GetValueOrDefault(name) ?? name)));
         }
         return files;
     }

@@ -177,6 +177,12 @@ public static class BadInputCases
         };
 
         // files and folders
+        yield return S("table spec outside the spec folder", "\"t1.json\"", "\"../t1.json\"", "$.tables[0]", "outside the spec's folder", "--allow-folder");
+        yield return S("data folder outside the spec folder", "\"folder\": \"data\"", "\"folder\": \"../elsewhere\"", "$.data.folder", "outside the spec's folder");
+        yield return new BadInputCase("no data folder anywhere", ["study.json", "$.data", "no data folder: give --data"])
+        {
+            Study = [("\"folder\": \"data\", ", "")],
+        };
         yield return new BadInputCase("no such data folder", ["no such data folder"]) { ExtraArguments = ["--data", "nowhere"] };
         yield return S("dataset file missing", "\"adeff\": \"adeff.csv\"", "\"adeff\": \"adeff2.csv\"", "adeff2.csv", "no such file (dataset 'adeff'");
         yield return new BadInputCase("unknown format", ["unknown format 'pdf'"]) { ExtraArguments = ["--format", "pdf"] };

@@ -99,6 +99,6 @@ public sealed class CommandLineTests
         var (code, error) = Run("run", "--spec", study.Folder, "--out", study.OutputFolder);
         Assert.Equal(0, code);
         Assert.Contains("wrote table 1: table-1.docx, table-1.xlsx", error);
-        Assert.Matches(@"1 table, 0 warnings, 3 files in .* \(\d+\.\d\d s\)", error);
+        Assert.Matches(@"1 table, 0 warnings, \d+ files in .* \(\d+\.\d\d s\)", error);
     }
 }

@@ -84,7 +84,7 @@ public sealed class DemoResponderTableTests(DemoRunFixture demo) : IClassFixture
             }
         }
         Assert.True(File.Exists(demo.Output("results.json")));
-        Assert.Contains("4 tables", demo.Log);
+        Assert.Contains("11 tables", demo.Log);
     }
 
     [Theory]

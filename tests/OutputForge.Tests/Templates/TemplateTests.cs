@@ -34,7 +34,7 @@ public sealed class TemplateTests
         Assert.True(code == 0, error);
         var text = Preview(study);
         Assert.Contains("Table ", text);
-        Assert.Matches(@"Source: [^\n]*; data: adsl\.csv \(sha256 [0-9a-f]{12}\)", text);
+        Assert.Matches(@"Source: [^\n]*; data: adsl\.csv \(SHA-256 [0-9a-f]{8}\)", text);
     }
 
     [Fact]

@@ -1,0 +1,77 @@
+using System.Globalization;
+
+namespace OutputForge.Stats;
+
+/// <summary>
+/// The mean and the sum of squared deviations from it, computed so that data with many constant
+/// leading digits (NIST StRD SmLs07-09: 1000000000000.4, ...) keep their precision.
+/// Each double is taken as the shortest decimal that round-trips to it (the number as written in the
+/// data) and the sums are formed in 28-digit decimal arithmetic, where such data are exact. Values
+/// outside the comfortable decimal range (|x| above 1e15, or non-zero below 1e-8) fall back to the
+/// corrected two-pass algorithm in double precision (Chan, Golub and LeVeque 1983, Am Stat 37:242-247),
+/// which is already stable for ordinary data.
+/// </summary>
+internal static class CentralMoments
+{
+    public static (double Mean, double SumOfSquares) Compute(IReadOnlyList<double> values)
+    {
+        if (values.Count == 0)
+        {
+            throw new ArgumentException("At least one value is needed.", nameof(values));
+        }
+        return TryExact(values, out decimal mean, out decimal squares) ? ((double)mean, (double)squares) : TwoPass(values);
+    }
+
+    /// <summary>The decimal mean and sum of squares, or false when the values do not suit decimal arithmetic.</summary>
+    public static bool TryExact(IReadOnlyList<double> values, out decimal mean, out decimal sumOfSquares)
+    {
+        mean = 0;
+        sumOfSquares = 0;
+        var exact = new decimal[values.Count];
+        for (int i = 0; i < values.Count; i++)
+        {
+            double x = values[i];
+            double magnitude = Math.Abs(x);
+            if (magnitude > 1e15 || (x != 0 && magnitude < 1e-8))
+            {
+                return false;
+            }
+            exact[i] = decimal.Parse(x.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
+        }
+        try
+        {
+            decimal sum = 0;
+            foreach (decimal x in exact)
+            {
+                sum += x;
+            }
+            mean = sum / exact.Length;
+            decimal squares = 0;
+            foreach (decimal x in exact)
+            {
+                decimal deviation = x - mean;
+                squares += deviation * deviation;
+            }
+            sumOfSquares = squares;
+            return true;
+        }
+        catch (OverflowException)
+        {
+            return false;
+        }
+    }
+
+    private static (double Mean, double SumOfSquares) TwoPass(IReadOnlyList<double> values)
+    {
+        double mean = values.Average();
+        double squares = 0;
+        double compensation = 0;
+        foreach (double x in values)
+        {
+            double deviation = x - mean;
+            squares += deviation * deviation;
+            compensation += deviation;
+        }
+        return (mean + compensation / values.Count, Math.Max(0, squares - compensation * compensation / values.Count));
+    }
+}

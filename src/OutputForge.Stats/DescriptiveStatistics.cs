@@ -1,0 +1,73 @@
+using MathNet.Numerics.Statistics;
+
+namespace OutputForge.Stats;
+
+/// <summary>
+/// Descriptive statistics: n, mean, SD (divisor n - 1), median, Q1, Q3, minimum, maximum, geometric
+/// mean and coefficient of variation (100 SD / mean).
+/// <list type="bullet">
+/// <item>Mean and SD come from <see cref="CentralMoments"/> (exact decimal sums, or the corrected
+/// two-pass algorithm), so data with many constant leading digits keep their precision.</item>
+/// <item>The median is the middle value, or the average of the two middle values.</item>
+/// <item>Q1 and Q3 use a selectable MathNet <see cref="QuantileDefinition"/>. The default is
+/// <see cref="QuantileDefinition.R2"/> (alias SAS5): the empirical distribution function with
+/// averaging at discontinuities (Hyndman and Fan 1996, Am Stat 50:361-365, definition 2), which is
+/// the default of SAS PROC MEANS / UNIVARIATE (QNTLDEF = 5) and so what a second programmer in
+/// SAS reproduces. R's default is R7.</item>
+/// <item>Geometric mean exp(mean(ln x)) only when every value is positive; otherwise null with a note.</item>
+/// <item>CV% is null with a note when the mean is zero or the SD is unavailable.</item>
+/// </list>
+/// NaN or infinite values throw <see cref="ArgumentException"/>; missing values must be removed by the
+/// caller (the count n is then the number of non-missing values).
+/// </summary>
+public static class DescriptiveStatistics
+{
+    public static DescriptiveSummary Compute(IReadOnlyList<double> values, QuantileDefinition quartileDefinition = QuantileDefinition.R2)
+    {
+        ArgumentNullException.ThrowIfNull(values);
+        if (values.Any(v => double.IsNaN(v) || double.IsInfinity(v)))
+        {
+            throw new ArgumentException("Values must be finite numbers; remove missing values before summarising.", nameof(values));
+        }
+        int n = values.Count;
+        if (n == 0)
+        {
+            return new DescriptiveSummary(0, null, null, null, null, null, null, null, null, null) { Notes = ["No values."] };
+        }
+        var notes = new List<string>();
+        var (mean, squares) = CentralMoments.Compute(values);
+        double? sd = null;
+        if (n >= 2)
+        {
+            sd = Math.Sqrt(squares / (n - 1));
+        }
+        else
+        {
+            notes.Add("The standard deviation needs at least two values.");
+        }
+        var sorted = values.OrderBy(v => v).ToArray();
+        double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+        double q1 = SortedArrayStatistics.QuantileCustom(sorted, 0.25, quartileDefinition);
+        double q3 = SortedArrayStatistics.QuantileCustom(sorted, 0.75, quartileDefinition);
+        double? geometric = null;
+        if (sorted[0] > 0)
+        {
+            var (logMean, _) = CentralMoments.Compute(values.Select(v => Math.Log(v)).ToArray());
+            geometric = Math.Exp(logMean);
+        }
+        else
+        {
+            notes.Add("The geometric mean needs every value to be positive.");
+        }
+        double? cv = null;
+        if (sd is not null && mean != 0)
+        {
+            cv = 100 * sd.Value / mean;
+        }
+        else if (sd is not null)
+        {
+            notes.Add("The coefficient of variation is undefined because the mean is zero.");
+        }
+        return new DescriptiveSummary(n, mean, sd, median, q1, q3, sorted[0], sorted[^1], geometric, cv) { Notes = notes };
+    }
+}

@@ -1,0 +1,39 @@
+using OutputForge.Data;
+using OutputForge.Spec;
+
+namespace OutputForge.Workflow.Check;
+
+public enum CheckSeverity { Error, Warning }
+
+/// <summary>
+/// One problem `check` found: how bad, where (file, and line or line:column with the JSON path),
+/// what, and how to fix it.
+/// </summary>
+public sealed record CheckProblem(CheckSeverity Severity, string File, string Where, string Message, string Hint)
+{
+    public static CheckProblem FromSpec(SpecProblem problem, CheckSeverity severity = CheckSeverity.Error)
+    {
+        var where = problem.Line is { } line ? (problem.Column is { } column ? $"{line}:{column}" : $"{line}") : string.Empty;
+        where = where.Length == 0 ? problem.JsonPath : $"{where} {problem.JsonPath}";
+        return new CheckProblem(problem.IsWarning ? CheckSeverity.Warning : severity, problem.File, where, problem.Message, CheckHints.ForSpec(problem.Message));
+    }
+
+    public static CheckProblem FromData(DataException problem, string hint, CheckSeverity severity = CheckSeverity.Error)
+    {
+        var where = problem.Line is { } line ? $"line {line}" : string.Empty;
+        if (problem.Variable is not null)
+        {
+            where += (where.Length == 0 ? "" : ", ") + $"variable {problem.Variable}";
+        }
+        var message = problem.Message;
+        var prefix = problem.File + (problem.Line is null ? "" : $" line {problem.Line}") + (problem.Variable is null ? "" : $", variable {problem.Variable}") + ": ";
+        if (message.StartsWith(prefix, StringComparison.Ordinal))
+        {
+            message = message[prefix.Length..];
+        }
+        return new CheckProblem(severity, problem.File, where, message, hint);
+    }
+
+    public override string ToString() =>
+        $"{(Severity == CheckSeverity.Error ? "error" : "warning")}: {File}{(Where.Length == 0 ? "" : " " + Where)}: {Message}";
+}

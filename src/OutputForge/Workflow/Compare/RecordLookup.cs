@@ -1,0 +1,95 @@
+using System.Text.RegularExpressions;
+using OutputForge.Naming;
+
+namespace OutputForge.Workflow.Compare;
+
+/// <summary>
+/// Finds the production number a QC line means. Table ids and statistics are matched ignoring
+/// letter case (but "n" and "N" are told apart). A row (or column) is matched by its stable key first, then by its displayed label
+/// (ignoring case and runs of spaces), then by the label without footnote markers ("95% CI [a]"
+/// -> "95% CI"); a label that then fits several rows is ambiguous and must be written as a key.
+/// </summary>
+public sealed partial class RecordLookup
+{
+    private readonly Dictionary<string, List<RunRecord>> _byTable;
+
+    public RecordLookup(IEnumerable<RunRecord> records)
+    {
+        _byTable = records.GroupBy(r => r.Table, StringComparer.OrdinalIgnoreCase)
+            .ToDictionary(g => g.Key, g => g.ToList(), StringComparer.OrdinalIgnoreCase);
+    }
+
+    /// <summary>The one record the line means, or null with the reason in <paramref name="problem"/>.</summary>
+    public RunRecord? Find(QcLine line, out string? problem)
+    {
+        problem = null;
+        if (!_byTable.TryGetValue(line.Table, out var records))
+        {
+            problem = $"no table '{line.Table}' in production{NearestName.Hint(line.Table, _byTable.Keys.ToList())}";
+            return null;
+        }
+        var rows = Narrow(records, line.Row, r => r.Row, r => r.RowLabel, "row", out problem);
+        if (rows is null)
+        {
+            return null;
+        }
+        var cells = Narrow(rows, line.Column, r => r.Column, r => r.ColumnLabel, "column", out problem);
+        if (cells is null)
+        {
+            return null;
+        }
+        // "n" (subjects in the cell) and "N" (denominator) differ only in case: match exactly first.
+        var match = cells.Where(r => r.Statistic.Equals(line.Statistic, StringComparison.Ordinal)).ToList();
+        if (match.Count == 0)
+        {
+            match = cells.Where(r => r.Statistic.Equals(line.Statistic, StringComparison.OrdinalIgnoreCase)).ToList();
+        }
+        if (match.Count != 1)
+        {
+            var available = cells.Select(r => r.Statistic).Distinct().ToList();
+            problem = $"no statistic '{line.Statistic}' in this cell (it has {string.Join(", ", available)})";
+            return null;
+        }
+        return match[0];
+    }
+
+    private static List<RunRecord>? Narrow(List<RunRecord> records, string wanted, Func<RunRecord, string> key,
+        Func<RunRecord, string> label, string what, out string? problem)
+    {
+        problem = null;
+        var byKey = records.Where(r => key(r).Equals(wanted, StringComparison.OrdinalIgnoreCase)).ToList();
+        if (byKey.Count > 0)
+        {
+            return byKey;
+        }
+        foreach (var normalize in new Func<string, string>[] { Normalize, WithoutMarkers })
+        {
+            var target = normalize(wanted);
+            var byLabel = records.Where(r => normalize(label(r)) == target).ToList();
+            var keys = byLabel.Select(key).Distinct(StringComparer.Ordinal).ToList();
+            if (keys.Count == 1)
+            {
+                return byLabel;
+            }
+            if (keys.Count > 1)
+            {
+                problem = $"{what} '{wanted}' fits several {what}s ({string.Join(", ", keys)}); write the {what} key instead";
+                return null;
+            }
+        }
+        var known = records.Select(key).Distinct(StringComparer.Ordinal).ToList();
+        problem = $"no {what} '{wanted}' in table {records[0].Table}{NearestName.Hint(wanted, known)} ({what} keys: {string.Join(", ", known)})";
+        return null;
+    }
+
+    private static string Normalize(string text) => Spaces().Replace(text.Trim(), " ").ToLowerInvariant();
+
+    private static string WithoutMarkers(string text) => Normalize(Markers().Replace(text, string.Empty));
+
+    [GeneratedRegex(@"\s+")]
+    private static partial Regex Spaces();
+
+    /// <summary>Footnote markers such as "[a]" or "[1]" anywhere in a label.</summary>
+    [GeneratedRegex(@"\s*\[[A-Za-z0-9]{1,2}\]")]
+    private static partial Regex Markers();
+}

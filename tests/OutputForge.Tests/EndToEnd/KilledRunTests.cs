@@ -1,0 +1,55 @@
+using System.Diagnostics;
+using System.Security.Cryptography;
+using OutputForge.Demo;
+using OutputForge.Tests.Support;
+
+namespace OutputForge.Tests.EndToEnd;
+
+/// <summary>A run killed while it writes its outputs leaves the previous package exactly as it was.</summary>
+public sealed class KilledRunTests
+{
+    private static Dictionary<string, string> Snapshot(string folder) =>
+        Directory.GetFiles(folder).ToDictionary(Path.GetFileName, f => Convert.ToHexString(SHA256.HashData(File.ReadAllBytes(f))))!;
+
+    [Fact]
+    public void Killing_a_run_while_it_writes_leaves_the_old_outputs_intact()
+    {
+        using var folder = new TempFolder();
+        var studyFile = DemoSpecFiles.Write(folder.Path);
+        var data = folder.File("data");
+        DemoStudyGenerator.WriteCsv(data, new DemoStudyOptions(Subjects: 6000));
+        var output = folder.File("output");
+        Assert.Equal(0, OutputForge.Cli.Program.Run(["run", "--spec", studyFile, "--data", data, "--out", output, "--quiet", "--timestamp", "2026-01-01T00:00:00Z"], new StringWriter()));
+        var before = Snapshot(output);
+
+        var program = Path.Combine(AppContext.BaseDirectory, "outputforge.dll");
+        var start = new ProcessStartInfo("dotnet", ["exec", program, "run", "--spec", studyFile, "--data", data, "--out", output,
+            "--format", "docx,xlsx,txt", "--quiet", "--timestamp", "2026-06-01T00:00:00Z"])
+        {
+            RedirectStandardError = true,
+            UseShellExecute = false,
+        };
+        using var process = Process.Start(start)!;
+        var clock = Stopwatch.StartNew();
+        var killedWhileWriting = false;
+        while (!process.HasExited && clock.Elapsed < TimeSpan.FromSeconds(60))
+        {
+            var staging = Directory.GetDirectories(folder.Path, ".output.staging-*");
+            if (staging.Length > 0 && Directory.GetFiles(staging[0]).Length > 0)
+            {
+                process.Kill(entireProcessTree: true);
+                killedWhileWriting = true;
+                break;
+            }
+            Thread.Sleep(1);
+        }
+        process.WaitForExit();
+
+        Assert.True(killedWhileWriting, "the run finished before it could be killed while writing");
+        Assert.Equal(before, Snapshot(output));
+
+        // The next run clears what the killed one left behind and completes.
+        Assert.Equal(0, OutputForge.Cli.Program.Run(["run", "--spec", studyFile, "--data", data, "--out", output, "--quiet"], new StringWriter()));
+        Assert.Empty(Directory.GetDirectories(folder.Path, ".output.staging-*"));
+    }
+}

@@ -1,0 +1,72 @@
+using ClosedXML.Excel;
+
+namespace OutputForge.Tests.Workflow;
+
+/// <summary>`outputforge changes` between the demo run and a rerun with one subject's Week 12 response flipped.</summary>
+public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixture<WorkflowDemoFixture>
+{
+    /// <summary>
+    /// The numbers one more responder in one arm moves (the responder kind's rows, docs/results.md):
+    /// that arm's responders and non-responders n and percent, its Wilson bounds, its difference
+    /// from control with bounds, and its test (p-value and chi-square statistic). Nothing in the
+    /// other arms, no N, and the chi-square degrees of freedom stay as they were.
+    /// </summary>
+    private static readonly string[] AffectedNumbers =
+    [
+        "responders/n", "responders/percent", "responders-ci/lower", "responders-ci/upper",
+        "nonresponders/n", "nonresponders/percent", "difference/estimate", "difference-ci/lower", "difference-ci/upper",
+        "p-value/pValue", "p-value/statistic",
+    ];
+
+    [Fact]
+    public void AFlippedResponseChangesExactlyTheAffectedNumbers()
+    {
+        Assert.NotEqual("", demo.FlippedSubject);
+        var changes = OutputForge.Workflow.Changes.RunComparison.Compare(demo.Before, demo.After);
+
+        var changedInputs = changes.ChangedInputs.Select(i => $"{i.Kind} {i.Name}").ToList();
+        Assert.Equal(["data adeff.csv"], changedInputs);
+        // Week 12 tables hold the subject: ITT always, per-protocol only when the subject is in it.
+        var expectedTables = demo.FlippedSubjectInPerProtocol ? new[] { "14.2.1.1", "14.2.1.2" } : ["14.2.1.1"];
+        Assert.Equal(expectedTables, changes.ChangedTables.Select(t => t.Id).ToArray());
+        foreach (var table in changes.ChangedTables)
+        {
+            Assert.Equal(AffectedNumbers.Order(), table.Numbers.Select(n => $"{n.Before.Row}/{n.Before.Statistic}").Order());
+            Assert.All(table.Numbers, n => Assert.Equal("qf-217-10-mg", n.Before.Column));
+            var responders = table.Numbers.Single(n => n.Before.Row == "responders" && n.Before.Statistic == "n");
+            Assert.Equal(responders.Before.Value + 1, responders.After.Value);
+            Assert.Empty(table.RowsAdded);
+            Assert.Empty(table.ColumnsRemoved);
+        }
+        Assert.Contains(changes.Tables, t => t.Id == "14.2.1.3" && t.Status == OutputForge.Workflow.Changes.ChangeStatus.Unchanged);
+        Assert.Contains(changes.Tables, t => t.Id == "14.2.1.4" && t.Status == OutputForge.Workflow.Changes.ChangeStatus.Unchanged);
+    }
+
+    [Fact]
+    public void TheCommandPrintsOnePageAndWritesTheWorkbook()
+    {
+        var report = demo.File("changes/report.xlsx");
+
+        var (code, output, error) = WorkflowDemoFixture.Run(["changes", "--before", demo.Before, "--after", demo.After, "--report", report]);
+
+        Assert.True(code == 0, error);
+        Assert.Contains("Inputs changed: 1 of 8", output);
+        Assert.Contains("data adeff.csv: changed (SHA-256 ", output);
+        Assert.Contains("Tables unchanged: 2: 14.2.1.3, 14.2.1.4", output);
+        Assert.Matches(@"responders / qf-217-10-mg / n \(Responders, n \(%\) / QF-217 10 mg\): (\d+) -> \d+", output);
+        using var workbook = new XLWorkbook(report);
+        var numbers = workbook.Worksheet("Numbers");
+        Assert.Equal(1 + AffectedNumbers.Length * (demo.FlippedSubjectInPerProtocol ? 2 : 1), numbers.LastRowUsed().RowNumber());
+        Assert.True(File.Exists(Path.ChangeExtension(report, ".txt")));
+    }
+
+    [Fact]
+    public void ARunComparedWithItselfHasNoChanges()
+    {
+        var changes = OutputForge.Workflow.Changes.RunComparison.Compare(demo.Before, demo.Before);
+
+        Assert.Empty(changes.ChangedInputs);
+        Assert.Empty(changes.ChangedTables);
+        Assert.Equal(4, changes.Tables.Count);
+    }
+}
