@@ -23,6 +23,7 @@ public static class Program
             CompareCommand.Create(output, error),
             ChangesCommand.Create(output, error),
             CheckCommand.Create(output, error),
+            ShellsCommand.Create(error),
         };
         var parse = root.Parse(args);
         return parse.Invoke(new InvocationConfiguration { Error = error });

@@ -38,7 +38,7 @@ public static class BreslowDayTest
             int m1 = s.EventTotal;
             if (m1 == 0 || m1 == s.N)
             {
-                notes.Add($"A stratum with {(m1 == 0 ? "no events" : "every subject with the event")} has no variability and was left out of the Breslow-Day test.");
+                notes.Add($"Stratum {Number(strata, s)} has {(m1 == 0 ? "no events" : "every subject with the event")}, so no variability, and was left out of the Breslow-Day test.");
                 continue;
             }
             double expected = ExpectedCell(psi, s.Total1, s.Total2, m1);
@@ -81,5 +81,17 @@ public static class BreslowDayTest
         double first = q / a;
         double second = c / q;
         return first > low - 1e-9 && first < high + 1e-9 ? first : second;
+    }
+
+    private static int Number(IReadOnlyList<StratumCounts> strata, StratumCounts stratum)
+    {
+        for (int k = 0; k < strata.Count; k++)
+        {
+            if (ReferenceEquals(strata[k], stratum))
+            {
+                return k + 1;
+            }
+        }
+        return 0;
     }
 }

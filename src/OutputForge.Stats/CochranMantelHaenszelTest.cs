@@ -9,8 +9,8 @@ namespace OutputForge.Stats;
 /// V_k = n1k n2k m1k m2k / (N_k^2 (N_k - 1)), one degree of freedom.
 /// With the continuity correction the numerator is (|sum (a_k - E_k)| - 1/2)^2, applied only when
 /// |sum (a_k - E_k)| is at least 1/2, as in R's mantelhaen.test (otherwise the correction would
-/// overshoot). Strata without subjects in a group are skipped and reported; so are strata with a
-/// single subject, whose variance N_k - 1 = 0 is undefined (R refuses such tables).
+/// overshoot). Strata without subjects in a group are skipped and reported (a stratum kept therefore
+/// has N_k of at least 2, so its variance is defined).
 /// </summary>
 public static class CochranMantelHaenszelTest
 {
@@ -26,11 +26,6 @@ public static class CochranMantelHaenszelTest
         int contributing = 0;
         foreach (var s in used)
         {
-            if (s.N < 2)
-            {
-                notes.Add("A stratum with a single subject has no variance and was skipped.");
-                continue;
-            }
             double n = s.N;
             deviation += s.A - s.Total1 * (double)s.EventTotal / n;
             variance += s.Total1 * (double)s.Total2 * s.EventTotal * (n - s.EventTotal) / (n * n * (n - 1));

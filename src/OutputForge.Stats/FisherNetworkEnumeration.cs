@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using MathNet.Numerics;
 
 namespace OutputForge.Stats;
@@ -15,18 +16,23 @@ namespace OutputForge.Stats;
 /// known exactly, the first two by dynamic programming over the remaining columns. A partial path
 /// with past value P is then counted whole when P + largest completion is at most the observed V (all
 /// its completions are no more probable than the observed table), dropped when P + smallest
-/// completion exceeds it, and extended only otherwise.
+/// completion exceeds it, and extended only otherwise. The past values of a node are kept sorted with
+/// running log-sums, so that the counted and dropped ones are found by binary search and only the
+/// undecided ones are carried; the last two or three columns are not enumerated path by path: the
+/// completions of each node are listed once, sorted, and every past value is settled by binary search.
 /// </para>
 /// <para>
 /// "No more probable" allows a tolerance of 1e-7 on the log scale, the relative tolerance R's
 /// fisher.test applies to 2 x 2 tables (FEXACT uses 3.45e-7); past values that agree to 1e-10 are
-/// merged. The work is bounded: beyond <see cref="WorkLimit"/> node visits the enumeration stops and
-/// reports that the table is too large rather than running on.
+/// merged. The work is bounded: beyond <see cref="WorkLimit"/> steps, or when one column could be split
+/// over the rows in more than <see cref="SplitLimit"/> ways, the enumeration stops and reports that the
+/// table is too large rather than running on (or approximating).
 /// </para>
 /// </summary>
 internal sealed class FisherNetworkEnumeration
 {
-    internal const long WorkLimit = 400_000_000;
+    internal const long WorkLimit = 1_000_000_000;
+    internal const double SplitLimit = 5_000_000;
     private const double LogTolerance = 1e-7;
     private const double MergeResolution = 1e10;
 
@@ -59,7 +65,7 @@ internal sealed class FisherNetworkEnumeration
         int[] columnOrder = Enumerable.Range(0, c).OrderBy(j => Enumerable.Range(0, r).Sum(i => oriented[i, j])).ToArray();
         int[] columnTotals = columnOrder.Select(j => Enumerable.Range(0, r).Sum(i => oriented[i, j])).ToArray();
         int n = rowTotals.Sum();
-        var network = new FisherNetworkEnumeration(columnTotals, n);
+        var network = new FisherNetworkEnumeration(columnTotals, n) { RowCount = r };
 
         double observed = 0;
         for (int i = 0; i < r; i++)
@@ -70,19 +76,28 @@ internal sealed class FisherNetworkEnumeration
             }
         }
         double constant = rowTotals.Sum(v => network._logFactorial[v]) + columnTotals.Sum(v => network._logFactorial[v]) - network._logFactorial[n];
-        return network.Enumerate(rowTotals, observed + LogTolerance, constant);
+        try
+        {
+            // Splits of a column are listed one node at a time; a column with more than SplitLimit
+            // possible splits makes the table too large before any such list is built.
+            if (columnTotals.Any(total => SplitCount(total, r) > SplitLimit))
+            {
+                return null;
+            }
+            return network.Enumerate(rowTotals, observed + LogTolerance, constant);
+        }
+        catch (WorkLimitReachedException)
+        {
+            return null;
+        }
     }
 
     private double? Enumerate(int[] rowTotals, double threshold, double constant)
     {
         int stages = _columnTotals.Length;
-        int penultimate = stages - 2;
-        var current = new Dictionary<NodeKey, Dictionary<long, double>>
-        {
-            [NodeKey.Of(rowTotals)] = new() { [0] = 1 },
-        };
-        double pValue = 0;
-        var (rootMax, rootMin) = Bounds(0, NodeKey.Of(rowTotals));
+        int terminal = TerminalStage();
+        var root = NodeKey.Of(rowTotals);
+        var (rootMax, rootMin) = Bounds(0, root);
         if (rootMax <= threshold)
         {
             return 1;
@@ -91,37 +106,44 @@ internal sealed class FisherNetworkEnumeration
         {
             return 0;
         }
-        for (int stage = 0; stage < penultimate; stage++)
+        var current = new Dictionary<NodeKey, Dictionary<long, double>> { [root] = new() { [0] = 1 } };
+        double pValue = 0;
+        for (int stage = 0; stage < terminal; stage++)
         {
             var next = new Dictionary<NodeKey, Dictionary<long, double>>();
             foreach (var (node, paths) in current)
             {
-                var pasts = paths.Select(path => (Past: path.Key / MergeResolution, Count: path.Value)).ToArray();
+                var pasts = SortedPasts.Of(paths);
                 foreach (var allocation in Allocations(node.Totals, _columnTotals[stage]))
                 {
                     var (step, child) = Step(node, allocation);
                     var (maxFuture, minFuture) = Bounds(stage + 1, child);
-                    double logTotalFuture = LogCompletionCount(stage + 1, child.Totals);
-                    Dictionary<long, double>? childPaths = null;
-                    foreach (var (past, count) in pasts)
+                    // Past values up to `whole` complete only into tables no more probable than the
+                    // observed one: their total is added at once. Those above `open` can never
+                    // qualify. Only the ones in between are carried to the child node.
+                    double whole = threshold - step - maxFuture;
+                    double open = threshold - step - minFuture;
+                    int counted = pasts.CountAtMost(whole);
+                    if (counted > 0)
                     {
-                        double value = past + step;
-                        if (value + maxFuture <= threshold)
-                        {
-                            pValue += count * Math.Exp(constant + value + logTotalFuture);
-                        }
-                        else if (value + minFuture <= threshold)
-                        {
-                            if (childPaths is null && !next.TryGetValue(child, out childPaths))
-                            {
-                                childPaths = new Dictionary<long, double>();
-                                next[child] = childPaths;
-                            }
-                            long key = (long)Math.Round(value * MergeResolution);
-                            childPaths[key] = childPaths.GetValueOrDefault(key) + count;
-                        }
+                        pValue += Math.Exp(constant + step + LogCompletionCount(stage + 1, child.Totals) + pasts.LogPrefix[counted]);
                     }
-                    _work += pasts.Length;
+                    int carried = pasts.CountAtMost(open);
+                    if (carried > counted)
+                    {
+                        if (!next.TryGetValue(child, out var childPaths))
+                        {
+                            childPaths = new Dictionary<long, double>();
+                            next[child] = childPaths;
+                        }
+                        for (int i = counted; i < carried; i++)
+                        {
+                            long key = (long)Math.Round((pasts.Values[i] + step) * MergeResolution);
+                            CollectionsMarshal.GetValueRefOrAddDefault(childPaths, key, out _) += pasts.Counts[i];
+                        }
+                        _work += carried - counted;
+                    }
+                    _work++;
                     if (_work > WorkLimit)
                     {
                         return null;
@@ -131,11 +153,11 @@ internal sealed class FisherNetworkEnumeration
             current = next;
         }
 
-        // Two columns remain: every completion is one split of the penultimate column, so the sorted
-        // completion values with running log-sums answer each past path by binary search.
+        // The remaining columns are few enough that every completion of a node can be listed: with the
+        // completion values sorted and their running log-sums, each past path is settled by binary search.
         foreach (var (node, paths) in current)
         {
-            var (values, logPrefix) = FinalCompletions(node);
+            var (values, logPrefix) = Completions(terminal, node);
             foreach (var (key, count) in paths)
             {
                 double past = key / MergeResolution;
@@ -145,13 +167,104 @@ internal sealed class FisherNetworkEnumeration
                     pValue += count * Math.Exp(constant + past + logPrefix[included]);
                 }
             }
-            _work += paths.Count;
+            _work += paths.Count + values.Length;
             if (_work > WorkLimit)
             {
                 return null;
             }
         }
         return Math.Min(1, pValue);
+    }
+
+    /// <summary>
+    /// The stage from which completions are listed outright: the last three columns when their free
+    /// splits number at most a million (the last column is forced), otherwise the last two.
+    /// </summary>
+    private int TerminalStage()
+    {
+        int stages = _columnTotals.Length;
+        if (stages < 3)
+        {
+            return stages - 2;
+        }
+        double splits = SplitCount(_columnTotals[stages - 3], RowCount) * SplitCount(_columnTotals[stages - 2], RowCount);
+        return splits <= 1e6 ? stages - 3 : stages - 2;
+    }
+
+    private int RowCount { get; set; }
+
+    /// <summary>Number of ways to split a total over r rows ignoring capacities: C(total + r - 1, r - 1).</summary>
+    private static double SplitCount(int total, int rows) => SpecialFunctions.Binomial(total + rows - 1, rows - 1);
+
+    /// <summary>Sorted completion values of a node from <paramref name="stage"/> on, with running log-sums.</summary>
+    private (double[] Values, double[] LogPrefix) Completions(int stage, NodeKey node)
+    {
+        var values = new List<double>();
+        Collect(stage, node.Totals, 0);
+        var sorted = values.ToArray();
+        Array.Sort(sorted);
+        var logPrefix = new double[sorted.Length + 1];
+        logPrefix[0] = double.NegativeInfinity;
+        for (int k = 0; k < sorted.Length; k++)
+        {
+            logPrefix[k + 1] = LogAdd(logPrefix[k], sorted[k]);
+        }
+        return (sorted, logPrefix);
+
+        void Collect(int at, int[] totals, double sofar)
+        {
+            if (at == _columnTotals.Length - 1)
+            {
+                double last = sofar;
+                foreach (int t in totals)
+                {
+                    last -= _logFactorial[t];
+                }
+                values.Add(last);
+                return;
+            }
+            foreach (var allocation in Allocations(totals, _columnTotals[at]))
+            {
+                double step = 0;
+                var remaining = new int[totals.Length];
+                for (int i = 0; i < remaining.Length; i++)
+                {
+                    step -= _logFactorial[allocation[i]];
+                    remaining[i] = totals[i] - allocation[i];
+                }
+                Collect(at + 1, remaining, sofar + step);
+            }
+        }
+    }
+
+    private static double LogAdd(double a, double b)
+        => double.IsNegativeInfinity(a) ? b : Math.Max(a, b) + Math.Log(1 + Math.Exp(-Math.Abs(a - b)));
+
+    /// <summary>The past values of a node in increasing order, their path counts, and running log-sums of count x exp(value).</summary>
+    private sealed class SortedPasts
+    {
+        public required double[] Values { get; init; }
+        public required double[] Counts { get; init; }
+        public required double[] LogPrefix { get; init; }
+
+        public static SortedPasts Of(Dictionary<long, double> paths)
+        {
+            var keys = paths.Keys.ToArray();
+            Array.Sort(keys);
+            var values = new double[keys.Length];
+            var counts = new double[keys.Length];
+            var logPrefix = new double[keys.Length + 1];
+            logPrefix[0] = double.NegativeInfinity;
+            for (int i = 0; i < keys.Length; i++)
+            {
+                values[i] = keys[i] / MergeResolution;
+                counts[i] = paths[keys[i]];
+                logPrefix[i + 1] = LogAdd(logPrefix[i], Math.Log(counts[i]) + values[i]);
+            }
+            return new SortedPasts { Values = values, Counts = counts, LogPrefix = logPrefix };
+        }
+
+        public int CountAtMost(double limit) => UpperBound(Values, limit);
     }
 
     private (double Step, NodeKey Child) Step(NodeKey node, int[] allocation)
@@ -164,36 +277,6 @@ internal sealed class FisherNetworkEnumeration
             remaining[i] = node.Totals[i] - allocation[i];
         }
         return (step, NodeKey.Of(remaining));
-    }
-
-    /// <summary>
-    /// For a node with two columns left: the completion values sorted ascending, and logPrefix[k] =
-    /// log of the sum of exp over the first k of them (logPrefix[0] unused).
-    /// </summary>
-    private (double[] Values, double[] LogPrefix) FinalCompletions(NodeKey node)
-    {
-        int stage = _columnTotals.Length - 2;
-        var values = new List<double>();
-        foreach (var allocation in Allocations(node.Totals, _columnTotals[stage]))
-        {
-            double value = 0;
-            for (int i = 0; i < allocation.Length; i++)
-            {
-                value -= _logFactorial[allocation[i]] + _logFactorial[node.Totals[i] - allocation[i]];
-            }
-            values.Add(value);
-        }
-        var sorted = values.ToArray();
-        Array.Sort(sorted);
-        var logPrefix = new double[sorted.Length + 1];
-        logPrefix[0] = double.NegativeInfinity;
-        for (int k = 0; k < sorted.Length; k++)
-        {
-            double a = logPrefix[k];
-            double b = sorted[k];
-            logPrefix[k + 1] = double.IsNegativeInfinity(a) ? b : Math.Max(a, b) + Math.Log(1 + Math.Exp(-Math.Abs(a - b)));
-        }
-        return (sorted, logPrefix);
     }
 
     private static int UpperBound(double[] sorted, double limit)
@@ -251,14 +334,17 @@ internal sealed class FisherNetworkEnumeration
             var (childMax, childMin) = Bounds(stage + 1, child);
             max = Math.Max(max, step + childMax);
             min = Math.Min(min, step + childMin);
-            _work++;
+            if (++_work > WorkLimit)
+            {
+                throw new WorkLimitReachedException();
+            }
         }
         _bounds[stage][node] = (max, min);
         return (max, min);
     }
 
     /// <summary>Every way to split a column total over the rows without exceeding their remaining totals.</summary>
-    private static List<int[]> Allocations(int[] capacities, int total)
+    private List<int[]> Allocations(int[] capacities, int total)
     {
         var result = new List<int[]>();
         var suffixCapacity = new int[capacities.Length + 1];
@@ -276,6 +362,10 @@ internal sealed class FisherNetworkEnumeration
             {
                 current[row] = left;
                 result.Add((int[])current.Clone());
+                if (++_work > WorkLimit)
+                {
+                    throw new WorkLimitReachedException();
+                }
                 return;
             }
             int lowest = Math.Max(0, left - suffixCapacity[row + 1]);
@@ -332,4 +422,7 @@ internal sealed class FisherNetworkEnumeration
 
         public override int GetHashCode() => _hash;
     }
+
+    /// <summary>Unwinds the bound recursion when the work limit is reached; never leaves this class.</summary>
+    private sealed class WorkLimitReachedException : Exception;
 }

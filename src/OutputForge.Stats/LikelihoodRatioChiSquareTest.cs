@@ -7,7 +7,7 @@ namespace OutputForge.Stats;
 /// Categorical Data Analysis 3rd ed., section 3.2.1; Wilks 1938): G^2 = 2 sum O ln(O / E) with
 /// E_ij = R_i C_j / n and (r - 1)(c - 1) degrees of freedom; empty cells contribute 0 (the limit of
 /// O ln O). The p-value is the chi-square upper tail Q(df/2, G^2/2). Zero-total rows and columns are
-/// dropped and reported as for <see cref="PearsonChiSquareTest"/>.
+/// dropped and reported as for <see cref="PearsonChiSquareTest"/>, and so are expected counts below 5.
 /// </summary>
 public static class LikelihoodRatioChiSquareTest
 {
@@ -41,6 +41,10 @@ public static class LikelihoodRatioChiSquareTest
         statistic = Math.Max(0, statistic);
         int df = (r - 1) * (c - 1);
         double p = SpecialFunctions.GammaUpperRegularized(df / 2.0, statistic / 2.0);
+        if (SmallExpectedCountNote.For(reduced) is { } warning)
+        {
+            notes.Add(warning);
+        }
         return new TestResult(MethodName, statistic, df, p) { Notes = notes };
     }
 }

@@ -9,7 +9,7 @@ namespace OutputForge.Stats;
 /// chi-square distribution, computed as the regularized upper incomplete gamma function Q(df/2, X^2/2)
 /// so that very small p-values keep their digits.
 /// Rows or columns with a zero total are dropped (and reported) when at least a 2 x 2 table remains;
-/// otherwise the test is not estimable.
+/// otherwise the test is not estimable. Expected counts below 5 are reported in the notes.
 /// </summary>
 public static class PearsonChiSquareTest
 {
@@ -28,6 +28,10 @@ public static class PearsonChiSquareTest
         double statistic = Statistic(reduced);
         int df = (r - 1) * (c - 1);
         double p = SpecialFunctions.GammaUpperRegularized(df / 2.0, statistic / 2.0);
+        if (SmallExpectedCountNote.For(reduced) is { } warning)
+        {
+            notes.Add(warning);
+        }
         return new TestResult(MethodName, statistic, df, p) { Notes = notes };
     }
 

@@ -8,6 +8,7 @@ namespace OutputForge.Stats;
 /// of freedom. The max(0, .) keeps the correction from overshooting when |O - E| is below 1/2; the same
 /// rule is used by R's chisq.test (correct = TRUE) and scipy's chi2_contingency (correction = True).
 /// A row or column with a zero total leaves less than a 2 x 2 table: the test is then not estimable.
+/// Expected counts below 5 are reported in the notes.
 /// </summary>
 public static class YatesChiSquareTest
 {
@@ -41,6 +42,7 @@ public static class YatesChiSquareTest
             }
         }
         double p = SpecialFunctions.GammaUpperRegularized(0.5, statistic / 2);
-        return new TestResult(MethodName, statistic, 1, p);
+        var notes = SmallExpectedCountNote.For(table) is { } warning ? new List<string> { warning } : new List<string>();
+        return new TestResult(MethodName, statistic, 1, p) { Notes = notes };
     }
 }

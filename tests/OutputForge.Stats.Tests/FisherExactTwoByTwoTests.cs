@@ -10,7 +10,7 @@ public class FisherExactTwoByTwoTests
 
     /// <summary>
     /// R 4.2.2 fisher.test and scipy 1.10.1 stats.fisher_exact (two-sided), values in
-    /// Oracles/phase1_oracles.json, produced by Oracles/generate_phase1_oracles.py.
+    /// Oracles/proportion_table_oracles.json, produced by Oracles/generate_proportion_table_oracles.py.
     /// </summary>
     [Theory]
     [MemberData(nameof(Cases))]

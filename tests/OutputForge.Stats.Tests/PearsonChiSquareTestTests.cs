@@ -8,7 +8,7 @@ public class PearsonChiSquareTestTests
         row.GetProperty("statistic").GetDouble(), row.GetProperty("p").GetDouble(), row.GetProperty("df").GetInt32(),
     });
 
-    /// <summary>scipy 1.10.1 chi2_contingency(correction=False), values in Oracles/phase1_oracles.json.</summary>
+    /// <summary>scipy 1.10.1 chi2_contingency(correction=False), values in Oracles/proportion_table_oracles.json.</summary>
     [Theory]
     [MemberData(nameof(ScipyCases))]
     public void MatchesScipy(int[][] rows, double statistic, double p, int df)
@@ -50,6 +50,7 @@ public class PearsonChiSquareTestTests
         Assert.Equal(2, full.DegreesOfFreedom);
         Assert.Single(full.Notes);
         Assert.Contains("Column 2", full.Notes[0]);
+        Assert.Empty(reduced.Notes);
     }
 
     [Fact]
@@ -60,6 +61,18 @@ public class PearsonChiSquareTestTests
         Assert.Contains("one row", result.NotEstimableReason);
         Assert.False(PearsonChiSquareTest.Compute(new int[2, 2]).IsEstimable);
         Assert.False(PearsonChiSquareTest.Compute(new[,] { { 1, 2, 3 } }).IsEstimable);
+    }
+
+    /// <summary>[[3, 1], [1, 3]] has every expected count 2: the warning must travel with each chi-square result.</summary>
+    [Fact]
+    public void SmallExpectedCountsAreReported()
+    {
+        var table = new[,] { { 3, 1 }, { 1, 3 } };
+        foreach (var result in new[] { PearsonChiSquareTest.Compute(table), YatesChiSquareTest.Compute(table), LikelihoodRatioChiSquareTest.Compute(table) })
+        {
+            Assert.Contains(result.Notes, n => n.StartsWith("4 of 4 cells (100%) have expected counts below 5 (smallest 2.00)", StringComparison.Ordinal));
+        }
+        Assert.Empty(PearsonChiSquareTest.Compute(new[,] { { 10, 20, 30 }, { 20, 15, 5 } }).Notes);
     }
 
     [Fact]

@@ -2,7 +2,7 @@ namespace OutputForge.Stats.Tests;
 
 /// <summary>
 /// Difference intervals against statsmodels 0.13.5 confint_proportions_2indep (methods wald,
-/// agresti-caffo and newcomb; values in Oracles/phase1_oracles.json). statsmodels leaves
+/// agresti-caffo and newcomb; values in Oracles/proportion_table_oracles.json). statsmodels leaves
 /// Agresti-Caffo limits outside [-1, 1] untruncated, so its values are truncated before comparing.
 /// Its "score" method is deliberately not used as an oracle: in this version it does not reproduce
 /// the Miettinen-Nurminen interval as published.

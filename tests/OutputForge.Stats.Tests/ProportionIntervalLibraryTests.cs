@@ -2,7 +2,7 @@ namespace OutputForge.Stats.Tests;
 
 /// <summary>
 /// Single-proportion intervals against statsmodels 0.13.5 proportion_confint (values in
-/// Oracles/phase1_oracles.json, produced by Oracles/generate_phase1_oracles.py): agresti_coull,
+/// Oracles/proportion_table_oracles.json, produced by Oracles/generate_proportion_table_oracles.py): agresti_coull,
 /// jeffreys, beta (Clopper-Pearson), wilson and normal (Wald), at 90%, 95% and 99%.
 /// statsmodels' Jeffreys interval does not apply the boundary rule of Brown, Cai and DasGupta (2001,
 /// Stat Sci 16:101-133, section 4.1.2: lower limit 0 when x = 0, upper limit 1 when x = n) that this

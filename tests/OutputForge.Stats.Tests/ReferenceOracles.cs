@@ -3,14 +3,14 @@ using System.Text.Json;
 namespace OutputForge.Stats.Tests;
 
 /// <summary>
-/// Values produced by Oracles/generate_phase1_oracles.py (scipy 1.10.1, statsmodels 0.13.5,
+/// Values produced by Oracles/generate_proportion_table_oracles.py (scipy 1.10.1, statsmodels 0.13.5,
 /// R 4.2.2; the exact versions are recorded inside the JSON file next to the values).
 /// </summary>
 internal static class ReferenceOracles
 {
-    private static readonly Lazy<JsonDocument> Phase1Document = new(() =>
+    private static readonly Lazy<JsonDocument> ProportionTableDocument = new(() =>
         JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
-            RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "phase1_oracles.json"))));
+            RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "proportion_table_oracles.json"))));
 
     private static readonly Lazy<JsonDocument> FisherDocument = new(() =>
         JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
@@ -24,7 +24,7 @@ internal static class ReferenceOracles
         JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
             RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "ratio_strata_oracles.json"))));
 
-    public static JsonElement Phase1 => Phase1Document.Value.RootElement;
+    public static JsonElement ProportionTable => ProportionTableDocument.Value.RootElement;
 
     /// <summary>statsmodels 0.13.5 / R 4.2.2 values from Oracles/generate_ratio_strata_oracles.py.</summary>
     public static JsonElement RatioStrata => RatioStrataDocument.Value.RootElement;
@@ -52,5 +52,5 @@ internal static class ReferenceOracles
         return table;
     }
 
-    public static IEnumerable<JsonElement> Section(string name) => Phase1.GetProperty(name).EnumerateArray();
+    public static IEnumerable<JsonElement> Section(string name) => ProportionTable.GetProperty(name).EnumerateArray();
 }

@@ -87,6 +87,8 @@ public class StratifiedAnalysisTests
         var result = BreslowDayTest.Compute(ReferenceOracles.Strata("rabbits"));
         Assert.Equal(2, result.DegreesOfFreedom);
         Assert.Equal(2, result.Notes.Count);
+        Assert.Contains(result.Notes, n => n.StartsWith("Stratum 1 has no events", StringComparison.Ordinal));
+        Assert.Contains(result.Notes, n => n.StartsWith("Stratum 5 has every subject with the event", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -13,6 +13,8 @@ public static class TableAnalyses
         new Disposition.DispositionAnalysis(),
         new Demographics.DemographicsAnalysis(),
         new AdverseEvents.AdverseEventAnalysis(),
+        new Continuous.ContinuousAnalysis(),
+        new TimeToEvent.TimeToEventAnalysis(),
     }.ToDictionary(a => a.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;

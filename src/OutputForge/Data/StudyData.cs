@@ -21,6 +21,21 @@ public sealed class StudyData
 
     public Dataset this[string name] => _datasets[name];
 
+    /// <summary>
+    /// Study data made of datasets built in memory (e.g. the stand-in records mock shells are laid
+    /// out from), held to the same ADaM checks as data read from files.
+    /// </summary>
+    public static StudyData FromDatasets(string folder, IEnumerable<Dataset> datasets)
+    {
+        var byName = datasets.ToDictionary(d => d.Name, StringComparer.Ordinal);
+        AdamConformance.CheckSubjectLevel(byName["adsl"]);
+        foreach (var dataset in byName.Values.Where(d => d.Name != "adsl"))
+        {
+            AdamConformance.CheckAgainstSubjectLevel(dataset, byName["adsl"]);
+        }
+        return new StudyData(folder, byName);
+    }
+
     /// <summary>Reads every dataset the study spec lists from <paramref name="folder"/>.</summary>
     public static StudyData Load(StudySpec study, string folder) => Load(study, folder, DataReadOptions.Default, _ => { });
 

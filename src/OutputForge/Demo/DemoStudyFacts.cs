@@ -21,5 +21,5 @@ public static class DemoStudyFacts
     public static IReadOnlyList<string> ArmLabels { get; } = [PlaceboArm, LowDoseArm, HighDoseArm];
 
     /// <summary>File names written by <see cref="DemoStudyGenerator.WriteCsv"/>, in writing order.</summary>
-    public static IReadOnlyList<string> DatasetFiles { get; } = ["adsl.csv", "adeff.csv", "adae.csv"];
+    public static IReadOnlyList<string> DatasetFiles { get; } = ["adsl.csv", "adeff.csv", "adae.csv", "adtte.csv"];
 }

@@ -1,8 +1,8 @@
 namespace OutputForge.Demo;
 
 /// <summary>
-/// Writes the invented study QF217-301 as three ADaM-style CSV datasets (adsl.csv, adeff.csv,
-/// adae.csv). The output depends only on the options: each stage draws from its own seeded
+/// Writes the invented study QF217-301 as four ADaM-style CSV datasets (adsl.csv, adeff.csv,
+/// adae.csv, adtte.csv). The output depends only on the options: each stage draws from its own seeded
 /// xoshiro256** stream (one per subject for the subject-level stages), so the same options give
 /// byte-identical files on every run and machine.
 /// </summary>
@@ -33,12 +33,13 @@ public static class DemoStudyGenerator
             AdslCsv.Write(Path.Combine(folder, AdslCsv.FileName), subjects);
             AdeffCsv.Write(Path.Combine(folder, AdeffCsv.FileName), subjects);
             AdaeCsv.Write(Path.Combine(folder, AdaeCsv.FileName), subjects);
+            AdtteCsv.Write(Path.Combine(folder, AdtteCsv.FileName), subjects);
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
         {
             throw new DemoStudyException($"Cannot write the demo study into '{folder}': {e.Message}", e);
         }
-        return [AdslCsv.FileName, AdeffCsv.FileName, AdaeCsv.FileName];
+        return [AdslCsv.FileName, AdeffCsv.FileName, AdaeCsv.FileName, AdtteCsv.FileName];
     }
 
     /// <summary>All subjects, simulated and sorted by USUBJID as the datasets list them.</summary>

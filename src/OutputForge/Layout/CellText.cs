@@ -33,6 +33,33 @@ public static partial class CellText
     private static bool IsCountPercent(string pattern) =>
         pattern.StartsWith("{n} ({percent}", StringComparison.Ordinal);
 
+    /// <summary>
+    /// A placeholder showing the value's display precision, from its format alone (so every table
+    /// kind gets it): "x" for a count, "xx.x" for a percentage with one decimal, "x.xx" for a
+    /// two-decimal estimate, "0.xxx" for a p-value with the table's p-value decimals.
+    /// </summary>
+    public static string PlaceholderText(StatisticValue value, TableResult table) => value.Format switch
+    {
+        ValueFormat.Count => "x",
+        ValueFormat.Percent => "xx" + Decimals(value.Decimals),
+        ValueFormat.PValue => "0" + Decimals(NumberText.PValueDecimals(table.PValueFloor)),
+        _ => "x" + Decimals(value.Decimals),
+    };
+
+    private static string Decimals(int decimals) => decimals <= 0 ? string.Empty : "." + new string('x', decimals);
+
+    /// <summary>The cell's pattern with every statistic replaced by its <see cref="PlaceholderText"/>, e.g. "x (xx.x)" or "(x.x, x.x)".</summary>
+    public static LayoutCell ComposePlaceholder(ResultCell cell, TableResult table)
+    {
+        if (cell.Pattern.Length == 0)
+        {
+            return LayoutCell.Empty;
+        }
+        var byName = cell.Values.ToDictionary(v => v.Statistic, StringComparer.Ordinal);
+        return new LayoutCell(Placeholder().Replace(cell.Pattern, m =>
+            byName.TryGetValue(m.Groups[1].Value, out var value) ? PlaceholderText(value, table) : "x"));
+    }
+
     public static LayoutCell Compose(ResultCell cell, TableResult table)
     {
         if (cell.Pattern.Length == 0)

@@ -57,7 +57,7 @@ public static class NumberText
     /// </summary>
     public static string PValue(double p, double floor)
     {
-        var decimals = Math.Max(3, DecimalsOf(floor));
+        var decimals = PValueDecimals(floor);
         if (p < floor)
         {
             return "<" + floor.ToString("0." + new string('#', decimals), CultureInfo.InvariantCulture);
@@ -69,6 +69,9 @@ public static class NumberText
         }
         return Fixed(p, decimals);
     }
+
+    /// <summary>The decimals p-values are shown with: as many as the floor has, at least 3.</summary>
+    public static int PValueDecimals(double floor) => Math.Max(3, DecimalsOf(floor));
 
     private static int DecimalsOf(double value)
     {

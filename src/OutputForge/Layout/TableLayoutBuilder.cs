@@ -13,16 +13,19 @@ public static class TableLayoutBuilder
     public const string Caution =
         "Results must be verified under your own validated processes, the SAP and applicable regulatory guidance.";
 
+    /// <param name="display">Numbers, or placeholders of their precision for a mock shell (then no records and no warnings).</param>
+    /// <param name="groups">Column groups printed as a spanning header row above the arm labels.</param>
     public static LaidOutTable Build(TableResult table, string studyLine, RunFacts run, PageSettings page,
-        IReadOnlyList<ColumnGroup>? groups = null)
+        NumberDisplay display = NumberDisplay.Values, IReadOnlyList<ColumnGroup>? groups = null)
     {
+        var shell = display == NumberDisplay.Placeholders;
         var columns = new List<LayoutColumn> { new("label", CellAlignment.Left) };
         columns.AddRange(table.Columns.Select(c => new LayoutColumn(c.Key, CellAlignment.Center)));
         var headers = new List<HeaderRow>
         {
             new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(c.Label))]),
             new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(
-                c.SubjectCount is { } n ? string.Create(CultureInfo.InvariantCulture, $"(N={n})") : string.Empty))]),
+                c.SubjectCount is { } n ? (shell ? "(N=xx)" : string.Create(CultureInfo.InvariantCulture, $"(N={n})")) : string.Empty))]),
         };
         if (groups is { Count: > 0 } && ColumnGroupHeader.Build(table.Columns, groups) is { } groupRow)
         {
@@ -31,7 +34,7 @@ public static class TableLayoutBuilder
         var records = new List<ResultRecord>();
         var rows = new List<BodyRow>();
         var columnLabel = table.Columns.ToDictionary(c => c.Key, c => c.Label, StringComparer.Ordinal);
-        foreach (var column in table.Columns.Where(c => c.SubjectCount is not null))
+        foreach (var column in table.Columns.Where(c => c.SubjectCount is not null && !shell))
         {
             records.Add(new ResultRecord(table.TableId, "header", column.Key, StatisticNames.Denominator, column.SubjectCount,
                 column.SubjectCount!.Value.ToString(CultureInfo.InvariantCulture), "(N=xx)", column.Label, null, null));
@@ -42,8 +45,8 @@ public static class TableLayoutBuilder
             foreach (var column in table.Columns)
             {
                 var cell = row.Cells.FirstOrDefault(c => c.Column == column.Key);
-                cells.Add(cell is null ? LayoutCell.Empty : CellText.Compose(cell, table));
-                if (cell is null)
+                cells.Add(cell is null ? LayoutCell.Empty : shell ? CellText.ComposePlaceholder(cell, table) : CellText.Compose(cell, table));
+                if (cell is null || shell)
                 {
                     continue;
                 }
@@ -63,16 +66,22 @@ public static class TableLayoutBuilder
         }
         rows = [.. NumberAlignment.Apply(rows)];
         var footnotes = new List<string>(table.MethodNotes);
-        footnotes.AddRange(table.Warnings.Select(w => "Warning: " + w));
+        if (!shell)
+        {
+            footnotes.AddRange(table.Warnings.Select(w => "Warning: " + w));
+        }
         if (rows.Any(r => r.Cells.Any(c => c.Text == CellText.NotEstimable)))
         {
             footnotes.Add("NE = not estimable.");
         }
         footnotes.AddRange(table.Footnotes);
         var document = new TableDocument(table.TableId, table.Titles, table.Population, studyLine, columns, headers, rows,
-            footnotes, SourceLine(table, run), page);
+            footnotes, shell ? ShellSourceLine(table, run) : SourceLine(table, run), page);
         return new LaidOutTable(document, records);
     }
+
+    private static string ShellSourceLine(TableResult table, RunFacts run) =>
+        $"Source: {table.Provenance.SpecFile.Replace('\\', '/')}; mock shell, no data; OutputForge {run.ToolVersion}. {Caution}";
 
     private static string SourceLine(TableResult table, RunFacts run)
     {

@@ -40,7 +40,7 @@ public static class PackageRunner
                 .ToDictionary(d => d.Dataset!, d => FileDigest.Short(d.Sha256), StringComparer.Ordinal),
         };
         var page = PageFrom(study.Page);
-        var studyLine = $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
+        var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
         var context = new LayoutContext(templates, ColumnGroupsOf(study));
         var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log);
@@ -145,7 +145,7 @@ public static class PackageRunner
         LaidOutTable laidOut;
         try
         {
-            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, context.Groups);
+            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, groups: context.Groups);
         }
         catch (ColumnGroupException e)
         {
@@ -186,7 +186,11 @@ public static class PackageRunner
         return folder;
     }
 
-    private static PageSettings PageFrom(PageSpec? spec)
+    /// <summary>The study identification of the page header: "QF217-301 (Sponsor)".</summary>
+    public static string StudyLine(StudySpec study) =>
+        $"{study.Study.Id}" + (study.Study.Sponsor is null ? string.Empty : $" ({study.Study.Sponsor})");
+
+    public static PageSettings PageFrom(PageSpec? spec)
     {
         var page = PageSettings.Default;
         if (spec is null)

@@ -17,6 +17,7 @@ public static class ResultsJsonWriter
         Workflow.KeptResults? kept = null, IReadOnlyList<string>? tableOrder = null)
     {
         var produced = tables.ToDictionary(t => t.Table.Document.TableId, StringComparer.Ordinal);
+        RefuseAmbiguousKeys(tables);
         var order = kept is null || tableOrder is null ? produced.Keys.ToList() : tableOrder;
         using var json = new Utf8JsonWriter(output, new JsonWriterOptions { Indented = true });
         json.WriteStartObject();
@@ -76,6 +77,26 @@ public static class ResultsJsonWriter
         }
         json.WriteEndArray();
         json.WriteEndObject();
+    }
+
+    /// <summary>
+    /// Keys are built from labels and arm values (lower case, other characters as dashes), so two
+    /// arms such as "A+B" and "A B" would share one; a QC file or a comparison of runs could then
+    /// not tell their numbers apart. Such a results file is refused rather than written.
+    /// </summary>
+    private static void RefuseAmbiguousKeys(IReadOnlyList<(LaidOutTable Table, IReadOnlyList<string> Warnings)> tables)
+    {
+        foreach (var (table, _) in tables)
+        {
+            var clash = table.Records
+                .GroupBy(r => (r.Row, r.Column, r.Statistic))
+                .FirstOrDefault(g => g.Count() > 1);
+            if (clash is not null)
+            {
+                var labels = string.Join(" and ", clash.Select(r => $"'{r.RowLabel}' / '{r.ColumnLabel}'").Distinct());
+                throw new RunException($"table {table.Document.TableId}: {labels} share the results key {clash.Key.Row} / {clash.Key.Column} / {clash.Key.Statistic}; give the arms values that differ in their letters or digits");
+            }
+        }
     }
 
     private static void WriteRecord(Utf8JsonWriter json, ResultRecord record)

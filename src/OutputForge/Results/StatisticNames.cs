@@ -20,11 +20,13 @@ public static class StatisticNames
     public const string Minimum = "min";
     public const string Maximum = "max";
     public const string EventCount = "events";
+    public const string StandardError = "se";
 
     public static readonly IReadOnlyList<string> All =
     [
         SubjectCount, Denominator, Percent, Estimate, Lower, Upper, PValue, TestStatistic, DegreesOfFreedom,
         Mean, StandardDeviation, Median, FirstQuartile, ThirdQuartile, Minimum, Maximum,
         EventCount,
+        StandardError,
     ];
 }

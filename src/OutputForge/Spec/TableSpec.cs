@@ -22,6 +22,10 @@ public sealed class TableSpec
     public StatisticsSpec Statistics { get; init; } = new();
     public List<string> Footnotes { get; init; } = [];
 
+    public ContinuousSettings? Continuous { get; init; }
+
+    public TimeToEventSettings? TimeToEvent { get; init; }
+
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;
 }

@@ -28,6 +28,10 @@ public static class ReportSheet
         }
         sheet.Row(1).Style.Font.Bold = true;
         sheet.SheetView.FreezeRows(1);
+        // Printed, a report keeps its columns together: landscape, one page wide, header row on every page.
+        sheet.PageSetup.PageOrientation = XLPageOrientation.Landscape;
+        sheet.PageSetup.FitToPages(1, 0);
+        sheet.PageSetup.SetRowsToRepeatAtTop(1, 1);
         for (var c = 0; c < header.Count; c++)
         {
             var longest = all.Max(row => c < row.Count ? row[c].Split('\n').Max(line => line.Length) : 0);

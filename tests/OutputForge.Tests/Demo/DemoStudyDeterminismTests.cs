@@ -46,12 +46,12 @@ public sealed class DemoStudyDeterminismTests : IDisposable
     }
 
     [Fact]
-    public void Writes_the_three_datasets_and_creates_the_folder()
+    public void Writes_the_four_datasets_and_creates_the_folder()
     {
         var folder = Path.Combine(DemoStudyFiles.NewTempFolder(), "nested");
         _folders.Add(Path.GetDirectoryName(folder)!);
         var written = DemoStudyGenerator.WriteCsv(folder, new DemoStudyOptions(10, 1));
-        Assert.Equal(["adsl.csv", "adeff.csv", "adae.csv"], written);
+        Assert.Equal(["adsl.csv", "adeff.csv", "adae.csv", "adtte.csv"], written);
         Assert.All(written, f => Assert.True(File.Exists(Path.Combine(folder, f))));
     }
 

@@ -10,6 +10,7 @@ public sealed class DemoStudyFiles : IDisposable
     public CsvTable Adsl { get; }
     public CsvTable Adeff { get; }
     public CsvTable Adae { get; }
+    public CsvTable Adtte { get; }
 
     public DemoStudyFiles()
     {
@@ -18,6 +19,7 @@ public sealed class DemoStudyFiles : IDisposable
         Adsl = CsvTable.Read(Path.Combine(Folder, "adsl.csv"));
         Adeff = CsvTable.Read(Path.Combine(Folder, "adeff.csv"));
         Adae = CsvTable.Read(Path.Combine(Folder, "adae.csv"));
+        Adtte = CsvTable.Read(Path.Combine(Folder, "adtte.csv"));
     }
 
     public static string NewTempFolder() =>

@@ -19,6 +19,7 @@ public sealed class DemoStudyFingerprintTests : IClassFixture<DemoStudyFiles>
     [InlineData("adsl.csv", "49c3886fec9417d35613b00bdaf7a01eca409f77270d7114bb8f8637d6a61d4a")]
     [InlineData("adeff.csv", "029a49ee9da90a5c1887dcf1085c909f01f22ea34f69f2aaed9e52549554565a")]
     [InlineData("adae.csv", "4e504bcce87c54c6a99843aa40fd05e0afb51b611036314a701b160214c3f4b6")]
+    [InlineData("adtte.csv", "26346fd18446cf0c1450b571e5ef88284adaa5f7d50e241d1ec42e09669e5aed")]
     public void Default_study_files_have_the_recorded_digest(string file, string sha256)
     {
         var digest = Convert.ToHexStringLower(SHA256.HashData(File.ReadAllBytes(Path.Combine(_study.Folder, file))));
@@ -31,6 +32,6 @@ public sealed class DemoStudyFingerprintTests : IClassFixture<DemoStudyFiles>
         var options = new DemoStudyOptions();
         Assert.Equal(450, options.Subjects);
         Assert.Equal(301UL, options.Seed);
-        Assert.Equal(["adsl.csv", "adeff.csv", "adae.csv"], _study.WrittenFiles);
+        Assert.Equal(["adsl.csv", "adeff.csv", "adae.csv", "adtte.csv"], _study.WrittenFiles);
     }
 }

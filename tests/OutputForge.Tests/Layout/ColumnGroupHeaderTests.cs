@@ -49,7 +49,7 @@ public sealed class ColumnGroupHeaderTests
         var table = new TableResult("1", ["T"], "Pop", Columns, [], [], [], [], new TableProvenance("t.json", ["adsl"]));
         var run = new RunFacts(DateTimeOffset.UnixEpoch, "0", new Dictionary<string, string>());
 
-        var document = TableLayoutBuilder.Build(table, "S", run, PageSettings.Default, [new ColumnGroup("Active", ["low", "high"], "/g/0")]).Document;
+        var document = TableLayoutBuilder.Build(table, "S", run, PageSettings.Default, groups: [new ColumnGroup("Active", ["low", "high"], "/g/0")]).Document;
 
         Assert.Equal(3, document.HeaderRows.Count);
         Assert.Equal("Active", document.HeaderRows[0].Cells[2].Text);

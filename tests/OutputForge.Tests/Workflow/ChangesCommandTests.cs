@@ -69,4 +69,20 @@ public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixtur
         Assert.Empty(changes.ChangedTables);
         Assert.Equal(4, changes.Tables.Count);
     }
+
+    [Fact]
+    public void TablesNoLongerProducedAreListed()
+    {
+        using var folder = new OutputForge.Tests.Support.TempFolder();
+        var output = folder.File("subset");
+        Assert.Equal(0, WorkflowDemoFixture.Run(["run", "--spec", Path.Combine(demo.Root, "specs", "demo"), "--data", demo.Data,
+            "--out", output, "--format", "txt", "--tables", "14.2.1.1"]).ExitCode);
+
+        var changes = OutputForge.Workflow.Changes.RunComparison.Compare(demo.Before, output);
+
+        Assert.Equal(["14.2.1.2", "14.2.1.3", "14.2.1.4"],
+            changes.Tables.Where(t => t.Status == OutputForge.Workflow.Changes.ChangeStatus.Removed).Select(t => t.Id).ToArray());
+        Assert.Equal(OutputForge.Workflow.Changes.ChangeStatus.Unchanged, changes.Tables.Single(t => t.Id == "14.2.1.1").Status);
+        Assert.Empty(changes.ChangedInputs);
+    }
 }

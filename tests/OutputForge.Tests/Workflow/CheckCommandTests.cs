@@ -101,4 +101,18 @@ public sealed class CheckCommandTests(WorkflowDemoFixture demo) : IClassFixture<
         Assert.Contains("$.endpoint.response: ", output);
         Assert.Contains("AVALX", output);
     }
+
+    [Fact]
+    public void AMissingDataFileAndAnUnreadableOneAreBothReported()
+    {
+        using var study = new MiniStudy();
+        File.Delete(Path.Combine(study.DataFolder, "adeff.csv"));
+        File.WriteAllText(Path.Combine(study.DataFolder, "adsl.csv"), "STUDYID,USUBJID\nT1,\"T1-001\n");
+
+        var (code, output, _) = WorkflowDemoFixture.Run(["check", "--spec", study.StudyFile]);
+
+        Assert.Equal(2, code);
+        Assert.Contains("$.data.datasets.adeff: no file adeff.csv in ", output);
+        Assert.Contains("adsl.csv line 2: malformed CSV", output);
+    }
 }

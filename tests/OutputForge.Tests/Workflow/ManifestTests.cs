@@ -1,4 +1,3 @@
-using System.Text;
 using OutputForge.Tests.Support;
 using OutputForge.Workflow.Manifest;
 
@@ -75,6 +74,7 @@ public sealed class ManifestTests(WorkflowDemoFixture demo) : IClassFixture<Work
         Assert.Equal(["14.2.1.1", "14.2.1.2", "14.2.1.3", "14.2.1.4"], results.Tables.ToArray());
         var changes = OutputForge.Workflow.Changes.RunComparison.Compare(demo.Before, output);
         Assert.Empty(changes.ChangedTables);
+        Assert.Contains(results.Records, r => r.Table == "14.2.1.3");
     }
 
     [Fact]

@@ -2,8 +2,8 @@
 """Reference values for the categorical statistics tests.
 
 Run from the repository root:
-    python3 tests/OutputForge.Stats.Tests/Oracles/generate_phase1_oracles.py
-It writes tests/OutputForge.Stats.Tests/Oracles/phase1_oracles.json with
+    python3 tests/OutputForge.Stats.Tests/Oracles/generate_proportion_table_oracles.py
+It writes tests/OutputForge.Stats.Tests/Oracles/proportion_table_oracles.json with
 - Fisher's exact test two-sided p-values for 2 x 2 tables from scipy.stats.fisher_exact and from
   R's fisher.test (called through Rscript),
 - single-proportion intervals from statsmodels.stats.proportion.proportion_confint
@@ -100,7 +100,7 @@ def main():
         chi.append({"table": table, "statistic": float(stat), "p": float(p), "df": int(df)})
 
     result = {
-        "generator": "tests/OutputForge.Stats.Tests/Oracles/generate_phase1_oracles.py",
+        "generator": "tests/OutputForge.Stats.Tests/Oracles/generate_proportion_table_oracles.py",
         "versions": {"scipy": scipy.__version__, "statsmodels": statsmodels.__version__,
                      "numpy": numpy.__version__, "R": r_version},
         "fisher_2x2": fisher,
@@ -108,7 +108,7 @@ def main():
         "difference_confint": differences,
         "chi_square": chi,
     }
-    with open(os.path.join(HERE, "phase1_oracles.json"), "w", encoding="utf-8") as handle:
+    with open(os.path.join(HERE, "proportion_table_oracles.json"), "w", encoding="utf-8") as handle:
         json.dump(result, handle, indent=1)
         handle.write("\n")
 

@@ -1,0 +1,45 @@
+using System.CommandLine;
+using OutputForge.Workflow.Shells;
+
+namespace OutputForge.Cli.Commands;
+
+/// <summary>
+/// `outputforge shells`: mock tables for the statistical analysis plan, from the specs alone:
+/// the tables' layout, titles and footnotes with placeholders of the right precision for numbers.
+/// </summary>
+public static class ShellsCommand
+{
+    public static Command Create(TextWriter error)
+    {
+        var spec = new Option<string>("--spec", "-s")
+        {
+            Description = "The study spec file, or the folder holding study.json (its treatment needs an 'arms' list).",
+            Required = true,
+        };
+        var output = CommonOptions.Output("Folder for the shells (shell-<id>.docx, .xlsx, ...), created if needed.");
+        var formats = CommonOptions.Formats();
+        var quiet = CommonOptions.Quiet();
+        var tables = new Option<string[]>("--tables", "-t")
+        {
+            Description = "Only these tables, by id or pattern ('14.2.*'), comma-separated or repeated.",
+            AllowMultipleArgumentsPerToken = true,
+        };
+        var command = new Command("shells", "Write mock shells of the tables (placeholders instead of numbers); needs no data.")
+        {
+            spec, output, formats, quiet, tables,
+        };
+        command.SetAction(parse => FailureReport.Guard(error, () =>
+        {
+            var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
+            if (!valid)
+            {
+                return ExitCodes.Usage;
+            }
+            var selected = parse.GetValue(tables);
+            ShellPackage.Write(parse.GetValue(spec)!, parse.GetValue(output)!, renderers, selected is { Length: > 0 } ? selected : null,
+                CommonOptions.Log(error, parse.GetValue(quiet), verbose: false));
+            return ExitCodes.Success;
+        }));
+        return command;
+    }
+}

@@ -1,0 +1,100 @@
+using OutputForge.Stats;
+
+namespace OutputForge.Analysis.Continuous;
+
+/// <summary>
+/// The ANCOVA of one visit: change from baseline = treatment + numeric covariates + factors, fitted by
+/// least squares (OutputForge.Stats.LinearModel); LS means per arm, LS mean differences (each active arm
+/// minus control, then the spec's pairs) and, on request, the dose-response test: the same model with
+/// treatment entered as its numeric dose, testing the slope. Observations missing any model variable
+/// are left out; arms with no observation left get no LS mean. A model that cannot be fitted says why.
+/// </summary>
+internal sealed class ContinuousAncova
+{
+    public sealed record Comparison(TreatmentArm Arm, TreatmentArm Reference, LinearContrastResult? Result, string? NotEstimableReason);
+
+    public required IReadOnlyDictionary<TreatmentArm, int> CountInModel { get; init; }
+    public required IReadOnlyDictionary<TreatmentArm, LinearContrastResult> LsMeans { get; init; }
+    public required IReadOnlyList<Comparison> Comparisons { get; init; }
+    public LinearContrastResult? DoseSlope { get; init; }
+    public string? DoseNotEstimableReason { get; init; }
+    public string? NotEstimableReason { get; init; }
+    public int Excluded { get; init; }
+
+    public static ContinuousAncova Fit(IReadOnlyList<TreatmentArm> arms, IReadOnlyList<ModelObservation> candidates,
+        IReadOnlyList<RecordVariable> covariates, IReadOnlyList<RecordVariable> factors, RecordVariable? dose,
+        IReadOnlyList<(TreatmentArm First, TreatmentArm Second)> pairs, double level)
+    {
+        var observations = candidates.Where(o =>
+                covariates.All(c => double.IsFinite(c.Number(o.Row, o.Subject)))
+                && factors.All(f => f.Text(o.Row, o.Subject) is not null)
+                && (dose is null || double.IsFinite(dose.Number(o.Row, o.Subject))))
+            .ToList();
+        var counts = arms.ToDictionary(a => a, a => observations.Count(o => o.Arm == a));
+        var control = arms.First(a => a.IsControl);
+        // Control first, so that reference coding makes the control the reference level.
+        var fitted = arms.Where(a => counts[a] > 0).OrderBy(a => a.IsControl ? 0 : 1).ToList();
+        var comparisonsWanted = arms.Where(a => !a.IsControl).Select(a => (First: a, Second: control)).Concat(pairs).ToList();
+        ContinuousAncova Failed(string reason) => new()
+        {
+            CountInModel = counts,
+            LsMeans = new Dictionary<TreatmentArm, LinearContrastResult>(),
+            Comparisons = comparisonsWanted.Select(p => new Comparison(p.First, p.Second, null, reason)).ToList(),
+            DoseNotEstimableReason = dose is null ? null : reason,
+            NotEstimableReason = reason,
+            Excluded = candidates.Count - observations.Count,
+        };
+        if (fitted.Count < 2)
+        {
+            return Failed("fewer than two arms have subjects with the analysed value and all covariates");
+        }
+        var treatment = new LinearModelFactor("treatment", fitted.Select(a => a.Value).ToList(),
+            observations.Select(o => fitted.IndexOf(o.Arm)).ToList());
+        var covariateColumns = covariates.Select(c => new LinearModelCovariate(c.Name,
+            observations.Select(o => c.Number(o.Row, o.Subject)).ToList())).ToList();
+        var factorColumns = factors.Select(f => Factor(f, observations)).ToList();
+        var response = observations.Select(o => o.Response).ToList();
+        var fit = LinearModel.Fit(response, LinearModelDesign.Build(observations.Count, covariateColumns, [treatment, .. factorColumns]));
+        if (!fit.IsEstimable)
+        {
+            return Failed(fit.NotEstimableReason!);
+        }
+        var lsMeans = fitted.ToDictionary(a => a, a => LeastSquaresMeans.Mean(fit, treatment, a.Value, level));
+        var comparisons = comparisonsWanted.Select(p => counts[p.First] == 0 || counts[p.Second] == 0
+                ? new Comparison(p.First, p.Second, null, $"no subjects of {(counts[p.First] == 0 ? p.First : p.Second).Label} in the model")
+                : new Comparison(p.First, p.Second, LeastSquaresMeans.Difference(fit, treatment, p.First.Value, p.Second.Value, level), null))
+            .ToList();
+        LinearContrastResult? slope = null;
+        string? doseReason = null;
+        if (dose is not null)
+        {
+            var doseColumn = new LinearModelCovariate(dose.Name, observations.Select(o => dose.Number(o.Row, o.Subject)).ToList());
+            var doseFit = LinearModel.Fit(response, LinearModelDesign.Build(observations.Count, [doseColumn, .. covariateColumns], factorColumns));
+            if (doseFit.IsEstimable)
+            {
+                slope = doseFit.Coefficient(1, level);
+            }
+            else
+            {
+                doseReason = doseFit.NotEstimableReason;
+            }
+        }
+        return new ContinuousAncova
+        {
+            CountInModel = counts,
+            LsMeans = lsMeans,
+            Comparisons = comparisons,
+            DoseSlope = slope,
+            DoseNotEstimableReason = doseReason,
+            Excluded = candidates.Count - observations.Count,
+        };
+    }
+
+    /// <summary>A class covariate with its observed levels in ordinal order (the first is the reference).</summary>
+    private static LinearModelFactor Factor(RecordVariable variable, IReadOnlyList<ModelObservation> observations)
+    {
+        var values = observations.Select(o => variable.Text(o.Row, o.Subject)!).ToList();
+        var levels = values.Distinct().Order(StringComparer.Ordinal).ToList();
+        return new LinearModelFactor(variable.Name, levels, values.Select(v => levels.IndexOf(v)).ToList());
+    }
+}

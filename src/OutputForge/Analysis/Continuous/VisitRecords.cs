@@ -1,0 +1,74 @@
+using OutputForge.Data;
+using OutputForge.Naming;
+using OutputForge.Spec;
+
+namespace OutputForge.Analysis.Continuous;
+
+/// <summary>
+/// The endpoint records of each visit of a continuous table (PARAMCD, the endpoint's further
+/// condition, and AVISIT = the visit), at most one per subject and visit, keyed by USUBJID.
+/// </summary>
+internal sealed class VisitRecords
+{
+    private VisitRecords(Dataset dataset, IReadOnlyDictionary<string, Dictionary<string, int>> byVisit)
+    {
+        Dataset = dataset;
+        _byVisit = byVisit;
+    }
+
+    private readonly IReadOnlyDictionary<string, Dictionary<string, int>> _byVisit;
+
+    public Dataset Dataset { get; }
+
+    public IReadOnlyDictionary<string, int> RowOfSubject(string visit) => _byVisit[visit];
+
+    public static VisitRecords Select(TableSpec table, StudyData data)
+    {
+        var endpoint = table.Endpoint!;
+        var settings = table.Continuous!;
+        var dataset = data[endpoint.Dataset];
+        var file = Path.GetFileName(dataset.File);
+        var visitVariable = dataset.Find("AVISIT") ?? throw new SpecException(table.Source.Problem("/continuous/visits",
+            $"{file} has no AVISIT variable, which the visits select on"));
+        var known = visitVariable.DistinctValues();
+        for (var i = 0; i < settings.Visits.Count; i++)
+        {
+            if (!known.Contains(settings.Visits[i], StringComparer.Ordinal))
+            {
+                throw new SpecException(table.Source.Problem($"/continuous/visits/{i}",
+                    $"no record of {file} has AVISIT '{settings.Visits[i]}'{NearestName.Hint(settings.Visits[i], known.ToList())}"));
+            }
+        }
+        Func<int, bool> parameter = _ => true;
+        if (endpoint.Parameter is not null)
+        {
+            var paramcd = dataset.Find("PARAMCD") ?? throw new SpecException(table.Source.Problem("/endpoint/parameter",
+                $"{file} has no PARAMCD variable, which this key selects on"));
+            var codes = paramcd.DistinctValues();
+            if (!codes.Contains(endpoint.Parameter, StringComparer.Ordinal))
+            {
+                throw new SpecException(table.Source.Problem("/endpoint/parameter",
+                    $"no record of {file} has PARAMCD '{endpoint.Parameter}'{NearestName.Hint(endpoint.Parameter, codes.ToList())}"));
+            }
+            parameter = row => string.Equals(paramcd.GetText(row), endpoint.Parameter, StringComparison.Ordinal);
+        }
+        var where = endpoint.Where is null ? null : new SpecConditionText(endpoint.Where, table.Source, "/endpoint/where").Compile(dataset);
+        var subjects = dataset.Get(AdamConformance.SubjectVariable);
+        var byVisit = settings.Visits.Distinct().ToDictionary(v => v, _ => new Dictionary<string, int>(StringComparer.Ordinal), StringComparer.Ordinal);
+        for (var row = 0; row < dataset.RowCount; row++)
+        {
+            if (!parameter(row) || (where is not null && !where.Matches(row)) || visitVariable.GetText(row) is not { } visit
+                || !byVisit.TryGetValue(visit, out var rows))
+            {
+                continue;
+            }
+            var subject = subjects.GetText(row)!;
+            if (!rows.TryAdd(subject, row))
+            {
+                throw new SpecException(table.Source.Problem(endpoint.Where is null ? "/endpoint" : "/endpoint/where",
+                    $"the endpoint selects more than one {visit} record of subject {subject} ({file} lines {dataset.LineOfRow[rows[subject]]} and {dataset.LineOfRow[row]}); narrow the selection so that each subject has at most one record per visit (e.g. ANL01FL = 'Y')"));
+            }
+        }
+        return new VisitRecords(dataset, byVisit);
+    }
+}

@@ -1,0 +1,41 @@
+using OutputForge.Layout;
+using OutputForge.Pipeline;
+using OutputForge.Rendering;
+using OutputForge.Spec;
+
+namespace OutputForge.Workflow.Shells;
+
+/// <summary>
+/// Writes the mock shells of a study's tables (shell-{id}.docx, .xlsx, ...) from the specs alone,
+/// staged like a run so the output folder receives all of them or none.
+/// </summary>
+public static class ShellPackage
+{
+    public static IReadOnlyList<string> Write(string specPath, string outputFolder, IReadOnlyList<ITableRenderer> renderers,
+        IReadOnlyList<string>? tables, IRunLog log)
+    {
+        var package = SpecLoader.Load(specPath);
+        var study = package.Study;
+        var run = new RunFacts(DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
+        var page = PackageRunner.PageFrom(study.Page);
+        var shells = TableSelection.Select(study, package.Tables, tables)
+            .Select(t => ShellBuilder.Build(study, t, PackageRunner.StudyLine(study), run, page))
+            .ToList();
+        using var staging = new OutputStaging(outputFolder);
+        foreach (var shell in shells)
+        {
+            foreach (var renderer in renderers)
+            {
+                using var stream = staging.Create(FileName(shell.Document.TableId, renderer.Extension));
+                renderer.Write(shell.Document, stream);
+            }
+        }
+        var files = staging.Commit();
+        log.Info($"{shells.Count} shell{(shells.Count == 1 ? "" : "s")}, {files.Count} files in {outputFolder}");
+        return files;
+    }
+
+    /// <summary>"shell-14.2.1.1.docx": the table's file name with "shell-" for "table-", so shells and tables never overwrite each other.</summary>
+    public static string FileName(string tableId, string extension) =>
+        "shell-" + OutputFileNames.ForTable(tableId, extension)["table-".Length..];
+}

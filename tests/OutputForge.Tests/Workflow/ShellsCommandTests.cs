@@ -1,0 +1,69 @@
+using OutputForge.Tests.Support;
+
+namespace OutputForge.Tests.Workflow;
+
+/// <summary>`outputforge shells`: the tables' layout with placeholders, from the specs alone.</summary>
+public sealed class ShellsCommandTests(WorkflowDemoFixture demo) : IClassFixture<WorkflowDemoFixture>
+{
+    [Fact]
+    public void DemoShellsNeedNoDataAndKeepTheTablesLayout()
+    {
+        using var folder = new TempFolder();
+        var studyFile = OutputForge.Demo.DemoSpecFiles.Write(folder.Path);
+        Assert.False(Directory.Exists(folder.File("data")));
+        var output = folder.File("shells");
+
+        var (code, _, error) = WorkflowDemoFixture.Run(["shells", "--spec", studyFile, "--out", output, "--format", "docx,xlsx,txt"]);
+
+        Assert.True(code == 0, error);
+        Assert.Equal(12, Directory.GetFiles(output).Length);
+        var shell = DocumentReader.WordTableRows(Path.Combine(output, "shell-14.2.1.1.docx"));
+        var table = DocumentReader.WordTableRows(Path.Combine(demo.Before, "table-14.2.1.1.docx"));
+        Assert.Equal(table.Count, shell.Count);
+        Assert.Equal(table.Select(r => r[0]), shell.Select(r => r[0]));
+        Assert.Equal(table[0], shell[0]);
+        Assert.Equal(["", "(N=xx)", "(N=xx)", "(N=xx)"], shell[1]);
+        var byLabel = shell.Where(r => r[0].Length > 0).ToDictionary(r => r[0], r => r.Skip(1).ToArray());
+        Assert.Equal(["x (xx.x)", "x (xx.x)", "x (xx.x)"], byLabel["Responders, n (%)"]);
+        Assert.Equal(["(x.x, x.x)", "(x.x, x.x)", "(x.x, x.x)"], byLabel["95% CI [a]"]);
+        Assert.Equal(["", "x.x", "x.x"], byLabel["Difference in proportions, % [b]"]);
+        Assert.Equal(["", "0.xxx", "0.xxx"], byLabel["p-value [c]"]);
+        Assert.All(shell.Skip(2).SelectMany(r => r.Skip(1)), text => Assert.Matches(@"^[x0., ()]*$", text));
+
+        var shellNotes = DocumentReader.WordParagraphs(Path.Combine(output, "shell-14.2.1.1.docx"));
+        var tableNotes = DocumentReader.WordParagraphs(Path.Combine(demo.Before, "table-14.2.1.1.docx"));
+        Assert.Equal(tableNotes.Where(p => !p.StartsWith("Source:", StringComparison.Ordinal) && !p.StartsWith("Warning:", StringComparison.Ordinal)),
+            shellNotes.Where(p => !p.StartsWith("Source:", StringComparison.Ordinal)));
+        Assert.Contains(shellNotes, p => p.StartsWith("Source: tables/14.2.1.1-itch-responders-week12-itt.json; mock shell, no data;", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void PercentDecimalsOfTheSpecSetThePlaceholders()
+    {
+        var table = MiniStudy.TableJson.Replace("\"kind\": \"responders\",", "\"kind\": \"responders\", \"statistics\": { \"percentDecimals\": 2, \"pValueFloor\": 0.0001 },");
+        var study = MiniStudy.StudyJson.Replace("\"control\": \"Placebo\" }",
+            "\"control\": \"Placebo\", \"arms\": [{ \"value\": \"Placebo\", \"order\": 0 }, { \"value\": \"Active\", \"order\": 1 }] }");
+        using var mini = new MiniStudy(study: study, table: table);
+        Directory.Delete(mini.DataFolder, recursive: true);
+
+        var (code, _, error) = WorkflowDemoFixture.Run(["shells", "--spec", mini.StudyFile, "--out", mini.OutputFolder, "--format", "docx"]);
+
+        Assert.True(code == 0, error);
+        var rows = DocumentReader.WordTableRows(Path.Combine(mini.OutputFolder, "shell-1.docx")).Where(r => r[0].Length > 0).ToDictionary(r => r[0], r => r.Skip(1).ToArray());
+        Assert.Equal(["x (xx.xx)", "x (xx.xx)"], rows["Responders, n (%)"]);
+        Assert.Equal(["(x.xx, x.xx)", "(x.xx, x.xx)"], rows["95% CI [a]"]);
+        Assert.Equal(["", "0.xxxx"], rows["p-value [c]"]);
+    }
+
+    [Fact]
+    public void ShellsWithoutArmsInTheSpecAskForThem()
+    {
+        using var mini = new MiniStudy();
+
+        var (code, _, error) = WorkflowDemoFixture.Run(["shells", "--spec", mini.StudyFile, "--out", mini.OutputFolder]);
+
+        Assert.Equal(2, code);
+        Assert.Contains("$.treatment: shells need the arms before there are data", error);
+        Assert.False(Directory.Exists(mini.OutputFolder));
+    }
+}
