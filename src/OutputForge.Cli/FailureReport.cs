@@ -29,6 +29,11 @@ public static class FailureReport
             }
             return ExitCodes.InputError;
         }
+        catch (Templates.TemplateException e)
+        {
+            error.WriteLine($"outputforge: error: {e.Message}");
+            return ExitCodes.InputError;
+        }
         catch (DataException e)
         {
             error.WriteLine($"outputforge: error: {e.Message}");

@@ -59,6 +59,11 @@ public static class CommonOptions
         }
     }
 
+    public static Option<bool> Combined() => new("--combined")
+    {
+        Description = "Also write all tables in one file: all-tables.docx (a contents page, then each table on new pages, in table-number order) and all-tables.xlsx (one sheet per table and a 'results' sheet with every number), for the formats requested.",
+    };
+
     public static Option<string?> Timestamp() => new("--timestamp")
     {
         Description = "Run time to print in the outputs, as ISO 8601 (e.g. 2026-12-01T09:00:00Z); default: the SOURCE_DATE_EPOCH environment variable (seconds since 1970) if set, else now. The same specs, data and timestamp give the same outputs.",

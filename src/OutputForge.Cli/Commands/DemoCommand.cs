@@ -22,9 +22,10 @@ public static class DemoCommand
         var quiet = CommonOptions.Quiet();
         var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();
+        var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, formats, quiet, verbose, timestamp,
+            output, subjects, formats, quiet, verbose, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -41,6 +42,7 @@ public static class DemoCommand
             PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
             {
                 RunTime = runTime,
+                Combined = parse.GetValue(combined),
                 CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
             }, log);
             return ExitCodes.Success;

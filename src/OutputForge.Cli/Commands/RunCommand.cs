@@ -22,6 +22,7 @@ public static class RunCommand
         var quiet = CommonOptions.Quiet();
         var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();
+        var combined = CommonOptions.Combined();
         var controlCharacters = CommonOptions.ControlCharacters();
         var allowFolder = new Option<string[]>("--allow-folder")
         {
@@ -34,7 +35,7 @@ public static class RunCommand
         };
         var command = new Command("run", "Produce every table of a study spec: Word, Excel, results.json and manifest.json.")
         {
-            spec, data, output, formats, quiet, verbose, timestamp, controlCharacters, allowFolder, tables,
+            spec, data, output, formats, quiet, verbose, timestamp, combined, controlCharacters, allowFolder, tables,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -49,6 +50,7 @@ public static class RunCommand
             PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers)
             {
                 RunTime = runTime,
+                Combined = parse.GetValue(combined),
                 DataOptions = dataOptions,
                 AllowedFolders = parse.GetValue(allowFolder) ?? [],
                 CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],

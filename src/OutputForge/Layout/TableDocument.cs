@@ -28,6 +28,31 @@ public sealed record TableDocument(
 {
     /// <summary>The heading line printed above the titles.</summary>
     public string Heading => $"Table {TableId}";
+
+    /// <summary>The title block as printed, top to bottom; by default the heading, the titles and the population.</summary>
+    public IReadOnlyList<string> TitleLines
+    {
+        get => _titleLines ?? [Heading, .. Titles, Population];
+        init => _titleLines = value;
+    }
+
+    /// <summary>The line naming the table at the top of its second and later pages.</summary>
+    public string ContinuedLine
+    {
+        get => _continuedLine ?? $"{Heading} (continued)";
+        init => _continuedLine = value;
+    }
+
+    /// <summary>The page footer's lines; by default the source line.</summary>
+    public IReadOnlyList<string> FooterLines
+    {
+        get => _footerLines ?? [SourceLine];
+        init => _footerLines = value;
+    }
+
+    private readonly IReadOnlyList<string>? _titleLines;
+    private readonly string? _continuedLine;
+    private readonly IReadOnlyList<string>? _footerLines;
 }
 
 /// <summary>A column of the table body.</summary>
@@ -68,6 +93,15 @@ public sealed record BodyRow(string Label, int Indent, IReadOnlyList<LayoutCell>
 public sealed record LayoutCell(string Text, double? Number = null, string? ExcelFormat = null)
 {
     public static readonly LayoutCell Empty = new(string.Empty);
+
+    /// <summary>
+    /// <see cref="Text"/> padded with no-break spaces so that it lines up with the other cells of
+    /// its column (see <see cref="NumberAlignment"/>); null when the cell needs no padding.
+    /// </summary>
+    public string? Aligned { get; init; }
+
+    /// <summary>The text a paged renderer draws: the aligned text when there is one.</summary>
+    public string Display => Aligned ?? Text;
 }
 
 public enum PaperSize { Letter, A4 }

@@ -14,8 +14,9 @@ public static class TableLayoutBuilder
         "Results must be verified under your own validated processes, the SAP and applicable regulatory guidance.";
 
     /// <param name="display">Numbers, or placeholders of their precision for a mock shell (then no records and no warnings).</param>
+    /// <param name="groups">Column groups printed as a spanning header row above the arm labels.</param>
     public static LaidOutTable Build(TableResult table, string studyLine, RunFacts run, PageSettings page,
-        NumberDisplay display = NumberDisplay.Values)
+        NumberDisplay display = NumberDisplay.Values, IReadOnlyList<ColumnGroup>? groups = null)
     {
         var shell = display == NumberDisplay.Placeholders;
         var columns = new List<LayoutColumn> { new("label", CellAlignment.Left) };
@@ -26,6 +27,10 @@ public static class TableLayoutBuilder
             new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(
                 c.SubjectCount is { } n ? (shell ? "(N=xx)" : string.Create(CultureInfo.InvariantCulture, $"(N={n})")) : string.Empty))]),
         };
+        if (groups is { Count: > 0 } && ColumnGroupHeader.Build(table.Columns, groups) is { } groupRow)
+        {
+            headers.Insert(0, groupRow);
+        }
         var records = new List<ResultRecord>();
         var rows = new List<BodyRow>();
         var columnLabel = table.Columns.ToDictionary(c => c.Key, c => c.Label, StringComparer.Ordinal);
@@ -59,6 +64,7 @@ public static class TableLayoutBuilder
             };
             rows.Add(new BodyRow(row.Label, row.Indent, cells, kind));
         }
+        rows = [.. NumberAlignment.Apply(rows)];
         var footnotes = new List<string>(table.MethodNotes);
         if (!shell)
         {

@@ -6,6 +6,9 @@ namespace OutputForge.Pipeline;
 /// </summary>
 public static class OutputFileNames
 {
+    /// <summary>Base name of the combined document and workbook (all tables of a run).</summary>
+    public const string Combined = "all-tables";
+
     public static string ForTable(string tableId, string extension)
     {
         if (tableId.Length == 0 || tableId.Any(c => !(char.IsAsciiLetterOrDigit(c) || c is '.' or '-' or '_')) || tableId.StartsWith('.'))

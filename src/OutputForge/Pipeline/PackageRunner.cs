@@ -4,6 +4,7 @@ using OutputForge.Data;
 using OutputForge.Layout;
 using OutputForge.Rendering;
 using OutputForge.Spec;
+using OutputForge.Templates;
 using OutputForge.Workflow;
 using OutputForge.Workflow.Manifest;
 
@@ -23,6 +24,7 @@ public static class PackageRunner
         using var outputLock = OutputLock.Acquire(request.OutputFolder);
         var package = SpecLoader.Load(request.SpecPath, request.AllowedFolders);
         var study = package.Study;
+        var templates = TemplateSet.Load(study.Folder);
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
         var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
         var dataWarnings = new List<string>();
@@ -32,11 +34,16 @@ public static class PackageRunner
 
         var inputs = RunInputs.Read(package, data);
         var selected = TableSelection.Select(study, package.Tables, request.Tables);
-        var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames());
+        var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
+        {
+            DataDigests = inputs.Data.Where(d => d.Dataset is not null)
+                .ToDictionary(d => d.Dataset!, d => FileDigest.Short(d.Sha256), StringComparer.Ordinal),
+        };
         var page = PageFrom(study.Page);
         var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
-        var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, log);
+        var context = new LayoutContext(templates, ColumnGroupsOf(study));
+        var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log);
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
         var manifestTables = built.Select(b => b.Manifest).ToList();
         var laidOut = built.Select(b => (b.Table, b.Warnings)).ToList();
@@ -57,6 +64,10 @@ public static class PackageRunner
                 stream.Write(bytes);
             }
         }
+        if (request.Combined && laidOut.Count > 0)
+        {
+            CombinedOutputs.Write(staging, request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime);
+        }
         using (var stream = staging.Create(ResultsFileName))
         {
             var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
@@ -76,6 +87,15 @@ public static class PackageRunner
         return new RunSummary(files, laidOut.Count, warnings, clock.Elapsed);
     }
 
+    /// <summary>What every table's layout shares: the run's templates and the study's arm groups.</summary>
+    private sealed record LayoutContext(TemplateSet Templates, IReadOnlyList<ColumnGroup> Groups);
+
+    /// <summary>The study's arm groups, keyed like the result columns (the arm value as a results key).</summary>
+    private static IReadOnlyList<ColumnGroup> ColumnGroupsOf(StudySpec study) =>
+        (study.Treatment.Groups ?? [])
+            .Select((g, i) => new ColumnGroup(g.Label, g.Arms.Select(ResultKeys.FromLabel).ToList(), $"/treatment/groups/{i}"))
+            .ToList();
+
     /// <summary>One table analysed, laid out and rendered (to bytes, not yet written).</summary>
     private sealed record BuiltTable(LaidOutTable Table, IReadOnlyList<string> Warnings, ManifestTable Manifest,
         IReadOnlyList<(string Name, byte[] Bytes)> Files);
@@ -86,7 +106,7 @@ public static class PackageRunner
     /// message does not depend on thread timing.
     /// </summary>
     private static BuiltTable[] BuildTables(IReadOnlyList<TableSpec> selected, RunRequest request, StudySpec study, StudyData data,
-        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, IRunLog log)
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context, IRunLog log)
     {
         var built = new BuiltTable[selected.Count];
         var failures = new Exception?[selected.Count];
@@ -96,7 +116,7 @@ public static class PackageRunner
             try
             {
                 var clock = Stopwatch.StartNew();
-                built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page);
+                built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page, context);
                 log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms");
             }
             catch (Exception e)
@@ -113,7 +133,7 @@ public static class PackageRunner
     }
 
     private static BuiltTable BuildTable(TableSpec table, RunRequest request, StudySpec study, StudyData data,
-        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page)
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context)
     {
         var result = TableAnalyses.For(table).Analyze(study, table, data);
         if (dataWarnings.Count > 0)
@@ -122,7 +142,19 @@ public static class PackageRunner
         }
         var manifest = new ManifestTable(table.Id, inputs.ForTable(result.Provenance.SpecFile, result.Provenance.Datasets),
             request.Renderers.Select(r => OutputFileNames.ForTable(table.Id, r.Extension)).ToList(), ManifestStaging.Timestamp(run.RunTime));
-        var laidOut = TableLayoutBuilder.Build(result, studyLine, run, page);
+        LaidOutTable laidOut;
+        try
+        {
+            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, groups: context.Groups);
+        }
+        catch (ColumnGroupException e)
+        {
+            throw new SpecException(study.Source.Problem(e.Where, $"table {table.Id}: {e.Message}"));
+        }
+        laidOut = laidOut with
+        {
+            Document = TableTemplates.Apply(context.Templates, laidOut.Document, TemplateValues.For(study, table, result, laidOut.Document, run)),
+        };
         var files = new List<(string, byte[])>();
         foreach (var renderer in request.Renderers)
         {

@@ -14,6 +14,9 @@ public sealed record RunRequest(string SpecPath, string? DataFolder, string Outp
     /// <summary>How datasets are read (e.g. what to do with control characters).</summary>
     public Data.DataReadOptions DataOptions { get; init; } = Data.DataReadOptions.Default;
 
+    /// <summary>Also write all tables in one .docx (with contents) and one .xlsx (with a results sheet), for the formats requested.</summary>
+    public bool Combined { get; init; }
+
     /// <summary>The command line as given (recorded in manifest.json).</summary>
     public IReadOnlyList<string> CommandLine { get; init; } = [];
 

@@ -59,6 +59,17 @@ public sealed class TreatmentSpec
     /// by mock shells, which have no data, and checked against the data by `check`.
     /// </summary>
     public List<ArmSpec>? Arms { get; init; }
+
+    /// <summary>Optional groupings of arms printed as a spanning header over their columns (e.g. all doses of one compound).</summary>
+    public List<ArmGroupSpec>? Groups { get; init; }
+}
+
+/// <summary>A spanning column header over the arms it names (values of the treatment variable), which must stand side by side.</summary>
+public sealed class ArmGroupSpec
+{
+    public required string Label { get; init; }
+
+    public required List<string> Arms { get; init; }
 }
 
 /// <summary>One treatment arm as the study spec lists it: its value of the treatment variable and its display order.</summary>

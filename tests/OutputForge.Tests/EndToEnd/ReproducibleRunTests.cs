@@ -11,7 +11,7 @@ public sealed class ReproducibleRunTests
     private static Dictionary<string, string> RunDemo(string folder, string timestamp)
     {
         var error = new StringWriter();
-        Assert.True(OutputForge.Cli.Program.Run(["demo", "--out", folder, "--timestamp", timestamp, "--quiet"], error) == 0, error.ToString());
+        Assert.True(OutputForge.Cli.Program.Run(["demo", "--out", folder, "--timestamp", timestamp, "--quiet", "--combined"], error) == 0, error.ToString());
         // manifest.json records the command line, which names each run's own output folder.
         return Directory.GetFiles(Path.Combine(folder, "output"))
             .Where(f => Path.GetFileName(f) != "manifest.json")
@@ -26,6 +26,8 @@ public sealed class ReproducibleRunTests
         var a = RunDemo(first.Path, "2026-12-01T09:00:00Z");
         var b = RunDemo(second.Path, "2026-12-01T09:00:00Z");
         Assert.Equal(a.Keys.Order(), b.Keys.Order());
+        Assert.Contains("all-tables.docx", a.Keys);
+        Assert.Contains("all-tables.xlsx", a.Keys);
         foreach (var file in a.Keys)
         {
             Assert.True(a[file] == b[file], $"{file} differs between two identical runs");

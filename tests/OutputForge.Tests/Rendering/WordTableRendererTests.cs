@@ -1,3 +1,4 @@
+using DocumentFormat.OpenXml.Packaging;
 using DocumentFormat.OpenXml;
 using DocumentFormat.OpenXml.Validation;
 using DocumentFormat.OpenXml.Wordprocessing;
@@ -28,7 +29,7 @@ public sealed class WordTableRendererTests
     }
 
     [Fact]
-    public void Title_block_is_centered_above_the_table_and_footnotes_and_source_follow_it()
+    public void Title_block_is_centered_above_the_table_footnotes_follow_it_and_the_source_is_in_the_footer()
     {
         var document = ResponderTableFixture.Responders();
         using var word = new WordDocumentReader(document);
@@ -40,7 +41,11 @@ public sealed class WordTableRendererTests
         Assert.All(titles, p => Assert.Equal(JustificationValues.Center, p.ParagraphProperties!.Justification!.Val!.Value));
 
         var after = blocks.SkipWhile(e => e is Paragraph).Skip(1).Cast<Paragraph>().Select(WordDocumentReader.TextOf).ToList();
-        Assert.Equal(document.Footnotes.Append(document.SourceLine), after);
+        Assert.Equal(document.Footnotes, after);
+        // The source line is in the page footer, on every page.
+        var footer = Assert.Single(word.Package.MainDocumentPart!.FooterParts).Footer;
+        Assert.Equal([document.SourceLine], footer.Elements<Paragraph>().Select(WordDocumentReader.TextOf));
+        Assert.NotNull(word.Body.GetFirstChild<SectionProperties>()!.GetFirstChild<FooterReference>());
     }
 
     [Fact]
@@ -59,19 +64,19 @@ public sealed class WordTableRendererTests
     public void Page_header_has_the_study_line_and_page_x_of_y_fields()
     {
         using var word = new WordDocumentReader(ResponderTableFixture.Responders());
-        var headerPart = Assert.Single(word.Package.MainDocumentPart!.HeaderParts);
+        var reference = word.Body.GetFirstChild<SectionProperties>()!.Elements<HeaderReference>().Single(h => h.Type!.Value == HeaderFooterValues.Default);
+        var headerPart = (HeaderPart)word.Package.MainDocumentPart!.GetPartById(reference.Id!);
         var header = headerPart.Header;
 
         Assert.StartsWith("Study QF217-301", WordDocumentReader.TextOf(header));
-        var instructions = header.Descendants<FieldCode>().Select(f => f.Text.Trim()).ToList();
+        var first = header.Elements<Paragraph>().First();
+        var instructions = first.Descendants<FieldCode>().Select(f => f.Text.Trim()).ToList();
         Assert.Equal(new[] { "PAGE", "NUMPAGES" }, instructions);
-        Assert.Equal(6, header.Descendants<FieldChar>().Count());
-        var text = string.Concat(header.Descendants<Text>().Select(t => t.Text));
+        Assert.Equal(6, first.Descendants<FieldChar>().Count());
+        var text = string.Concat(first.Descendants<Text>().Select(t => t.Text));
         Assert.Contains("Page 1 of 1", text);
-
-        var reference = word.Body.GetFirstChild<SectionProperties>()!.GetFirstChild<HeaderReference>()!;
-        Assert.Equal(word.Package.MainDocumentPart.GetIdOfPart(headerPart), reference.Id!.Value);
-        Assert.Equal(HeaderFooterValues.Default, reference.Type!.Value);
+        Assert.Equal("Table 14.2.1 (continued)", WordDocumentReader.TextOf(header.Elements<Paragraph>().ElementAt(1)));
+        Assert.Single(word.Body.Descendants<BookmarkStart>(), b => b.Name == "Table_14_2_1");
     }
 
     [Fact]

@@ -24,6 +24,13 @@ public static class DocumentReader
         return document.MainDocumentPart!.Document.Body!.Elements<W.Paragraph>().Select(p => p.InnerText).ToList();
     }
 
+    /// <summary>All paragraphs of the page footers of a .docx.</summary>
+    public static List<string> WordFooterParagraphs(string path)
+    {
+        using var document = WordprocessingDocument.Open(path, false);
+        return document.MainDocumentPart!.FooterParts.SelectMany(f => f.Footer.Elements<W.Paragraph>()).Select(p => p.InnerText).ToList();
+    }
+
     private static string CellText(W.TableCell cell) =>
         string.Join("\n", cell.Elements<W.Paragraph>().Select(p => p.InnerText)).Trim();
 

@@ -46,7 +46,7 @@ public sealed class ManifestTests(WorkflowDemoFixture demo) : IClassFixture<Work
         var adsl = manifest.Data.Single(d => d.Name == "adsl.csv").Sha256[..8];
         var adeff = manifest.Data.Single(d => d.Name == "adeff.csv").Sha256[..8];
 
-        var paragraphs = DocumentReader.WordParagraphs(Path.Combine(demo.Before, "table-14.2.1.1.docx"));
+        var paragraphs = DocumentReader.WordFooterParagraphs(Path.Combine(demo.Before, "table-14.2.1.1.docx"));
 
         Assert.Contains(paragraphs, p => p.Contains($"data: adsl.csv (SHA-256 {adsl}), adeff.csv (SHA-256 {adeff});", StringComparison.Ordinal));
     }

@@ -34,7 +34,7 @@ public sealed class ExcelSheetWriter
             sheet.Column(c + 1).Width = _widths[c];
 
         int row = 1;
-        foreach (var line in new[] { _document.Heading }.Concat(_document.Titles).Append(_document.Population))
+        foreach (var line in _document.TitleLines)
             MergedLine(sheet, row++, line, XLAlignmentHorizontalValues.Center);
         row++;
 
@@ -57,7 +57,9 @@ public sealed class ExcelSheetWriter
 
         foreach (var footnote in _document.Footnotes)
             MergedLine(sheet, row++, footnote, XLAlignmentHorizontalValues.Left);
-        MergedLine(sheet, row, _document.SourceLine, XLAlignmentHorizontalValues.Left);
+        foreach (var line in _document.FooterLines.SkipLast(1))
+            MergedLine(sheet, row++, line, XLAlignmentHorizontalValues.Left);
+        MergedLine(sheet, row, _document.FooterLines.LastOrDefault() ?? string.Empty, XLAlignmentHorizontalValues.Left);
 
         PageSetup(sheet, firstHeaderRow, lastHeaderRow, lastRow: row);
     }

@@ -3,12 +3,15 @@ using OutputForge.Layout;
 
 namespace OutputForge.Rendering.Excel;
 
-/// <summary>Writes several tables into one .xlsx, one worksheet per table, in the given order.</summary>
+/// <summary>
+/// Writes several tables into one .xlsx, one worksheet per table, in the given order; with
+/// results, a last "results" sheet holds every number in long format (<see cref="ExcelResultsSheet"/>).
+/// </summary>
 public sealed class ExcelWorkbookRenderer
 {
     public string Extension => ".xlsx";
 
-    public void Write(IReadOnlyList<TableDocument> documents, Stream output)
+    public void Write(IReadOnlyList<TableDocument> documents, Stream output, IReadOnlyList<Results.ResultRecord>? results = null)
     {
         ArgumentNullException.ThrowIfNull(documents);
         if (documents.Count == 0)
@@ -28,6 +31,8 @@ public sealed class ExcelWorkbookRenderer
             var sheet = workbook.Worksheets.Add(names.Next(document.TableId));
             new ExcelSheetWriter(document).Write(sheet);
         }
+        if (results is not null)
+            ExcelResultsSheet.Write(workbook.Worksheets.Add(names.Next(ExcelResultsSheet.Name)), results);
         using var package = new MemoryStream();
         workbook.SaveAs(package);
         ExcelPrintTitles.MakeAbsolute(package);

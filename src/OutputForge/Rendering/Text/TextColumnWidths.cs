@@ -16,7 +16,7 @@ public static class TextColumnWidths
             foreach (var line in CellLines.Split(row.Label))
                 widths[0] = Math.Max(widths[0], row.Indent * indentWidth + line.Length);
             for (int c = 0; c < row.Cells.Count; c++)
-                widths[c + 1] = Math.Max(widths[c + 1], CellLines.LongestLine(row.Cells[c].Text));
+                widths[c + 1] = Math.Max(widths[c + 1], CellLines.LongestLine(row.Cells[c].Display));
         }
 
         var placedRows = document.HeaderRows.Select(PlacedHeaderCell.Place).ToList();

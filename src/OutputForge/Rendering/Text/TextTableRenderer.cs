@@ -34,7 +34,7 @@ public sealed class TextTableRenderer : ITableRenderer
         int tableWidth = TextColumnWidths.RegionWidth(widths, 0, widths.Length - 1, ColumnGap);
 
         var lines = new List<string> { document.StudyLine, string.Empty };
-        foreach (var title in new[] { document.Heading }.Concat(document.Titles).Append(document.Population))
+        foreach (var title in document.TitleLines)
             lines.AddRange(CellLines.Split(title).Select(t => Centered(t, tableWidth)));
         lines.Add(string.Empty);
 
@@ -53,7 +53,7 @@ public sealed class TextTableRenderer : ITableRenderer
         lines.Add(rule);
 
         lines.AddRange(document.Footnotes.SelectMany(CellLines.Split));
-        lines.AddRange(CellLines.Split(document.SourceLine));
+        lines.AddRange(document.FooterLines.SelectMany(CellLines.Split));
 
         var builder = new StringBuilder();
         foreach (var line in lines)
@@ -116,7 +116,7 @@ public sealed class TextTableRenderer : ITableRenderer
         }
         int tableWidth = starts[^1] + widths[^1];
         var labelLines = CellLines.Split(row.Label);
-        var cellLines = row.Cells.Select(c => CellLines.Split(c.Text)).ToArray();
+        var cellLines = row.Cells.Select(c => CellLines.Split(c.Display.Replace(NumberAlignment.Pad, ' '))).ToArray();
         int height = Math.Max(labelLines.Length, cellLines.Select(l => l.Length).DefaultIfEmpty(1).Max());
         int indent = row.Indent * IndentWidth;
         for (int i = 0; i < height; i++)

@@ -27,7 +27,7 @@ public static class WordColumnWidths
         foreach (var row in document.Rows)
         {
             foreach (var cell in row.Cells)
-                valueNeed = Math.Max(valueNeed, font.Width(CellLines.LongestLine(cell.Text)));
+                valueNeed = Math.Max(valueNeed, font.Width(CellLines.LongestLine(cell.Display)));
         }
         foreach (var placed in document.HeaderRows.SelectMany(PlacedHeaderCell.Place).Where(p => p.Cell.Span == 1))
         {

@@ -119,7 +119,7 @@ public sealed class WordTableBuilder
         row.AppendChild(Cell(0, 1, WordText.Paragraph(body.Label, labelProperties), ruleAbove, ruleBelow, padAbove: isFirst, TableVerticalAlignmentValues.Top));
         for (int c = 0; c < body.Cells.Count; c++)
         {
-            var paragraph = WordText.Paragraph(body.Cells[c].Text, new ParagraphProperties(Justify(_document.Columns[c + 1].Alignment)));
+            var paragraph = WordText.Paragraph(body.Cells[c].Display, new ParagraphProperties(Justify(_document.Columns[c + 1].Alignment)));
             row.AppendChild(Cell(c + 1, 1, paragraph, ruleAbove, ruleBelow, padAbove: isFirst, TableVerticalAlignmentValues.Top));
         }
         return row;
