@@ -91,7 +91,7 @@ public static class PackageRunner
     private sealed record LayoutContext(TemplateSet Templates, IReadOnlyList<ColumnGroup> Groups);
 
     /// <summary>The study's arm groups, keyed like the result columns (the arm value as a results key).</summary>
-    private static IReadOnlyList<ColumnGroup> ColumnGroupsOf(StudySpec study) =>
+    public static IReadOnlyList<ColumnGroup> ColumnGroupsOf(StudySpec study) =>
         (study.Treatment.Groups ?? [])
             .Select((g, i) => new ColumnGroup(g.Label, g.Arms.Select(ResultKeys.FromLabel).ToList(), $"/treatment/groups/{i}"))
             .ToList();

@@ -31,6 +31,13 @@ public static class DocumentReader
         return document.MainDocumentPart!.FooterParts.SelectMany(f => f.Footer.Elements<W.Paragraph>()).Select(p => p.InnerText).ToList();
     }
 
+    /// <summary>The text of every page footer of a .docx (the source line lives there).</summary>
+    public static string WordFooterText(string path)
+    {
+        using var document = WordprocessingDocument.Open(path, false);
+        return string.Join("\n", document.MainDocumentPart!.FooterParts.Select(f => f.Footer.InnerText));
+    }
+
     private static string CellText(W.TableCell cell) =>
         string.Join("\n", cell.Elements<W.Paragraph>().Select(p => p.InnerText)).Trim();
 

@@ -16,6 +16,6 @@ public static class ShellBuilder
     {
         var data = ShellData.For(study, table);
         var result = TableAnalyses.For(table).Analyze(study, table, data) with { Warnings = [] };
-        return TableLayoutBuilder.Build(result, studyLine, run, page, NumberDisplay.Placeholders);
+        return TableLayoutBuilder.Build(result, studyLine, run, page, NumberDisplay.Placeholders, OutputForge.Pipeline.PackageRunner.ColumnGroupsOf(study));
     }
 }
