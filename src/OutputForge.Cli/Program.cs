@@ -24,6 +24,7 @@ public static class Program
             ChangesCommand.Create(output, error),
             CheckCommand.Create(output, error),
             ShellsCommand.Create(error),
+            CalcCommand.Create(output, error),
         };
         var parse = root.Parse(args);
         return parse.Invoke(new InvocationConfiguration { Error = error });

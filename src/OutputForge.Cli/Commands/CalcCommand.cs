@@ -1,0 +1,236 @@
+using System.CommandLine;
+using OutputForge.Analysis;
+using OutputForge.Cli.Calculator;
+using OutputForge.Stats;
+
+namespace OutputForge.Cli.Commands;
+
+/// <summary>
+/// `outputforge calc`: single numbers for a QC statistician, without a spec: a proportion's
+/// interval, a difference of proportions, a test on an r x c table, and the stratified
+/// (Cochran-Mantel-Haenszel) family. JSON on stdout with --json, readable lines otherwise.
+/// </summary>
+public static class CalcCommand
+{
+    private static readonly Dictionary<string, ProportionCiMethod> ProportionMethods = new(StringComparer.Ordinal)
+    {
+        ["wald"] = ProportionCiMethod.Wald,
+        ["wilson"] = ProportionCiMethod.Wilson,
+        ["wilson-cc"] = ProportionCiMethod.WilsonCorrected,
+        ["clopper-pearson"] = ProportionCiMethod.ClopperPearson,
+        ["agresti-coull"] = ProportionCiMethod.AgrestiCoull,
+        ["jeffreys"] = ProportionCiMethod.Jeffreys,
+    };
+
+    private static readonly Dictionary<string, DifferenceCiMethod> DifferenceMethods = new(StringComparer.Ordinal)
+    {
+        ["wald"] = DifferenceCiMethod.Wald,
+        ["wald-cc"] = DifferenceCiMethod.WaldCorrected,
+        ["newcombe"] = DifferenceCiMethod.Newcombe,
+        ["agresti-caffo"] = DifferenceCiMethod.AgrestiCaffo,
+        ["miettinen-nurminen"] = DifferenceCiMethod.MiettinenNurminen,
+    };
+
+    private static readonly Dictionary<string, Func<int[,], TestResult>> Tests = new(StringComparer.Ordinal)
+    {
+        ["pearson"] = PearsonChiSquareTest.Compute,
+        ["yates"] = YatesChiSquareTest.Compute,
+        ["likelihood-ratio"] = LikelihoodRatioChiSquareTest.Compute,
+        ["fisher"] = FisherExactTest.Compute,
+    };
+
+    public static Command Create(TextWriter output, TextWriter error)
+    {
+        var command = new Command("calc", "Compute single statistics for QC checks: proportion, difference, table, stratified.");
+        command.Subcommands.Add(Proportion(output, error));
+        command.Subcommands.Add(Difference(output, error));
+        command.Subcommands.Add(Table(output, error));
+        command.Subcommands.Add(Stratified(output, error));
+        return command;
+    }
+
+    private static Option<bool> Json() => new("--json") { Description = "Write the result as JSON on stdout." };
+
+    private static Option<double> Level() => new("--level")
+    {
+        Description = "Confidence level.",
+        DefaultValueFactory = _ => 0.95,
+    };
+
+    private static Option<int> Count(string name, string description) => new(name) { Description = description, Required = true };
+
+    private static Option<string> Method(IEnumerable<string> names) => new("--method")
+    {
+        Description = "Method: " + string.Join(" | ", names),
+        Required = true,
+    };
+
+    private static Command Proportion(TextWriter output, TextWriter error)
+    {
+        var events = Count("--events", "Number of events (responders).");
+        var n = Count("--n", "Number of subjects.");
+        var method = Method(ProportionMethods.Keys);
+        var level = Level();
+        var json = Json();
+        var command = new Command("proportion", "Confidence interval for a single proportion.") { events, n, method, level, json };
+        command.SetAction(parse => Run(error, () =>
+        {
+            var chosen = Choose(ProportionMethods, parse.GetValue(method)!);
+            var (x, total) = (parse.GetValue(events), parse.GetValue(n));
+            CheckEvents(x, total, "--events", "--n");
+            var result = new CalcOutput(output, parse.GetValue(json));
+            result.Interval("proportion", ProportionInterval.Compute(x, total, chosen, CheckLevel(parse.GetValue(level))));
+            result.Flush(single: true);
+        }));
+        return command;
+    }
+
+    private static Command Difference(TextWriter output, TextWriter error)
+    {
+        var events1 = Count("--events1", "Events in group 1.");
+        var n1 = Count("--n1", "Subjects in group 1.");
+        var events2 = Count("--events2", "Events in group 2.");
+        var n2 = Count("--n2", "Subjects in group 2.");
+        var method = Method(DifferenceMethods.Keys);
+        var level = Level();
+        var json = Json();
+        var command = new Command("difference", "Confidence interval for the difference of two proportions (group 1 minus group 2).")
+        {
+            events1, n1, events2, n2, method, level, json,
+        };
+        command.SetAction(parse => Run(error, () =>
+        {
+            var chosen = Choose(DifferenceMethods, parse.GetValue(method)!);
+            CheckEvents(parse.GetValue(events1), parse.GetValue(n1), "--events1", "--n1");
+            CheckEvents(parse.GetValue(events2), parse.GetValue(n2), "--events2", "--n2");
+            var result = new CalcOutput(output, parse.GetValue(json));
+            result.Interval("difference", ProportionDifferenceInterval.Compute(parse.GetValue(events1), parse.GetValue(n1),
+                parse.GetValue(events2), parse.GetValue(n2), chosen, CheckLevel(parse.GetValue(level))));
+            result.Flush(single: true);
+        }));
+        return command;
+    }
+
+    private static Command Table(TextWriter output, TextWriter error)
+    {
+        var counts = new Option<string>("--counts") { Description = "The table: counts separated by ',', rows by ';' (e.g. \"12,5;7,9\").", Required = true };
+        var test = new Option<string>("--test") { Description = "Test: " + string.Join(" | ", Tests.Keys), Required = true };
+        var json = Json();
+        var command = new Command("table", "A test of association on an r x c table.") { counts, test, json };
+        command.SetAction(parse => Run(error, () =>
+        {
+            var compute = Choose(Tests, parse.GetValue(test)!, "--test");
+            var table = CountsParser.Table(parse.GetValue(counts)!);
+            if (parse.GetValue(test) == "yates" && (table.GetLength(0) != 2 || table.GetLength(1) != 2))
+            {
+                throw new CalcInputException("--test yates: the continuity correction applies to 2 x 2 tables only");
+            }
+            var result = new CalcOutput(output, parse.GetValue(json));
+            result.Test("test", compute(table));
+            result.Flush(single: true);
+        }));
+        return command;
+    }
+
+    private static Command Stratified(TextWriter output, TextWriter error)
+    {
+        var counts = new Option<string>("--counts")
+        {
+            Description = "One table per stratum, separated by '|': 2 x 2 tables (\"a,b;c,d|e,f;g,h\") for the CMH test, common odds ratio and Breslow-Day; larger tables for the generalized CMH statistics.",
+            Required = true,
+        };
+        var scores = new Option<string?>("--scores")
+        {
+            Description = "Scores for the generalized statistics: \"row scores/column scores\", e.g. \"1,2,3/0,1\" (default: table scores 1, 2, ...).",
+        };
+        var level = Level();
+        var json = Json();
+        var command = new Command("stratified", "Stratified analysis of 2 x 2 x K (or I x J x K) tables.") { counts, scores, level, json };
+        command.SetAction(parse => Run(error, () =>
+        {
+            var strata = CountsParser.Strata(parse.GetValue(counts)!);
+            var result = new CalcOutput(output, parse.GetValue(json));
+            if (strata[0].GetLength(0) == 2 && strata[0].GetLength(1) == 2 && parse.GetValue(scores) is null)
+            {
+                var twoByTwo = strata.Select(t => new StratumCounts(t[0, 0], t[0, 0] + t[0, 1], t[1, 0], t[1, 0] + t[1, 1])).ToList();
+                result.Test("cmh", CochranMantelHaenszelTest.Compute(twoByTwo));
+                result.Interval("commonOddsRatio", MantelHaenszelOddsRatio.Compute(twoByTwo, CheckLevel(parse.GetValue(level))));
+                result.Test("breslowDay", BreslowDayTest.Compute(twoByTwo, taroneCorrection: false));
+                result.Test("breslowDayTarone", BreslowDayTest.Compute(twoByTwo, taroneCorrection: true));
+            }
+            var (rowScores, columnScores) = Scores(parse.GetValue(scores), strata[0]);
+            var generalized = GeneralizedCochranMantelHaenszel.Compute(strata, rowScores, columnScores);
+            result.Test("generalAssociation", generalized.GeneralAssociation);
+            result.Test("rowMeanScores", generalized.RowMeanScores);
+            result.Test("correlation", generalized.NonzeroCorrelation);
+            result.Flush(single: false);
+        }));
+        return command;
+    }
+
+    private static (IReadOnlyList<double>? Rows, IReadOnlyList<double>? Columns) Scores(string? text, int[,] shape)
+    {
+        if (text is null)
+        {
+            return (null, null);
+        }
+        var parts = text.Split('/');
+        if (parts.Length != 2)
+        {
+            throw new CalcInputException("--scores: expected \"row scores/column scores\", e.g. \"1,2,3/0,1\"");
+        }
+        return (ScoreList(parts[0], shape.GetLength(0), "row"), ScoreList(parts[1], shape.GetLength(1), "column"));
+    }
+
+    private static IReadOnlyList<double> ScoreList(string text, int count, string what)
+    {
+        var values = text.Split(',', StringSplitOptions.TrimEntries).Select(v =>
+            double.TryParse(v, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out var d) && double.IsFinite(d)
+                ? d
+                : throw new CalcInputException($"--scores: '{v}' is not a number")).ToList();
+        if (values.Count != count)
+        {
+            throw new CalcInputException($"--scores: {values.Count} {what} scores for {count} {what}s");
+        }
+        return values;
+    }
+
+    private static T Choose<T>(Dictionary<string, T> choices, string name, string option = "--method") =>
+        choices.TryGetValue(name, out var chosen)
+            ? chosen
+            : throw new CalcInputException($"{option}: unknown '{name}'{Naming.NearestName.Hint(name, choices.Keys)}");
+
+    private static void CheckEvents(int events, int n, string eventsOption, string nOption)
+    {
+        if (n < 0 || events < 0)
+        {
+            throw new CalcInputException($"{(events < 0 ? eventsOption : nOption)}: counts cannot be negative");
+        }
+        if (events > n)
+        {
+            throw new CalcInputException($"{eventsOption}: {events} events cannot exceed {nOption} {n}");
+        }
+    }
+
+    private static double CheckLevel(double level) =>
+        level is > 0 and < 1 ? level : throw new CalcInputException($"--level: {level} is not between 0 and 1 (e.g. 0.95)");
+
+    private static int Run(TextWriter error, Action work)
+    {
+        try
+        {
+            work();
+            return ExitCodes.Success;
+        }
+        catch (CalcInputException e)
+        {
+            error.WriteLine($"outputforge: error: {e.Message}");
+            return ExitCodes.InputError;
+        }
+        catch (ArgumentException e)
+        {
+            error.WriteLine($"outputforge: error: {e.Message.Split(" (Parameter")[0]}");
+            return ExitCodes.InputError;
+        }
+    }
+}
