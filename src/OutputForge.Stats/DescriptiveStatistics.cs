@@ -46,7 +46,7 @@ public static class DescriptiveStatistics
             notes.Add("The standard deviation needs at least two values.");
         }
         var sorted = values.OrderBy(v => v).ToArray();
-        double median = n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+        double median = n % 2 == 1 ? sorted[n / 2] : Midpoint(sorted[n / 2 - 1], sorted[n / 2]);
         double q1 = SortedArrayStatistics.QuantileCustom(sorted, 0.25, quartileDefinition);
         double q3 = SortedArrayStatistics.QuantileCustom(sorted, 0.75, quartileDefinition);
         double? geometric = null;
@@ -69,5 +69,19 @@ public static class DescriptiveStatistics
             notes.Add("The coefficient of variation is undefined because the mean is zero.");
         }
         return new DescriptiveSummary(n, mean, sd, median, q1, q3, sorted[0], sorted[^1], geometric, cv) { Notes = notes };
+    }
+
+    /// <summary>
+    /// The average of two values taken as the decimals they were written as: (0.6 + 0.7) / 2 is
+    /// 0.65 exactly, where binary arithmetic gives 0.6499999999999999 and a display at one decimal
+    /// would round the wrong way. Values beyond the decimal range fall back to binary arithmetic.
+    /// </summary>
+    internal static double Midpoint(double a, double b)
+    {
+        if (Math.Abs(a) < 1e27 && Math.Abs(b) < 1e27)
+        {
+            return (double)(((decimal)a + (decimal)b) / 2);
+        }
+        return (a + b) / 2;
     }
 }

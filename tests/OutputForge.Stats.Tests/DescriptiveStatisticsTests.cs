@@ -83,4 +83,14 @@ public class DescriptiveStatisticsTests
         Assert.NotNull(actual);
         Assert.True(Math.Abs(actual!.Value - expected) <= tolerance * Math.Max(1, Math.Abs(expected)), $"{name}: expected {expected:R}, got {actual:R}");
     }
+
+    [Fact]
+    public void A_median_on_a_rounding_midpoint_stays_on_it()
+    {
+        // Hand computation: the median of 0.6 and 0.7 is 0.65 exactly; in binary (0.6 + 0.7) / 2 is
+        // 0.6499999999999999, which a one-decimal display rounding half away from zero would show as 0.6.
+        var summary = DescriptiveStatistics.Compute([0.6, 0.7]);
+        Assert.Equal(0.65, summary.Median);
+        Assert.Equal("0.65", summary.Median!.Value.ToString("R", System.Globalization.CultureInfo.InvariantCulture));
+    }
 }
