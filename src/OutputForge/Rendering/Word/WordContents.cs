@@ -40,22 +40,8 @@ public static class WordContents
         elements.Add(new Paragraph(new ParagraphProperties(new SectionProperties(
             new HeaderReference { Type = HeaderFooterValues.Default, Id = main.GetIdOfPart(headerPart) },
             new SectionType { Val = SectionMarkValues.NextPage },
-            new PageSize
-            {
-                Width = (UInt32Value)(uint)geometry.WidthTwips,
-                Height = (UInt32Value)(uint)geometry.HeightTwips,
-                Orient = geometry.Landscape ? PageOrientationValues.Landscape : PageOrientationValues.Portrait,
-            },
-            new PageMargin
-            {
-                Top = geometry.MarginTwips,
-                Bottom = geometry.MarginTwips,
-                Left = (UInt32Value)(uint)geometry.MarginTwips,
-                Right = (UInt32Value)(uint)geometry.MarginTwips,
-                Header = (UInt32Value)(uint)geometry.HeaderDistanceTwips,
-                Footer = (UInt32Value)(uint)geometry.HeaderDistanceTwips,
-                Gutter = 0U,
-            }))));
+            geometry.PageSize(),
+            geometry.PageMargin()))));
         return elements;
     }
 

@@ -36,4 +36,26 @@ public sealed record WordPageGeometry(int WidthTwips, int HeightTwips, int Margi
                 $"Margins of {page.MarginInches} in leave less than one inch of text on a {page.Paper} page.");
         return geometry;
     }
+
+    /// <summary>The section's page size, as every section of a document uses it.</summary>
+    public DocumentFormat.OpenXml.Wordprocessing.PageSize PageSize() => new()
+    {
+        Width = (DocumentFormat.OpenXml.UInt32Value)(uint)WidthTwips,
+        Height = (DocumentFormat.OpenXml.UInt32Value)(uint)HeightTwips,
+        Orient = Landscape
+            ? DocumentFormat.OpenXml.Wordprocessing.PageOrientationValues.Landscape
+            : DocumentFormat.OpenXml.Wordprocessing.PageOrientationValues.Portrait,
+    };
+
+    /// <summary>The section's margins, with the header and footer at their distance from the edge.</summary>
+    public DocumentFormat.OpenXml.Wordprocessing.PageMargin PageMargin() => new()
+    {
+        Top = MarginTwips,
+        Bottom = MarginTwips,
+        Left = (DocumentFormat.OpenXml.UInt32Value)(uint)MarginTwips,
+        Right = (DocumentFormat.OpenXml.UInt32Value)(uint)MarginTwips,
+        Header = (DocumentFormat.OpenXml.UInt32Value)(uint)HeaderDistanceTwips,
+        Footer = (DocumentFormat.OpenXml.UInt32Value)(uint)HeaderDistanceTwips,
+        Gutter = 0U,
+    };
 }

@@ -70,21 +70,7 @@ public static class WordTableSection
         new FooterReference { Type = HeaderFooterValues.Default, Id = footerPartId },
         new FooterReference { Type = HeaderFooterValues.First, Id = footerPartId },
         new SectionType { Val = SectionMarkValues.NextPage },
-        new PageSize
-        {
-            Width = (UInt32Value)(uint)geometry.WidthTwips,
-            Height = (UInt32Value)(uint)geometry.HeightTwips,
-            Orient = geometry.Landscape ? PageOrientationValues.Landscape : PageOrientationValues.Portrait,
-        },
-        new PageMargin
-        {
-            Top = geometry.MarginTwips,
-            Bottom = geometry.MarginTwips,
-            Left = (UInt32Value)(uint)geometry.MarginTwips,
-            Right = (UInt32Value)(uint)geometry.MarginTwips,
-            Header = (UInt32Value)(uint)geometry.HeaderDistanceTwips,
-            Footer = (UInt32Value)(uint)geometry.HeaderDistanceTwips,
-            Gutter = 0U,
-        },
+        geometry.PageSize(),
+            geometry.PageMargin(),
         new TitlePage());
 }
