@@ -18,6 +18,10 @@ public static class DemoCommand
             Description = "Number of randomized subjects of the invented study.",
             DefaultValueFactory = _ => new DemoStudyOptions().Subjects,
         };
+        var loadCopies = new Option<int>("--load-copies")
+        {
+            Description = "Extra copies of the itch-score records in adeff.csv (parameters ITCHC01, ...) to enlarge the data for speed measurements; no demo table reads them.",
+        };
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
         var verbose = CommonOptions.Verbose();
@@ -25,7 +29,7 @@ public static class DemoCommand
         var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, formats, quiet, verbose, timestamp, combined,
+            output, subjects, loadCopies, formats, quiet, verbose, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -37,7 +41,7 @@ public static class DemoCommand
             var root = parse.GetValue(output)!;
             var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
             var dataFolder = Path.Combine(root, "data");
-            var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects)));
+            var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects), LoadCopies: parse.GetValue(loadCopies)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
             PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
             {

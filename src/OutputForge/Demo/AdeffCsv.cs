@@ -19,24 +19,15 @@ internal static class AdeffCsv
         "ADT", "ADY", "AVAL", "AVALC", "BASE", "CHG", "PCHG", "ABLFL", "ANL01FL", "CRIT1", "CRIT1FL",
     ];
 
-    public static void Write(string path, IEnumerable<DemoSubject> subjects)
+    /// <summary>Writes ADEFF; <paramref name="loadCopies"/> extra copies of each subject's ITCH rows, under the
+    /// parameters ITCHC01, ITCHC02, ..., only enlarge the file for load measurements (no demo table reads them).</summary>
+    public static void Write(string path, IEnumerable<DemoSubject> subjects, int loadCopies = 0)
     {
         using var csv = new CsvTableWriter(path, Columns);
         foreach (var s in subjects)
         {
             var baseline = s.ItchBaselineTenths;
-            foreach (var a in s.ItchAssessments)
-            {
-                Start(csv, s, ItchParamCode, ItchParam, 1, a);
-                csv.Field(DemoValueFormat.Tenths(a.ValueTenths)).Field((string?)null).Field(DemoValueFormat.Tenths(baseline));
-                if (a.IsBaseline)
-                    csv.Field((string?)null).Field((string?)null).Field("Y");
-                else
-                    csv.Field(DemoValueFormat.Tenths(a.ValueTenths - baseline))
-                        .Field(DemoValueFormat.PercentChange(a.ValueTenths - baseline, baseline)).Field((string?)null);
-                csv.Field(a.IsAnalysisRecord ? "Y" : null).Field((string?)null).Field((string?)null);
-                csv.EndRow();
-            }
+            WriteItch(csv, s, ItchParamCode, ItchParam, 1);
 
             foreach (var a in s.ItchAssessments)
             {
@@ -48,6 +39,28 @@ internal static class AdeffCsv
                     .Field("Y").Field(ResponderCriterion).Field(DemoValueFormat.Flag(responder));
                 csv.EndRow();
             }
+
+            for (var copy = 1; copy <= loadCopies; copy++)
+            {
+                WriteItch(csv, s, $"ITCHC{copy:00}", $"{ItchParam}, load copy {copy}", 100 + copy);
+            }
+        }
+    }
+
+    private static void WriteItch(CsvTableWriter csv, DemoSubject s, string code, string name, int number)
+    {
+        var baseline = s.ItchBaselineTenths;
+        foreach (var a in s.ItchAssessments)
+        {
+            Start(csv, s, code, name, number, a);
+            csv.Field(DemoValueFormat.Tenths(a.ValueTenths)).Field((string?)null).Field(DemoValueFormat.Tenths(baseline));
+            if (a.IsBaseline)
+                csv.Field((string?)null).Field((string?)null).Field("Y");
+            else
+                csv.Field(DemoValueFormat.Tenths(a.ValueTenths - baseline))
+                    .Field(DemoValueFormat.PercentChange(a.ValueTenths - baseline, baseline)).Field((string?)null);
+            csv.Field(a.IsAnalysisRecord ? "Y" : null).Field((string?)null).Field((string?)null);
+            csv.EndRow();
         }
     }
 

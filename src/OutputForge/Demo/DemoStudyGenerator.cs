@@ -26,12 +26,14 @@ public static class DemoStudyGenerator
         if (string.IsNullOrWhiteSpace(folder))
             throw new DemoStudyException("No output folder was given for the demo study.");
 
+        if (options.LoadCopies < 0 || options.LoadCopies > 99)
+            throw new DemoStudyException($"The demo study takes 0 to 99 load copies; {options.LoadCopies} was given.");
         var subjects = Simulate(options);
         try
         {
             Directory.CreateDirectory(folder);
             AdslCsv.Write(Path.Combine(folder, AdslCsv.FileName), subjects);
-            AdeffCsv.Write(Path.Combine(folder, AdeffCsv.FileName), subjects);
+            AdeffCsv.Write(Path.Combine(folder, AdeffCsv.FileName), subjects, options.LoadCopies);
             AdaeCsv.Write(Path.Combine(folder, AdaeCsv.FileName), subjects);
             AdtteCsv.Write(Path.Combine(folder, AdtteCsv.FileName), subjects);
         }

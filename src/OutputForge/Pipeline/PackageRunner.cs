@@ -28,7 +28,9 @@ public static class PackageRunner
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
         var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
         var dataWarnings = new List<string>();
+        var reading = Stopwatch.StartNew();
         var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
+        log.Detail($"data: {data.Datasets.Count} datasets, {data.Datasets.Sum(d => File.Exists(d.File) ? new FileInfo(d.File).Length : 0) / 1e6:0.0} MB read in {reading.Elapsed.TotalMilliseconds:0} ms");
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
