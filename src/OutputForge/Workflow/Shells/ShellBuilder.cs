@@ -16,6 +16,14 @@ public static class ShellBuilder
     {
         var data = ShellData.For(study, table);
         var result = TableAnalyses.For(table).Analyze(study, table, data) with { Warnings = [] };
-        return TableLayoutBuilder.Build(result, studyLine, run, page, NumberDisplay.Placeholders, OutputForge.Pipeline.PackageRunner.ColumnGroupsOf(study));
+        try
+        {
+            return TableLayoutBuilder.Build(result, studyLine, run, page, NumberDisplay.Placeholders, OutputForge.Pipeline.PackageRunner.ColumnGroupsOf(study));
+        }
+        catch (ColumnGroupException e)
+        {
+            // The same located spec error as a run gives, not an internal fault.
+            throw new SpecException(study.Source.Problem(e.Where, $"table {table.Id}: {e.Message}"));
+        }
     }
 }
