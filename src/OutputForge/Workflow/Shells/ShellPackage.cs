@@ -2,6 +2,7 @@ using OutputForge.Layout;
 using OutputForge.Pipeline;
 using OutputForge.Rendering;
 using OutputForge.Spec;
+using OutputForge.Templates;
 
 namespace OutputForge.Workflow.Shells;
 
@@ -16,16 +17,24 @@ public static class ShellPackage
     {
         var package = SpecLoader.Load(specPath);
         var study = package.Study;
+        var templates = TemplateSet.Load(study.Folder);
         var run = new RunFacts(DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
         var page = PackageRunner.PageFrom(study.Page);
         var selected = TableSelection.Select(study, package.Tables, tables);
         foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
         {
-            log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", ShellData.SupportedKinds)})");
+            log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", ShellStandIns.Kinds)})");
         }
-        var shells = selected.Where(t => ShellData.Supports(t.Kind))
-            .Select(t => ShellBuilder.Build(study, t, PackageRunner.StudyLine(study), run, page))
-            .ToList();
+        var shells = new List<LaidOutTable>();
+        foreach (var table in selected.Where(t => ShellData.Supports(t.Kind)))
+        {
+            var (shell, assumptions) = ShellBuilder.Build(study, table, PackageRunner.StudyLine(study), run, page, templates);
+            foreach (var assumption in assumptions)
+            {
+                log.Warning($"table {table.Id}: {assumption}");
+            }
+            shells.Add(shell);
+        }
         using var staging = new OutputStaging(outputFolder);
         foreach (var shell in shells)
         {

@@ -1,0 +1,15 @@
+namespace OutputForge.Workflow.Shells;
+
+/// <summary>Disposition: each block's levels (see <see cref="CategoricalStandIn"/>) among the subjects its condition counts.</summary>
+public sealed class DispositionStandIn : IShellStandIn
+{
+    public string Kind => "disposition";
+
+    public void Add(ShellRecords records)
+    {
+        foreach (var block in records.Table.Disposition!.Blocks)
+        {
+            CategoricalStandIn.Add(records, block.Variable, block.Levels, block.OrderBy, block.Where);
+        }
+    }
+}

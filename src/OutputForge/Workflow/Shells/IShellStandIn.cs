@@ -1,0 +1,21 @@
+namespace OutputForge.Workflow.Shells;
+
+/// <summary>
+/// What one table kind adds to the stand-in study of its mock shell: the variables its analysis
+/// reads from ADSL and the records of its own datasets, so that the kind's own analysis lays out
+/// every row and cell the real table will have. Rows that depend on the data come from the spec
+/// where it lists them (levels, visits, times) and are otherwise one row labelled
+/// <see cref="ShellRecords.PlaceholderLevel"/>. Values must make every statistic estimable (a
+/// statistic that is not estimable may change its cell's shape), and are never shown.
+/// </summary>
+/// <remarks>
+/// A new table kind gets shells by one class implementing this interface and one line in
+/// <see cref="ShellStandIns"/>.
+/// </remarks>
+public interface IShellStandIn
+{
+    /// <summary>The spec's "kind" value this stand-in serves.</summary>
+    string Kind { get; }
+
+    void Add(ShellRecords records);
+}
