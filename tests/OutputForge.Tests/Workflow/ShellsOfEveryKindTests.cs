@@ -1,4 +1,3 @@
-using System.Text.RegularExpressions;
 using ClosedXML.Excel;
 using OutputForge.Tests.Support;
 
@@ -9,16 +8,8 @@ namespace OutputForge.Tests.Workflow;
 /// cell is a placeholder, rows the spec lists are shown by their labels, and rows only the data
 /// can give are one placeholder row.
 /// </summary>
-public sealed partial class ShellsOfEveryKindTests(ShellsDemoFixture shells) : IClassFixture<ShellsDemoFixture>
+public sealed class ShellsOfEveryKindTests(ShellsDemoFixture shells) : IClassFixture<ShellsDemoFixture>
 {
-    /// <summary>
-    /// A cell of placeholders only: x for digits, "0." before the decimals of a p-value, and the
-    /// punctuation of the patterns ("x (xx.x)", "(x.xx, x.xx)", "x.x, x.x", "x (xx.x) [x]"). No digit
-    /// other than that 0, and no letter other than x (so no "NE"), can match.
-    /// </summary>
-    [GeneratedRegex(@"^(?:[x., ()\[\]\u00a0-]|0\.x)*$")]
-    private static partial Regex PlaceholderCell();
-
     public static TheoryData<string> DemoTableIds() => [.. DemoStudyTables.Read().TableIds];
 
     [Fact]
@@ -41,7 +32,7 @@ public sealed partial class ShellsOfEveryKindTests(ShellsDemoFixture shells) : I
         Assert.All(all.SelectMany(r => r).Where(c => c.StartsWith("(N=", StringComparison.Ordinal)), c => Assert.Equal("(N=xx)", c));
         var body = shells.WordBody(id);
         Assert.NotEmpty(body);
-        Assert.All(body.SelectMany(r => r.Skip(1)), text => Assert.Matches(PlaceholderCell(), text));
+        Assert.All(body.SelectMany(r => r.Skip(1)), text => Assert.Matches(ShellCellPattern.Placeholders(), text));
         // Stand-in data would show as numbers; the shell has at least one placeholder per data row's table.
         Assert.Contains(body.SelectMany(r => r.Skip(1)), text => text.Contains('x'));
     }
@@ -60,7 +51,7 @@ public sealed partial class ShellsOfEveryKindTests(ShellsDemoFixture shells) : I
         var headerRow = header.Max(c => c.Address.RowNumber);
         var body = sheet.CellsUsed().Where(c => c.Address.RowNumber > headerRow && c.Address.ColumnNumber > 1).ToList();
         Assert.NotEmpty(body);
-        Assert.All(body, c => Assert.Matches(PlaceholderCell(), c.GetString()));
+        Assert.All(body, c => Assert.Matches(ShellCellPattern.Placeholders(), c.GetString()));
     }
 
     [Fact]

@@ -1,4 +1,6 @@
+using OutputForge.Analysis.Demographics;
 using OutputForge.Expressions;
+using OutputForge.Spec;
 
 namespace OutputForge.Workflow.Shells;
 
@@ -16,13 +18,14 @@ public sealed class DemographicsStandIn : IShellStandIn
 
     public void Add(ShellRecords records)
     {
+        var settings = records.Table.Demographics!;
         var assumed = new List<string>();
-        foreach (var variable in records.Table.Demographics!.Variables)
+        foreach (var (variable, i) in settings.Variables.Select((v, i) => (v, i)))
         {
             if (variable.Type == "continuous")
             {
                 var decimals = variable.DataDecimals ?? DefaultDataDecimals;
-                if (variable.DataDecimals is null)
+                if (variable.DataDecimals is null && ShownAtDataPrecision(variable, settings, records.Table.Source, $"/demographics/variables/{i}"))
                 {
                     assumed.Add(variable.Variable);
                 }
@@ -39,7 +42,15 @@ public sealed class DemographicsStandIn : IShellStandIn
         }
         if (assumed.Count > 0)
         {
-            records.Assumptions.Add($"{string.Join(", ", assumed)} {(assumed.Count == 1 ? "has" : "have")} no \"dataDecimals\"; the shell shows {(assumed.Count == 1 ? "it" : "them")} as collected in whole numbers (mean and median with 1 decimal, SD with 2); set \"dataDecimals\" for the precision the data will have");
+            records.Assumptions.Add($"{string.Join(", ", assumed)} {(assumed.Count == 1 ? "has" : "have")} no \"dataDecimals\"; the shell takes {(assumed.Count == 1 ? "it" : "them")} as collected in whole numbers (so mean and median with 1 decimal, SD with 2, unless the spec sets their decimals); set \"dataDecimals\" for the precision the data will have");
         }
     }
+
+    /// <summary>Whether a statistic the variable's rows show takes its decimals from the data's (no decimals of its own in the spec).</summary>
+    private static bool ShownAtDataPrecision(DemographicVariableSpec variable, DemographicsTableSpec settings, SpecSource source, string pointer) =>
+        (variable.Rows ?? StatisticRowLayout.DefaultRows)
+            .Select((text, i) => StatisticRowLayout.Parse(text, source, variable.Rows is null ? pointer : $"{pointer}/rows/{i}"))
+            .SelectMany(row => row.Statistics)
+            .Any(statistic => StatisticDecimals.For(statistic, 0, variable.Decimals, settings.Decimals)
+                != StatisticDecimals.For(statistic, 1, variable.Decimals, settings.Decimals));
 }
