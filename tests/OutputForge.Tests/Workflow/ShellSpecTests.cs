@@ -143,4 +143,37 @@ public sealed class ShellSpecTests
         Assert.Equal(["x.xxx (x.xxxx)", "x.xxx (x.xxxx)"], ByLabel(rows)["Mean (SD)"]);
         AllPlaceholders(rows);
     }
+
+    [Fact]
+    public void The_validation_specs_have_shells_once_their_arms_are_listed()
+    {
+        using var folder = new TempFolder();
+        var source = Path.Combine(RepositoryRoot.Path, "specs", "validation", "cdiscpilot01");
+        foreach (var file in Directory.GetFiles(source, "*.json", SearchOption.AllDirectories))
+        {
+            folder.Write(Path.GetRelativePath(source, file), File.ReadAllText(file));
+        }
+        var studyFile = folder.File("study.json");
+        var study = File.ReadAllText(studyFile);
+        Assert.Contains("\"control\": \"Placebo\", \"total\": false,", study);
+        File.WriteAllText(studyFile, study.Replace("\"control\": \"Placebo\", \"total\": false,",
+            "\"control\": \"Placebo\", \"total\": false, \"arms\": [{ \"value\": \"Placebo\", \"order\": 0 }, { \"value\": \"Xanomeline Low Dose\", \"order\": 1 }, { \"value\": \"Xanomeline High Dose\", \"order\": 2 }],"));
+        var output = folder.File("shells");
+
+        var (code, _, error) = WorkflowDemoFixture.Run(["shells", "--spec", studyFile, "--out", output, "--format", "docx"]);
+
+        Assert.True(code == 0, error);
+        foreach (var id in new[] { "14-1.01", "14-2.01" })
+        {
+            var rows = DocumentReader.WordTableRows(Path.Combine(output, $"shell-{id}.docx"));
+            AllPlaceholders(rows);
+        }
+        var demographics = ByLabel(DocumentReader.WordTableRows(Path.Combine(output, "shell-14-2.01.docx")));
+        // The table's own decimals (mean 1, SD 2), whole percentages with a sign, p-values to 4 decimals (pValueFloor 0.0001).
+        Assert.Equal(["x.x", "x.x", "x.x", "x.x", ""], demographics["Mean"]);
+        Assert.Equal(["x.xx", "x.xx", "x.xx", "x.xx", ""], demographics["SD"]);
+        Assert.Equal(["x (xx%)", "x (xx%)", "x (xx%)", "x (xx%)", ""], demographics["Male"]);
+        Assert.Equal(["", "", "", "", "0.xxxx"], demographics["Sex"]);
+        Assert.DoesNotContain("dataDecimals", error);
+    }
 }

@@ -43,6 +43,26 @@ public sealed class ShellsCommandTests(WorkflowDemoFixture demo) : IClassFixture
     }
 
     [Fact]
+    public void ShellRowsAreTheRunsRowsWhereNoRowDependsOnTheData()
+    {
+        using var folder = new TempFolder();
+        var studyFile = OutputForge.Demo.DemoSpecFiles.Write(folder.Path);
+        var output = folder.File("shells");
+
+        var (code, _, error) = WorkflowDemoFixture.Run(["shells", "--spec", studyFile, "--out", output, "--format", "docx"]);
+
+        Assert.True(code == 0, error);
+        // Populations, disposition with listed levels, responders, continuous by listed visits, time to event at listed times.
+        foreach (var id in new[] { "14.1.1", "14.1.2", "14.2.1.1", "14.2.1.2", "14.2.1.3", "14.2.1.4", "14.2.2.1", "14.2.2.2", "14.2.3.1", "14.2.3.2" })
+        {
+            var shell = DocumentReader.WordTableRows(Path.Combine(output, $"shell-{id}.docx"));
+            var table = DocumentReader.WordTableRows(Path.Combine(demo.Before, $"table-{id}.docx"));
+            Assert.Equal(table.Select(r => r[0]), shell.Select(r => r[0]));
+            Assert.Equal(table.Select(r => r.Count), shell.Select(r => r.Count));
+        }
+    }
+
+    [Fact]
     public void PercentDecimalsOfTheSpecSetThePlaceholders()
     {
         var table = MiniStudy.TableJson.Replace("\"kind\": \"responders\",", "\"kind\": \"responders\", \"statistics\": { \"percentDecimals\": 2, \"pValueFloor\": 0.0001 },");
