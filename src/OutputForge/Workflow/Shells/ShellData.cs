@@ -49,6 +49,11 @@ public static class ShellData
                 fixedValues[order] = arm.Order.ToString("R", CultureInfo.InvariantCulture);
             }
             var values = Witness(selects, true, fixedValues, whereSource, wherePointer);
+            // A responder table stratified by ADSL variables needs them; one stand-in stratum is enough for a shell.
+            foreach (var stratum in table.Responders?.Stratified?.Strata ?? [])
+            {
+                values = new Dictionary<string, string?>(values, StringComparer.OrdinalIgnoreCase) { [stratum] = values.GetValueOrDefault(stratum) ?? "Stratum" };
+            }
             for (var k = 1; k <= SubjectsPerArm; k++)
             {
                 subjects.Add(new Dictionary<string, string?>(values, StringComparer.OrdinalIgnoreCase)
