@@ -47,7 +47,7 @@ public sealed class DemoStratifiedResponderTableTests(DemoRunFixture demo) : ICl
         string[] Row(Func<List<(int, int, int, int)>, string> cell) => Arms.Select(a => a == "Placebo" ? "" : cell(strata[a])).ToArray();
         var expected = new Dictionary<string, string[]>
         {
-            ["Stratified difference, % [d]"] = Row(s => Round(100 * StratifiedFormulas.RiskDifference(s).Estimate, 1)),
+            ["Difference in proportions, % [d]"] = Row(s => Round(100 * StratifiedFormulas.RiskDifference(s).Estimate, 1)),
             ["95% CI [d]"] = Row(s => $"({Round(100 * StratifiedFormulas.RiskDifference(s).Lower, 1)}, {Round(100 * StratifiedFormulas.RiskDifference(s).Upper, 1)})"),
             ["CMH p-value [e]"] = Row(s => PValue(StratifiedFormulas.Cmh(s).P)),
             ["Breslow-Day p-value [f]"] = Row(s => PValue(StratifiedFormulas.BreslowDayTarone(s).P)),
@@ -102,7 +102,7 @@ public sealed class DemoStratifiedResponderTableTests(DemoRunFixture demo) : ICl
     {
         var text = File.ReadAllText(demo.Output($"table-{TableId}.txt"));
         foreach (var phrase in new[] { "Sato's variance", "Cochran-Mantel-Haenszel test", "Tarone's correction", "Greenland-Robins variance",
-                     "Robins-Breslow-Greenland", "stratified by STRAT1R and STRAT2R", "STRAT1R / STRAT2R" })
+                     "Robins-Breslow-Greenland", "Stratified by STRAT1R and STRAT2R", "Strata: each combination of STRAT1R / STRAT2R values" })
         {
             Assert.Contains(phrase, text);
         }

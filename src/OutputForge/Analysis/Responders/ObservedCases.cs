@@ -29,6 +29,6 @@ public static class ObservedCases
     }
 
     public static string Note(string populationLabel, string dataset) =>
-        $"N = number of subjects in the {populationLabel}; percentages are of the subjects with a record. Observed cases: each subject's record is taken as {dataset} has it, " +
-        $"including records the dataset derived (e.g. imputed; {DerivationVariable} not blank) where the endpoint selects them; subjects without a record are left out.";
+        $"N = subjects in the {populationLabel}; percentages are of the subjects with a record (observed cases: records as {dataset} has them, " +
+        $"including its derived records, {DerivationVariable} not blank, where the endpoint selects them); subjects without a record are left out.";
 }

@@ -8,7 +8,7 @@ namespace OutputForge.Analysis.Responders;
 /// The rows of a responder table's comparison block after the unstratified difference and p-value: the
 /// stratified common difference, the Cochran-Mantel-Haenszel p-value and the Breslow-Day p-value (when
 /// stratified), and the relative risk and odds ratio rows (when asked for); with the footnotes naming each
-/// method and the strata, and the warnings on empty, single-subject and dropped strata.
+/// method and the strata, and the warnings (run log and "Warning:" footnotes) on empty, single-subject and dropped strata.
 /// </summary>
 public sealed class StratifiedAndRatioRows
 {
@@ -26,30 +26,31 @@ public sealed class StratifiedAndRatioRows
     {
         var result = new StratifiedAndRatioRows();
         var levelText = MethodCatalog.LevelText(level);
-        var strataText = strata is null ? null : $"stratified by {string.Join(" and ", strata.Variables)}";
+        var indent = strata is null ? 1 : 2;
         if (strata is not null)
         {
+            result._rows.Add(new ResultRow("stratified", $"Stratified by {string.Join(" and ", strata.Variables)}", 1,
+                columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
             var spec = settings.Stratified!;
             var mn = spec.Difference == "miettinen-nurminen";
             var differenceMethod = mn ? StratifiedMiettinenNurminen.MethodName : "Mantel-Haenszel, Sato variance";
             var d = letters.Next();
-            result._rows.Add(Row("stratified-difference", $"Stratified difference, % {d}", columns, stratified,
+            result._rows.Add(Row("stratified-difference", $"Difference in proportions, % {d}", indent, columns, stratified,
                 c => CellFactory.Estimate(c.Arm.Key, c.Difference, 100, percentDecimals, differenceMethod)));
-            result._rows.Add(Row("stratified-difference-ci", $"{levelText} CI {d}", columns, stratified,
+            result._rows.Add(Row("stratified-difference-ci", $"{levelText} CI {d}", indent, columns, stratified,
                 c => CellFactory.Interval(c.Arm.Key, c.Difference, 100, percentDecimals, differenceMethod)));
             result._notes.Add(mn
-                ? $"{d} Common difference in proportions of responders (each arm minus {control.Label}), in percentage points, {strataText}: the root of the stratified Miettinen-Nurminen score with weights n1 n2 / (n1 + n2) per stratum (equal to the weighted difference of the strata), with the {levelText} score confidence interval (Miettinen and Nurminen 1985)."
-                : $"{d} Common difference in proportions of responders (each arm minus {control.Label}), in percentage points, {strataText}: Mantel-Haenszel estimate with weights n1 n2 / (n1 + n2) per stratum and the {levelText} confidence interval from Sato's variance (Greenland and Robins 1985; Sato 1989).");
+                ? $"{d} Common difference (arm minus {control.Label}), weights n1 n2 / (n1 + n2); stratified Miettinen-Nurminen score {levelText} CI (Miettinen and Nurminen 1985); estimate: the score's root, equal to the weighted difference."
+                : $"{d} Mantel-Haenszel common difference (arm minus {control.Label}), weights n1 n2 / (n1 + n2); {levelText} CI from Sato's variance (Sato 1989).");
             var e = letters.Next();
-            result._rows.Add(Row("cmh-p-value", $"CMH p-value {e}", columns, stratified, c => WithStrata(CellFactory.PValueOf(c.Arm.Key, c.Test), c.StrataUsed)));
-            result._notes.Add($"{e} Two-sided p-value of the Cochran-Mantel-Haenszel test{(spec.Test == "cmh-corrected" ? " with continuity correction" : "")}, {strataText}, of each arm against {control.Label} (those two arms only).");
+            result._rows.Add(Row("cmh-p-value", $"CMH p-value {e}", indent, columns, stratified, c => WithStrata(CellFactory.PValueOf(c.Arm.Key, c.Test), c.StrataUsed)));
+            result._notes.Add($"{e} Two-sided p-value of the Cochran-Mantel-Haenszel test{(spec.Test == "cmh-corrected" ? " with continuity correction" : "")}, each arm against {control.Label}.");
             if (spec.Homogeneity)
             {
                 var f = letters.Next();
-                result._rows.Add(Row("homogeneity-p-value", $"Breslow-Day p-value {f}", columns, stratified, c => CellFactory.PValueOf(c.Arm.Key, c.Homogeneity!)));
-                result._notes.Add($"{f} Breslow-Day test with Tarone's correction of equal odds ratios across the strata; strata in which every subject or no subject of the two arms responded are left out of it.");
+                result._rows.Add(Row("homogeneity-p-value", $"Breslow-Day p-value {f}", indent, columns, stratified, c => CellFactory.PValueOf(c.Arm.Key, c.Homogeneity!)));
+                result._notes.Add($"{f} Breslow-Day test (Tarone's correction) of equal odds ratios; strata where all or none responded are left out.");
             }
-            result.StrataNotes(strata, stratified, populationOfStratum);
         }
         var oddsMethod = OddsRatioIntervalMethods.Parse(settings.OddsRatioInterval);
         var ratioDecimals = settings.RatioDecimals;
@@ -57,29 +58,33 @@ public sealed class StratifiedAndRatioRows
         {
             var g = letters.Next();
             var method = strata is null ? "Katz log" : "Mantel-Haenszel, Greenland-Robins";
-            result._rows.Add(Row("relative-risk", $"Relative risk {g}", columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method)));
-            result._rows.Add(Row("relative-risk-ci", $"{levelText} CI {g}", columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method)));
+            result._rows.Add(Row("relative-risk", $"Relative risk {g}", indent, columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method)));
+            result._rows.Add(Row("relative-risk-ci", $"{levelText} CI {g}", indent, columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method)));
             result._notes.Add(strata is null
-                ? $"{g} Relative risk of response (each arm / {control.Label}) with the {levelText} log (Katz) confidence interval."
-                : $"{g} Mantel-Haenszel relative risk of response (each arm / {control.Label}), {strataText}, with the {levelText} confidence interval from the Greenland-Robins variance.");
+                ? $"{g} Relative risk of response (each arm / {control.Label}), log (Katz) {levelText} CI."
+                : $"{g} Mantel-Haenszel relative risk of response (each arm / {control.Label}), {levelText} CI from the Greenland-Robins variance.");
         }
         if (settings.Ratios.Contains("odds-ratio"))
         {
             var h = letters.Next();
             var describe = OddsRatioIntervalMethods.Describe(oddsMethod, strata is not null);
             var method = strata is null ? describe : $"Mantel-Haenszel, {describe}";
-            result._rows.Add(Row("odds-ratio", $"Odds ratio {h}", columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method)));
-            result._rows.Add(Row("odds-ratio-ci", $"{levelText} CI {h}", columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method)));
+            result._rows.Add(Row("odds-ratio", $"Odds ratio {h}", indent, columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method)));
+            result._rows.Add(Row("odds-ratio-ci", $"{levelText} CI {h}", indent, columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method)));
             result._notes.Add(strata is null
-                ? $"{h} Odds ratio of response (each arm to {control.Label}) with the {levelText} {describe} confidence interval."
-                : $"{h} Mantel-Haenszel odds ratio of response (each arm to {control.Label}), {strataText}, with the {levelText} {describe} confidence interval.");
+                ? $"{h} Odds ratio of response (each arm to {control.Label}), {describe} {levelText} CI."
+                : $"{h} Mantel-Haenszel odds ratio of response (each arm to {control.Label}), {describe} {levelText} CI.");
+        }
+        if (strata is not null)
+        {
+            result.StrataNotes(strata, stratified, populationOfStratum);
         }
         return result;
     }
 
     private void StrataNotes(ResponderStrata strata, IReadOnlyList<StratifiedComparison> stratified, IReadOnlyDictionary<string, int> populationOfStratum)
     {
-        _notes.Add($"Strata: each combination of the values of {strata.VariablesText} in ADSL (a stratum is written with its values in that order); the number of strata used is in results.json (statistic \"strata\" of the CMH p-value).");
+        _notes.Add($"Strata: each combination of {strata.VariablesText} values (ADSL); each comparison uses its two arms only.");
         var remarks = new List<string>();
         if (strata.EmptyCombinations.Count > 0)
         {
@@ -95,16 +100,16 @@ public sealed class StratifiedAndRatioRows
             remarks.Add($"{strata.WithoutValue} subject{(strata.WithoutValue == 1 ? " has" : "s have")} no value of {strata.VariablesText} and {(strata.WithoutValue == 1 ? "is" : "are")} left out of the stratified analysis.");
         }
         remarks.AddRange(stratified.SelectMany(c => c.Notes));
-        _notes.AddRange(remarks);
+        // Warnings go to the run log and are printed under the table as "Warning: ..." footnotes by the layout.
         _warnings.AddRange(remarks);
     }
 
     private static ResultCell WithStrata(ResultCell cell, int strataUsed) =>
         cell with { Values = [.. cell.Values, StatisticValue.Count(StatisticNames.StrataCount, strataUsed)] };
 
-    private static ResultRow Row<T>(string key, string label, IReadOnlyList<ResultColumn> columns, IReadOnlyList<T> comparisons, Func<T, ResultCell> cell)
+    private static ResultRow Row<T>(string key, string label, int indent, IReadOnlyList<ResultColumn> columns, IReadOnlyList<T> comparisons, Func<T, ResultCell> cell)
         where T : class =>
-        new(key, label, 1, columns.Select(column =>
+        new(key, label, indent, columns.Select(column =>
             comparisons.FirstOrDefault(c => ArmOf(c).Key == column.Key) is { } comparison
                 ? cell(comparison)
                 : CellFactory.Empty(column.Key)).ToList());
