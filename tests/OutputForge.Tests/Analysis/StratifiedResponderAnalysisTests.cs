@@ -137,4 +137,18 @@ public sealed class StratifiedResponderAnalysisTests
         Assert.DoesNotContain(b.Rows, r => r.Key == "derived");
         Assert.Contains(b.MethodNotes, n => n.Contains("Subjects with no assessment are excluded."));
     }
+
+    [Fact]
+    public void No_stratum_with_both_arms_makes_the_stratified_values_not_estimable_with_the_reason()
+    {
+        // STRAT1R equal to the arm: every stratum holds one arm only.
+        var adsl = Adsl.Replace(",A,X\n", ",P,X\n").Replace("Active,1,Y,P,X", "Active,1,Y,Q,X").Replace(",B,X\n", ",P,X\n").Replace("Active,1,Y,P,X", "Active,1,Y,Q,X")
+            .Replace("Active,1,Y,B,Y", "Active,1,Y,Q,Y");
+        using var study = new MiniStudy(table: Table(Settings), adsl: adsl, adeff: Adeff);
+        var result = Analyze(study);
+        Assert.Equal("no stratum has subjects in both groups", Value(result, "stratified-difference", "estimate").NotEstimableReason);
+        Assert.Equal("no stratum has subjects in both groups", Value(result, "cmh-p-value", "pValue").NotEstimableReason);
+        Assert.Contains(result.Warnings, w => w.Contains("stratum P / X", StringComparison.Ordinal) && w.Contains("no subjects of Active"));
+        Assert.Contains(result.Warnings, w => w.StartsWith("NE (not estimable) in \"CMH p-value [e]\"", StringComparison.Ordinal));
+    }
 }
