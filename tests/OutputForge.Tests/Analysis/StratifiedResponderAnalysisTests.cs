@@ -151,4 +151,14 @@ public sealed class StratifiedResponderAnalysisTests
         Assert.Contains(result.Warnings, w => w.Contains("stratum P / X", StringComparison.Ordinal) && w.Contains("no subjects of Active"));
         Assert.Contains(result.Warnings, w => w.StartsWith("NE (not estimable) in \"CMH p-value [e]\"", StringComparison.Ordinal));
     }
+
+    [Fact]
+    public void Corrected_cmh_subtracts_a_half_and_says_so()
+    {
+        using var study = new MiniStudy(table: Table(Settings.Replace("\"homogeneity\": true", "\"test\": \"cmh-corrected\"")), adsl: Adsl, adeff: Adeff);
+        var result = Analyze(study);
+        // sum (a - E) = 1 and sum V = 0.5 (see above): (1 - 0.5)^2 / 0.5 = 0.5, hand computation.
+        Assert.Equal(0.5, Value(result, "cmh-p-value", "statistic").Value!.Value, 12);
+        Assert.Contains(result.MethodNotes, n => n.StartsWith("[e] ", StringComparison.Ordinal) && n.Contains("with continuity correction"));
+    }
 }
