@@ -26,6 +26,8 @@ public sealed class TableSpec
 
     public TimeToEventSettings? TimeToEvent { get; init; }
 
+    public ResponderSettings? Responders { get; init; }
+
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;
 }
@@ -47,7 +49,7 @@ public sealed class EndpointSpec
     /// <summary>Condition that marks a record as a response, e.g. "AVALC = 'Y'".</summary>
     public string? Response { get; init; }
 
-    /// <summary>How subjects without a record are handled: "non-responder" or "exclude".</summary>
+    /// <summary>How subjects without a record are handled: "non-responder", "exclude" or "observed".</summary>
     public string Missing { get; init; } = "non-responder";
 
     /// <summary>Row-block label, e.g. "Itch responder at Week 12".</summary>

@@ -60,7 +60,7 @@ public sealed class CompareCommandTests(WorkflowDemoFixture demo) : IClassFixtur
         Assert.Equal(2, code);
         Assert.Contains("only in QC 4", output);
         Assert.Contains("no row 'responder' in table 14.2.1.1 (did you mean 'responders'?)", output);
-        Assert.Contains("row '95% CI' fits several rows (responders-ci, difference-ci); write the row key instead", output);
+        Assert.Contains("row '95% CI' fits several rows (responders-ci, difference-ci, stratified-difference-ci, relative-risk-ci, odds-ratio-ci); write the row key instead", output);
         Assert.Contains("no table '14.9' in production", output);
         using var workbook = new XLWorkbook(report);
         var cell = workbook.Worksheet("Only in QC").Cell(5, 4);

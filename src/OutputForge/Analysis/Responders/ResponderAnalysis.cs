@@ -8,7 +8,8 @@ namespace OutputForge.Analysis.Responders;
 /// <summary>
 /// Binary responder analysis: per arm, responders n (%) of N with a confidence interval for the
 /// proportion; per active arm against the control, the difference in proportions with its
-/// interval and a p-value (chi-square, or Fisher's exact test for small expected counts).
+/// interval and a p-value (chi-square, or Fisher's exact test for small expected counts); optionally an
+/// analysis stratified by ADSL variables and relative risk / odds ratio rows (<see cref="ResponderSettings"/>).
 /// </summary>
 public sealed class ResponderAnalysis : ITableAnalysis
 {
@@ -22,6 +23,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
         var records = EndpointRecords.Select(table, data);
         var response = records.CompileResponse(table);
         var missingAreNonResponders = endpoint.Missing == "non-responder";
+        var observedCases = endpoint.Missing == "observed";
 
         var counts = selection.Arms.ToDictionary(a => a, a => Count(selection, a, records, response, missingAreNonResponders));
         var columns = selection.Arms.Select(a => new ResultColumn(a.Key, a.Label, selection.Count(a))).ToList();
@@ -61,6 +63,18 @@ public sealed class ResponderAnalysis : ITableAnalysis
             rows.Add(new ResultRow("missing", "No assessment, counted as non-responder, n", 2,
                 columnCounts.Select(c => CellFactory.Count(c.Key, c.Counts.Missing)).ToList()));
         }
+        else if (observedCases)
+        {
+            rows.Insert(1, new ResultRow("evaluated", "Subjects with a record (observed cases), n", 1,
+                columnCounts.Select(c => CellFactory.Count(c.Key, c.Counts.Evaluated)).ToList()));
+            if (ObservedCases.DerivedRecords(selection, records) is { } derived)
+            {
+                rows.Insert(2, new ResultRow("derived", "Record derived in the dataset (DTYPE), n", 2,
+                    columnCounts.Select(c => CellFactory.Count(c.Key, c.Key == ResultKeys.Total ? derived.Values.Sum() : derived[c.Key])).ToList()));
+            }
+            rows.Add(new ResultRow("missing", "No record (left out), n", 1,
+                columnCounts.Select(c => CellFactory.Count(c.Key, c.Counts.Missing)).ToList()));
+        }
         else
         {
             rows.Insert(1, new ResultRow("evaluated", "Subjects evaluated, n", 1,
@@ -75,21 +89,68 @@ public sealed class ResponderAnalysis : ITableAnalysis
         rows.Add(ComparisonRow("difference-ci", $"{level} CI [b]", columns, comparisons,
             c => CellFactory.Interval(c.Arm.Key, c.Difference, 100, decimals, MethodCatalog.Describe(differenceMethod))));
         rows.Add(ComparisonRow("p-value", "p-value [c]", columns, comparisons, c => CellFactory.PValueOf(c.Arm.Key, c.Test)));
+        var extra = ExtraComparisons(table, selection, data, records, response, missingAreNonResponders, counts, columns, statistics.Level, decimals);
+        rows.AddRange(extra?.Rows ?? []);
 
         var notes = new List<string>
         {
             $"[a] {MethodCatalog.Describe(proportionMethod)} {level} confidence interval for the proportion of responders.",
             $"[b] Difference in proportions of responders (each arm minus {control.Label}), in percentage points, with the {MethodCatalog.Describe(differenceMethod)} {level} confidence interval.",
             "[c] " + TestNote(comparisons, statistics.Test, control),
-            missingAreNonResponders
-                ? $"N = number of subjects in the {selection.Label}; percentages are of N. Subjects with no assessment are counted as non-responders."
-                : $"N = number of subjects in the {selection.Label}; percentages are of the subjects evaluated. Subjects with no assessment are excluded.",
         };
+        notes.AddRange(extra?.Notes ?? []);
+        notes.Add(endpoint.Missing switch
+        {
+            "non-responder" => $"N = number of subjects in the {selection.Label}; percentages are of N. Subjects with no assessment are counted as non-responders.",
+            "observed" => ObservedCases.Note(selection.Label, endpoint.Dataset),
+            _ => $"N = number of subjects in the {selection.Label}; percentages are of the subjects evaluated. Subjects with no assessment are excluded.",
+        });
         var warnings = new List<string>(selection.Warnings);
+        warnings.AddRange(extra?.Warnings ?? []);
         warnings.AddRange(SmallCountWarnings(comparisons, statistics.Test, control));
         warnings.AddRange(NotEstimableWarnings(rows));
         return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
             new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor);
+    }
+
+    /// <summary>The stratified rows and the ratio rows, when the table's "responders" settings ask for them.</summary>
+    private static StratifiedAndRatioRows? ExtraComparisons(TableSpec table, PopulationSelection selection, StudyData data,
+        EndpointRecords records, Expressions.Condition response, bool missingAreNonResponders,
+        IReadOnlyDictionary<TreatmentArm, ResponderCounts> counts, IReadOnlyList<ResultColumn> columns, double level, int decimals)
+    {
+        if (table.Responders is not { } settings || (settings.Stratified is null && settings.Ratios.Count == 0))
+        {
+            return null;
+        }
+        var control = selection.Control;
+        var actives = selection.Arms.Where(a => !a.IsControl).ToList();
+        var withRelativeRisk = settings.Ratios.Contains("relative-risk");
+        OddsRatioIntervalMethod? oddsMethod = settings.Ratios.Contains("odds-ratio") ? OddsRatioIntervalMethods.Parse(settings.OddsRatioInterval) : null;
+        ResponderStrata? strata = null;
+        var stratified = new List<StratifiedComparison>();
+        var population = new Dictionary<string, int>(StringComparer.Ordinal);
+        List<ResponderRatios> ratios;
+        if (settings.Stratified is { } spec)
+        {
+            strata = ResponderStrata.Build(spec, selection, data, table.Source);
+            var subjects = selection.ArmOfSubject
+                .Select(p => records.RowOfSubject.TryGetValue(p.Key, out var row)
+                    ? new ResponderSubject(p.Key, p.Value, true, response.Matches(row))
+                    : new ResponderSubject(p.Key, p.Value, missingAreNonResponders, false))
+                .ToList();
+            foreach (var stratum in strata.StratumOfSubject.Values)
+            {
+                population[stratum] = population.GetValueOrDefault(stratum) + 1;
+            }
+            stratified = actives.Select(a => StratifiedComparison.Compute(a, control, subjects, strata, spec, level, withRelativeRisk, oddsMethod)).ToList();
+            ratios = stratified.Select(ResponderRatios.Stratified).ToList();
+        }
+        else
+        {
+            ratios = actives.Select(a => ResponderRatios.Unstratified(a, counts[a], counts[control], withRelativeRisk, oddsMethod is not null,
+                oddsMethod ?? OddsRatioIntervalMethod.Woolf, level)).ToList();
+        }
+        return StratifiedAndRatioRows.Build(settings, strata, stratified, ratios, columns, control, level, decimals, new FootnoteLetters('d'), population);
     }
 
     private static ResponderCounts Count(PopulationSelection selection, TreatmentArm arm, EndpointRecords records,

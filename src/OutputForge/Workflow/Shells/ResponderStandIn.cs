@@ -13,6 +13,12 @@ public sealed class ResponderStandIn : IShellStandIn
         var nonResponder = EndpointStandIn.Selected(records, endpoint, condition: $"not ({response})", conditionPointer: "/endpoint/response");
         foreach (var subject in records.Subjects)
         {
+            // A stratified analysis reads its strata from ADSL; two stand-in strata, each with responders
+            // and non-responders, make every stratified statistic (homogeneity included) estimable.
+            foreach (var stratum in records.Table.Responders?.Stratified?.Strata ?? [])
+            {
+                records.SetIfAbsent(subject, stratum, subject.IndexInArm % 2 == 0 ? "Stratum 1" : "Stratum 2", Expressions.VariableKind.Text);
+            }
             records.AddRecord(endpoint.Dataset,
                 EndpointStandIn.For(subject, subject.IndexInArm < ShellData.SubjectsPerArm / 2 ? responder : nonResponder));
         }

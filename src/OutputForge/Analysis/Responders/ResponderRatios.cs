@@ -1,0 +1,26 @@
+using OutputForge.Stats;
+
+namespace OutputForge.Analysis.Responders;
+
+/// <summary>
+/// Relative risk and odds ratio of one active arm to the control (either may be absent when the spec does
+/// not ask for it): unstratified, the relative risk with the Katz log interval and the odds ratio with the
+/// interval the spec chose; stratified, the Mantel-Haenszel estimates of <see cref="StratifiedComparison"/>.
+/// No correction is added to zero cells: a ratio with a zero cell is not estimable, and says why.
+/// </summary>
+public sealed record ResponderRatios(TreatmentArm Arm, IntervalResult? RelativeRisk, IntervalResult? OddsRatio)
+{
+    public static ResponderRatios Unstratified(TreatmentArm arm, ResponderCounts active, ResponderCounts control,
+        bool withRelativeRisk, bool withOddsRatio, OddsRatioIntervalMethod oddsRatioMethod, double level) =>
+        new(arm,
+            withRelativeRisk ? Stats.RelativeRisk.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level) : null,
+            withOddsRatio ? UnstratifiedOddsRatio(active, control, oddsRatioMethod, level) : null);
+
+    public static ResponderRatios Stratified(StratifiedComparison comparison) => new(comparison.Arm, comparison.RelativeRisk, comparison.OddsRatio);
+
+    private static IntervalResult UnstratifiedOddsRatio(ResponderCounts active, ResponderCounts control, OddsRatioIntervalMethod method, double level) => method switch
+    {
+        OddsRatioIntervalMethod.Woolf => Stats.OddsRatio.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level),
+        _ => throw new ArgumentOutOfRangeException(nameof(method), method, "Unknown odds ratio interval."),
+    };
+}
