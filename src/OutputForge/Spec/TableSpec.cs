@@ -26,6 +26,8 @@ public sealed class TableSpec
 
     public TimeToEventSettings? TimeToEvent { get; init; }
 
+    public SubgroupSettings? Subgroups { get; init; }
+
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;
 }
