@@ -34,7 +34,6 @@ internal static class ForestPlotPicture
         var measure = forest.Measure;
         double X(double value) => measure.IsRatio ? Math.Log10(value) : value * measure.Scale;
         var plot = new Plot();
-        plot.Font.Set(FontName);
         var arms = forest.ActiveArms.Count;
         var estimable = forest.Rows.Where(r => r.Effects is not null).SelectMany(r => r.Effects!).Where(e => e.IsEstimable).ToList();
         var noEffect = measure.IsRatio ? 0 : measure.NoEffect;
@@ -105,6 +104,10 @@ internal static class ForestPlotPicture
         }
 
         plot.Axes.Left.TickGenerator = ticks;
+        // Each text names its font: Plot.Font.Set would also reset the headings' bold face.
+        plot.Axes.Left.TickLabelStyle.FontName = FontName;
+        plot.Axes.Bottom.TickLabelStyle.FontName = FontName;
+        plot.Axes.Bottom.Label.FontName = FontName;
         plot.Axes.Left.TickLabelStyle.FontSize = FontSize;
         plot.Axes.Bottom.TickLabelStyle.FontSize = FontSize * 0.9f;
         plot.Axes.Bottom.TickGenerator = measure.IsRatio
@@ -114,7 +117,8 @@ internal static class ForestPlotPicture
             ? $"{measure.Label} ({forest.LevelText} CI), log scale"
             : $"Difference in proportions of responders, percentage points ({forest.LevelText} CI)";
         plot.Axes.Bottom.Label.FontSize = FontSize;
-        plot.Title($"Table {forest.TableId}: {(measure.IsRatio ? measure.Label.ToLowerInvariant() : "difference in proportions")} of responders by subgroup", FontSize * 1.1f);
+        plot.Title($"Table {forest.TableId}: {(measure.IsRatio ? measure.Label.ToLowerInvariant() + " of response" : "difference in proportions of responders")} by subgroup", FontSize * 1.1f);
+        plot.Axes.Title.Label.FontName = FontName;
         plot.Axes.SetLimits(low, high, bottom - 0.2, 0.7);
         plot.Grid.XAxisStyle.MajorLineStyle.Color = Color.FromHex("#E4E4E4");
         plot.Grid.YAxisStyle.MajorLineStyle.Width = 0;
