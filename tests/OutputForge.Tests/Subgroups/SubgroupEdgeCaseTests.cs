@@ -114,4 +114,15 @@ public sealed class SubgroupEdgeCaseTests
         Assert.Contains("Forest plot for Table 9.1: relative risk", first.AltText);
         Assert.Contains("no effect is at 1", first.AltText);
     }
+
+    [Fact]
+    public void Figures_drawn_at_the_same_time_have_the_bytes_of_one_drawn_alone()
+    {
+        // A run builds its tables in parallel, so several forest plots may be drawn at once.
+        const string settings = """{ "variables": [ { "variable": "SEX" }, { "variable": "REGION1" } ], "minimumPerArm": 1 }""";
+        var alone = Analyze(settings, Balanced).Figure!.Png;
+        var together = new byte[6][];
+        Parallel.For(0, together.Length, i => together[i] = Analyze(settings, Balanced).Figure!.Png);
+        Assert.All(together, png => Assert.Equal(alone, png));
+    }
 }
