@@ -50,6 +50,9 @@ public sealed record TableDocument(
         init => _footerLines = value;
     }
 
+    /// <summary>A picture drawn from the table's numbers, shown after the table and its footnotes; null when there is none.</summary>
+    public Results.TableFigure? Figure { get; init; }
+
     private readonly IReadOnlyList<string>? _titleLines;
     private readonly string? _continuedLine;
     private readonly IReadOnlyList<string>? _footerLines;

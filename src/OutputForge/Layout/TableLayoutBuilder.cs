@@ -76,7 +76,10 @@ public static class TableLayoutBuilder
         }
         footnotes.AddRange(table.Footnotes);
         var document = new TableDocument(table.TableId, table.Titles, table.Population, studyLine, columns, headers, rows,
-            footnotes, shell ? ShellSourceLine(table, run) : SourceLine(table, run), page);
+            footnotes, shell ? ShellSourceLine(table, run) : SourceLine(table, run), page)
+        {
+            Figure = shell ? null : table.Figure,
+        };
         return new LaidOutTable(document, records);
     }
 

@@ -17,4 +17,14 @@ public static class OutputFileNames
         }
         return $"table-{tableId}{extension}";
     }
+
+    /// <summary>The PNG of a table's figure, beside the table's other files: "table-14.2.5.1-forest.png".</summary>
+    public static string ForFigure(string tableId, string figureName)
+    {
+        if (figureName.Length == 0 || figureName.Any(c => !(char.IsAsciiLetterOrDigit(c) || c == '-')))
+        {
+            throw new RunException($"figure name '{figureName}' cannot name an output file (use letters, digits and '-')");
+        }
+        return ForTable(tableId, $"-{figureName}.png");
+    }
 }

@@ -82,7 +82,12 @@ public static class PackageRunner
         var files = staging.Commit();
         foreach (var (table, _) in laidOut)
         {
-            log.Info($"wrote table {table.Document.TableId}: {string.Join(", ", request.Renderers.Select(r => OutputFileNames.ForTable(table.Document.TableId, r.Extension)))}");
+            var names = request.Renderers.Select(r => OutputFileNames.ForTable(table.Document.TableId, r.Extension)).ToList();
+            if (table.Document.Figure is { } shown)
+            {
+                names.Add(OutputFileNames.ForFigure(table.Document.TableId, shown.Name));
+            }
+            log.Info($"wrote table {table.Document.TableId}: {string.Join(", ", names)}");
         }
         var warnings = laidOut.Sum(t => t.Warnings.Count);
         log.Info($"{laidOut.Count} table{(laidOut.Count == 1 ? "" : "s")}, {warnings} warning{(warnings == 1 ? "" : "s")}, {files.Count} files in {request.OutputFolder} ({clock.Elapsed.TotalSeconds:0.00} s)");
@@ -142,8 +147,13 @@ public static class PackageRunner
         {
             result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
         }
+        var outputNames = request.Renderers.Select(r => OutputFileNames.ForTable(table.Id, r.Extension)).ToList();
+        if (result.Figure is { } figure)
+        {
+            outputNames.Add(OutputFileNames.ForFigure(table.Id, figure.Name));
+        }
         var manifest = new ManifestTable(table.Id, inputs.ForTable(result.Provenance.SpecFile, result.Provenance.Datasets),
-            request.Renderers.Select(r => OutputFileNames.ForTable(table.Id, r.Extension)).ToList(), ManifestStaging.Timestamp(run.RunTime));
+            outputNames, ManifestStaging.Timestamp(run.RunTime));
         LaidOutTable laidOut;
         try
         {
@@ -168,6 +178,10 @@ public static class PackageRunner
                 bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
             }
             files.Add((OutputFileNames.ForTable(table.Id, renderer.Extension), bytes));
+        }
+        if (result.Figure is { } picture)
+        {
+            files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
         }
         return new BuiltTable(laidOut, result.Warnings, manifest, files);
     }

@@ -16,7 +16,11 @@ public sealed record TableResult(
     TableProvenance Provenance,
     int PercentDecimals = 1,
     double PValueFloor = 0.001,
-    PercentStyle? PercentStyle = null);
+    PercentStyle? PercentStyle = null)
+{
+    /// <summary>A picture drawn from the table's numbers, shown after the table; null when the kind draws none.</summary>
+    public TableFigure? Figure { get; init; }
+}
 
 /// <summary>
 /// A result column. <paramref name="Key"/> is the stable key used in results.json (e.g. the arm

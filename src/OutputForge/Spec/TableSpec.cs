@@ -28,6 +28,8 @@ public sealed class TableSpec
 
     public ResponderSettings? Responders { get; init; }
 
+    public SubgroupSettings? Subgroups { get; init; }
+
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;
 }

@@ -30,6 +30,9 @@ public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixtur
 
     private static string[] AffectedNumbersOf(string table) => table == "14.2.1.1" ? [.. AffectedNumbers, .. StratifiedNumbers] : AffectedNumbers;
 
+    /// <summary>The demo's subgroup analysis of the week-12 responder endpoint (ITT).</summary>
+    private const string SubgroupTable = "14.2.5.1";
+
     [Fact]
     public void AFlippedResponseChangesExactlyTheAffectedNumbers()
     {
@@ -40,8 +43,13 @@ public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixtur
         Assert.Equal(["data adeff.csv"], changedInputs);
         // Week 12 tables hold the subject: ITT always, per-protocol only when the subject is in it.
         var expectedTables = demo.FlippedSubjectInPerProtocol ? new[] { "14.2.1.1", "14.2.1.2" } : ["14.2.1.1"];
-        Assert.Equal(expectedTables, changes.ChangedTables.Select(t => t.Id).ToArray());
-        foreach (var table in changes.ChangedTables)
+        Assert.Equal([.. expectedTables, SubgroupTable], changes.ChangedTables.Select(t => t.Id).ToArray());
+        // The subgroup table of the same endpoint changes only in the flipped subject's arm and its comparison with placebo.
+        var subgroups = changes.ChangedTables.Single(t => t.Id == SubgroupTable);
+        Assert.All(subgroups.Numbers, n => Assert.Contains(n.Before.Column, new[] { "qf-217-10-mg", "qf-217-10-mg-vs-placebo" }));
+        Assert.Contains(subgroups.Numbers, n => n.Before.Row == "overall" && n.Before.Statistic == "n");
+        Assert.Empty(subgroups.RowsAdded);
+        foreach (var table in changes.ChangedTables.Where(t => t.Id != SubgroupTable))
         {
             Assert.Equal(AffectedNumbersOf(table.Id).Order(), table.Numbers.Select(n => $"{n.Before.Row}/{n.Before.Statistic}").Order());
             Assert.All(table.Numbers, n => Assert.Equal("qf-217-10-mg", n.Before.Column));
@@ -65,13 +73,15 @@ public sealed class ChangesCommandTests(WorkflowDemoFixture demo) : IClassFixtur
         var study = DemoStudyTables.Read();
         Assert.Contains($"Inputs changed: 1 of {1 + study.TableFiles.Count + study.DataFiles.Count}", output);
         Assert.Contains("data adeff.csv: changed (SHA-256 ", output);
-        var changed = demo.FlippedSubjectInPerProtocol ? new[] { "14.2.1.1", "14.2.1.2" } : ["14.2.1.1"];
+        var changed = demo.FlippedSubjectInPerProtocol ? new[] { "14.2.1.1", "14.2.1.2", SubgroupTable } : ["14.2.1.1", SubgroupTable];
         var unchanged = study.TableIds.Where(id => !changed.Contains(id)).ToList();
         Assert.Contains($"Tables unchanged: {unchanged.Count}: {string.Join(", ", unchanged)}", output);
         Assert.Matches(@"responders / qf-217-10-mg / n \(Responders, n \(%\) / QF-217 10 mg\): (\d+) -> \d+", output);
         using var workbook = new XLWorkbook(report);
         var numbers = workbook.Worksheet("Numbers");
-        Assert.Equal(1 + changed.Sum(id => AffectedNumbersOf(id).Length), numbers.LastRowUsed().RowNumber());
+        var subgroupNumbers = OutputForge.Workflow.Changes.RunComparison.Compare(demo.Before, demo.After).ChangedTables
+            .Single(t => t.Id == SubgroupTable).Numbers.Count;
+        Assert.Equal(1 + changed.Where(id => id != SubgroupTable).Sum(id => AffectedNumbersOf(id).Length) + subgroupNumbers, numbers.LastRowUsed().RowNumber());
         Assert.True(File.Exists(Path.ChangeExtension(report, ".txt")));
     }
 

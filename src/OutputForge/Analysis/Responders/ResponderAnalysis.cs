@@ -25,7 +25,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
         var missingAreNonResponders = endpoint.Missing == "non-responder";
         var observedCases = endpoint.Missing == "observed";
 
-        var counts = selection.Arms.ToDictionary(a => a, a => Count(selection, a, records, response, missingAreNonResponders));
+        var counts = selection.Arms.ToDictionary(a => a, a => Count(selection.ArmOfSubject, a, records, response, missingAreNonResponders));
         var columns = selection.Arms.Select(a => new ResultColumn(a.Key, a.Label, selection.Count(a))).ToList();
         var columnCounts = selection.Arms.Select(a => (Key: a.Key, Counts: counts[a])).ToList();
         if (study.Treatment.Total)
@@ -153,11 +153,12 @@ public sealed class ResponderAnalysis : ITableAnalysis
         return StratifiedAndRatioRows.Build(settings, strata, stratified, ratios, columns, control, level, decimals, new FootnoteLetters('d'), population);
     }
 
-    private static ResponderCounts Count(PopulationSelection selection, TreatmentArm arm, EndpointRecords records,
+    /// <summary>The counts of <paramref name="arm"/> among <paramref name="armOfSubject"/> (the population, or a part of it such as a subgroup).</summary>
+    internal static ResponderCounts Count(IEnumerable<KeyValuePair<string, TreatmentArm>> armOfSubject, TreatmentArm arm, EndpointRecords records,
         Expressions.Condition response, bool missingAreNonResponders)
     {
         int population = 0, evaluated = 0, responders = 0;
-        foreach (var (subject, subjectArm) in selection.ArmOfSubject)
+        foreach (var (subject, subjectArm) in armOfSubject)
         {
             if (subjectArm != arm)
             {

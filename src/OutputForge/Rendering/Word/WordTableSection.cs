@@ -8,7 +8,8 @@ namespace OutputForge.Rendering.Word;
 /// <summary>
 /// One table as one section of a Word document: its own page headers (study line, "Page X of Y",
 /// and the "(continued)" line on the pages after its first) and footer (source line), the centered title block with a
-/// bookmark on the heading, the table and its footnotes, and the section's page setup. A
+/// bookmark on the heading, the table and its footnotes, the table's figure on a page of its own when
+/// it has one, and the section's page setup. A
 /// separate document holds one section; a combined document one per table, each on new pages.
 /// </summary>
 public static class WordTableSection
@@ -34,6 +35,8 @@ public static class WordTableSection
         elements.Add(new WordTableBuilder(document, geometry.TextWidthTwips, font).Build());
         for (int i = 0; i < document.Footnotes.Count; i++)
             elements.Add(WordText.Paragraph(document.Footnotes[i], Spaced(before: i == 0)));
+        if (document.Figure is { } figure)
+            elements.Add(WordFigure.Build(main, figure, geometry, pictureId: bookmarkId + 1));
         var closing = new Paragraph(new ParagraphProperties(
             Section(geometry, main.GetIdOfPart(firstHeader), main.GetIdOfPart(headerPart), main.GetIdOfPart(footerPart))));
         elements.Add(closing);

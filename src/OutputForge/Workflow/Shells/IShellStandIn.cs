@@ -17,5 +17,8 @@ public interface IShellStandIn
     /// <summary>The spec's "kind" value this stand-in serves.</summary>
     string Kind { get; }
 
+    /// <summary>How many stand-in subjects each arm needs; most kinds do with <see cref="ShellData.SubjectsPerArm"/>.</summary>
+    int SubjectsPerArm(Spec.TableSpec table) => ShellData.SubjectsPerArm;
+
     void Add(ShellRecords records);
 }

@@ -19,7 +19,7 @@ public static class ShellBuilder
         PageSettings page, TemplateSet templates)
     {
         var records = ShellData.For(study, table);
-        var result = TableAnalyses.For(table).Analyze(study, table, records.ToStudyData()) with { Warnings = [] };
+        var result = TableAnalyses.For(table).Analyze(study, table, records.ToStudyData()) with { Warnings = [], Figure = null };
         LaidOutTable laidOut;
         try
         {

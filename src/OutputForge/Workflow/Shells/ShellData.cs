@@ -31,6 +31,8 @@ public static class ShellData
         var wherePointer = table.Subset is null ? $"/populations/{table.Population}/where" : "/subset";
         var whereSource = table.Subset is null ? study.Source : table.Source;
 
+        var standIn = ShellStandIns.For(table.Kind);
+        var perArm = standIn?.SubjectsPerArm(table) ?? SubjectsPerArm;
         var subjects = new List<ShellSubject>();
         var records = new ShellRecords(study, table, subjects);
         if (order is not null)
@@ -45,7 +47,7 @@ public static class ShellData
                 fixedValues[order] = arm.Order.ToString("R", CultureInfo.InvariantCulture);
             }
             var values = records.Witness(selects, fixedValues, ShellRecords.SubjectLevel, whereSource, wherePointer);
-            for (var k = 0; k < SubjectsPerArm; k++)
+            for (var k = 0; k < perArm; k++)
             {
                 subjects.Add(new ShellSubject(string.Create(CultureInfo.InvariantCulture, $"SHELL-{index + 1}-{k + 1:00}"), index, k,
                     new Dictionary<string, string?>(values, StringComparer.OrdinalIgnoreCase)
@@ -54,7 +56,7 @@ public static class ShellData
                     }));
             }
         }
-        ShellStandIns.For(table.Kind)?.Add(records);
+        standIn?.Add(records);
         return records;
     }
 }

@@ -12,6 +12,7 @@ public static class ShellStandIns
         new AdverseEventStandIn(),
         new ContinuousStandIn(),
         new TimeToEventStandIn(),
+        new SubgroupStandIn(),
     }.ToDictionary(s => s.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;
