@@ -15,6 +15,7 @@ public static class TableAnalyses
         new AdverseEvents.AdverseEventAnalysis(),
         new Continuous.ContinuousAnalysis(),
         new TimeToEvent.TimeToEventAnalysis(),
+        new CategoricalByVisit.CategoricalByVisitAnalysis(),
     }.ToDictionary(a => a.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;

@@ -21,6 +21,7 @@ public static class StatisticNames
     public const string Maximum = "max";
     public const string EventCount = "events";
     public const string StandardError = "se";
+    public const string StrataCount = "strata";
 
     public static readonly IReadOnlyList<string> All =
     [
@@ -28,5 +29,6 @@ public static class StatisticNames
         Mean, StandardDeviation, Median, FirstQuartile, ThirdQuartile, Minimum, Maximum,
         EventCount,
         StandardError,
+        StrataCount,
     ];
 }

@@ -26,6 +26,8 @@ public sealed class TableSpec
 
     public TimeToEventSettings? TimeToEvent { get; init; }
 
+    public CategoricalByVisitSettings? CategoricalByVisit { get; init; }
+
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;
 }
