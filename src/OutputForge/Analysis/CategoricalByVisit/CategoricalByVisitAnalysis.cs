@@ -68,7 +68,7 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
             var imputed = answered.Count(s => s.Response.Imputed);
             if (settings.Imputation is not null)
             {
-                imputedByVisit.Add($"{visit} {imputed}");
+                imputedByVisit.Add($"{visit}: {imputed}");
             }
 
             var comparisons = new List<VisitComparison>();
@@ -177,7 +177,7 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         return settings.Imputation is null
             ? records + $"observed responses only (DTYPE empty), no imputation of missing values. Response variable: {settings.Variable}."
             : records + $"observed responses (DTYPE empty) and, for visits without one, responses imputed by {settings.Imputation} (DTYPE = '{settings.Imputation}'); " +
-              $"imputed responses counted: {string.Join(", ", imputedByVisit)}. Response variable: {settings.Variable}.";
+              $"imputed responses counted: {string.Join("; ", imputedByVisit)}. Response variable: {settings.Variable}.";
     }
 
     private static string TestNote(CategoricalByVisitSettings settings, ResponseCategories categories, double[] scores,
