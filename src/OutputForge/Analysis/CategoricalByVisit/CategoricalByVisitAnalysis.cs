@@ -175,9 +175,9 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         }
         var records = selection.Count > 0 ? $"Records with {string.Join(" and ", selection)}; " : string.Empty;
         return settings.Imputation is null
-            ? records + $"observed responses only (DTYPE empty), no imputation of missing values. Response variable: {settings.Variable}."
+            ? records + "observed responses only (DTYPE empty), no imputation of missing values."
             : records + $"observed responses (DTYPE empty) and, for visits without one, responses imputed by {settings.Imputation} (DTYPE = '{settings.Imputation}'); " +
-              $"imputed responses counted: {string.Join("; ", imputedByVisit)}. Response variable: {settings.Variable}.";
+              $"imputed responses counted: {string.Join("; ", imputedByVisit)}.";
     }
 
     private static string TestNote(CategoricalByVisitSettings settings, ResponseCategories categories, double[] scores,
