@@ -29,7 +29,10 @@ public sealed class CategoricalByVisitSettings
     /// <summary>"row-mean-scores" (default), "correlation", "general-association" or "none".</summary>
     public string Test { get; init; } = "row-mean-scores";
 
-    /// <summary>Column scores: "table" (the category values, or each category's score) or "equal-spacing" (1, 2, ... in listed order).</summary>
+    /// <summary>
+    /// Column scores: "table" (the category values, or each category's score), "equal-spacing" (1, 2, ... in
+    /// listed order) or "modified-ridit" (standardized midranks computed within each stratum).
+    /// </summary>
     public string Scores { get; init; } = "table";
 
     /// <summary>Stratification variables (endpoint record, else ADSL), cross-classified; none for an unstratified test.</summary>

@@ -50,7 +50,8 @@ internal static class CategoricalByVisitOracle
                 {{imputation}}
                 "strata": {{variant.GetProperty("strata").GetRawText()}},
                 "test": "{{variant.GetProperty("test").GetString()}}",
-                "comparison": "{{variant.GetProperty("comparison").GetString()}}"
+                "comparison": "{{variant.GetProperty("comparison").GetString()}}",
+                "scores": "{{variant.GetProperty("scores").GetString()}}"
               }
             }
             """);

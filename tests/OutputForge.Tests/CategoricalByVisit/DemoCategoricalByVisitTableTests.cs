@@ -8,9 +8,10 @@ namespace OutputForge.Tests.CategoricalByVisit;
 
 /// <summary>
 /// Tables 14.2.4.1 and 14.2.4.2 of the demo package (subject global impression of change in itch by visit,
-/// observed and LOCF, CMH row mean scores stratified by STRAT1R x STRAT2R, each dose vs placebo) and three
+/// observed and LOCF, CMH row mean scores stratified by STRAT1R x STRAT2R, each dose vs placebo) and four
 /// further settings (general association over all arms unstratified; nonzero correlation over all arms by
-/// STRAT1R; general association by STRAT2R with LOCF) against R 4.2.2 with vcdExtra 0.8.2 and base R
+/// STRAT1R; general association by STRAT2R with LOCF; row mean scores with modified ridit scores within the
+/// STRAT1R x STRAT2R strata, vcdExtra's "midrank") against R 4.2.2 with vcdExtra 0.8.2 and base R
 /// mantelhaen.test, values in Oracles/categorical_by_visit_oracles.json from
 /// Oracles/generate_categorical_by_visit_oracles.R run on the default demo study (adeff.csv pinned by
 /// SHA-256 in DemoStudyFingerprintTests).

@@ -7,7 +7,7 @@ namespace OutputForge.Tests.CategoricalByVisit;
 /// The categorical-by-visit kind on the CDISC pilot study's CIBIC+ (adqscibc.csv, Weeks 8, 16 and 24,
 /// Efficacy Population, read in place from ../shared, never copied) against R 4.2.2 with vcdExtra 0.8.2
 /// and base R mantelhaen.test: the validation spec's settings (LOCF, row mean scores stratified by
-/// SITEGR1, each xanomeline dose vs placebo) and three others, values in
+/// SITEGR1, each xanomeline dose vs placebo) and four others (one with modified ridit scores within each site group), values in
 /// Oracles/pilot_categorical_by_visit_oracles.json from Oracles/generate_categorical_by_visit_oracles.R.
 /// No published CIBIC+ values are in ../shared/reference, so the check is against R only.
 /// </summary>

@@ -9,6 +9,7 @@
 # when ../shared/data/cdiscpilot01/csv is present, pilot_categorical_by_visit_oracles.json (CDISC pilot
 # CIBIC+, adqscibc.csv): values only, the pilot data are never copied into the repository.
 #
+# Modified ridit scores are vcdExtra's "midrank" scores, computed by CMHtest2 within each stratum.
 # Selection, as the kind documents it: population flag of ADSL, PARAMCD, ANL01FL = 'Y', DTYPE empty
 # (observed) or also DTYPE = the imputation type; percentages of the subjects with a response at the
 # visit; strata are the crossed values of the strata variables (from the record dataset when it has
@@ -29,11 +30,11 @@ environment(cmh_pieces) <- piece_env
 key <- function(s) gsub("^-+|-+$", "", gsub("[^a-z0-9]+", "-", tolower(s)))
 num <- function(v) if (is.na(v)) "null" else sprintf("%.17g", v)
 
-overall <- function(tables, test, J) {
+overall <- function(tables, test, J, ridit) {
   informative <- Filter(function(t) sum(rowSums(t) > 0) >= 2, tables)
   keep <- if (test == "general") which(Reduce(`+`, lapply(informative, colSums)) > 0) else seq_len(J)
   scores <- seq_len(J)[keep]
-  pieces <- lapply(tables, function(t) cmh_pieces(t[, keep, drop = FALSE], rscores = seq_len(nrow(t)), cscores = scores,
+  pieces <- lapply(tables, function(t) cmh_pieces(t[, keep, drop = FALSE], rscores = seq_len(nrow(t)), cscores = if (ridit) "midrank" else scores,
                                                    types = test, details = TRUE))
   all <- vcdExtra:::CMHtest3(pieces, types = test)$table
   # With a single type CMHtest3 loses the name of its degrees of freedom (Df[type] is NA), so df is read
@@ -95,7 +96,7 @@ variant_records <- function(name, adsl, rec_all, spec) {
         rs <- r[stratum == s, ]
         t(sapply(set$arms, function(a) tabulate(rs$AVAL[rs$ARM == a], nbins = J)))
       })
-      res <- tryCatch(overall(tables, spec$test, J), error = function(e) stop(name, " ", visit, " ", set$column, ": ", conditionMessage(e)))
+      res <- tryCatch(overall(tables, spec$test, J, identical(spec$scores, "modified-ridit")), error = function(e) stop(name, " ", visit, " ", set$column, ": ", conditionMessage(e)))
       add(paste0(vk, "-n"), set$column, "pValue", res$p)
       add(paste0(vk, "-n"), set$column, "statistic", res$statistic)
       add(paste0(vk, "-n"), set$column, "df", res$df)
@@ -110,10 +111,10 @@ write_oracle <- function(file, adsl, rec, variants) {
   records <- unlist(lapply(names(variants), function(n) variant_records(n, adsl, rec, variants[[n]])))
   settings <- sapply(names(variants), function(n) {
     v <- variants[[n]]
-    sprintf('"%s": {"imputation": %s, "strata": [%s], "test": "%s", "comparison": "%s"}', n,
+    sprintf('"%s": {"imputation": %s, "strata": [%s], "test": "%s", "comparison": "%s", "scores": "%s"}', n,
             if (length(v$imputation) == 0) "null" else sprintf('"%s"', v$imputation),
             paste(sprintf('"%s"', v$strata), collapse = ", "), c(cor = "correlation", rmeans = "row-mean-scores", general = "general-association")[v$test],
-            v$comparison)
+            v$comparison, if (is.null(v$scores)) "table" else v$scores)
   })
   writeLines(c("{", sprintf('"versions": {"R": "%s", "vcdExtra": "%s"},', R.version.string, as.character(packageVersion("vcdExtra"))),
                '"generator": "tests/OutputForge.Tests/Oracles/generate_categorical_by_visit_oracles.R",',
@@ -125,15 +126,16 @@ args <- commandArgs(trailingOnly = TRUE)
 data <- args[1]
 adsl <- read.csv(file.path(data, "adsl.csv"), stringsAsFactors = FALSE, na.strings = "")
 adeff <- read.csv(file.path(data, "adeff.csv"), stringsAsFactors = FALSE, na.strings = "")
-demo <- function(imputation, strata, test, comparison) list(population = "ITTFL", parameter = "SGICITCH",
+demo <- function(imputation, strata, test, comparison, scores = "table") list(population = "ITTFL", parameter = "SGICITCH",
   visits = c("Week 4", "Week 8", "Week 12"), categories = 7, arms = c("Placebo", "QF-217 10 mg", "QF-217 30 mg"),
-  imputation = imputation, strata = strata, test = test, comparison = comparison)
+  imputation = imputation, strata = strata, test = test, comparison = comparison, scores = scores)
 write_oracle("tests/OutputForge.Tests/Oracles/categorical_by_visit_oracles.json", adsl, adeff, list(
   "14.2.4.1" = demo(character(0), c("STRAT1R", "STRAT2R"), "rmeans", "each-vs-control"),
   "14.2.4.2" = demo("LOCF", c("STRAT1R", "STRAT2R"), "rmeans", "each-vs-control"),
   "observed-unstratified-all-general" = demo(character(0), character(0), "general", "all-arms"),
   "observed-region-all-correlation" = demo(character(0), "STRAT1R", "cor", "all-arms"),
-  "locf-severity-each-general" = demo("LOCF", "STRAT2R", "general", "each-vs-control")))
+  "locf-severity-each-general" = demo("LOCF", "STRAT2R", "general", "each-vs-control"),
+  "observed-strata-each-ridit" = demo(character(0), c("STRAT1R", "STRAT2R"), "rmeans", "each-vs-control", "modified-ridit")))
 
 pilot <- "../shared/data/cdiscpilot01/csv"
 if (file.exists(file.path(pilot, "adqscibc.csv"))) {
@@ -141,12 +143,13 @@ if (file.exists(file.path(pilot, "adqscibc.csv"))) {
   cibic <- read.csv(file.path(pilot, "adqscibc.csv"), stringsAsFactors = FALSE, na.strings = "")
   cibic$SITEGR1 <- as.character(cibic$SITEGR1)
   padsl$SITEGR1 <- as.character(padsl$SITEGR1)
-  pilot_spec <- function(imputation, strata, test, comparison) list(population = "EFFFL", parameter = "CIBICVAL",
+  pilot_spec <- function(imputation, strata, test, comparison, scores = "table") list(population = "EFFFL", parameter = "CIBICVAL",
     visits = c("Week 8", "Week 16", "Week 24"), categories = 7, arms = c("Placebo", "Xanomeline Low Dose", "Xanomeline High Dose"),
-    imputation = imputation, strata = strata, test = test, comparison = comparison)
+    imputation = imputation, strata = strata, test = test, comparison = comparison, scores = scores)
   write_oracle("tests/OutputForge.Tests/Oracles/pilot_categorical_by_visit_oracles.json", padsl, cibic, list(
     "14-3.02" = pilot_spec("LOCF", "SITEGR1", "rmeans", "each-vs-control"),
     "observed-unstratified-all-general" = pilot_spec(character(0), character(0), "general", "all-arms"),
     "observed-site-all-correlation" = pilot_spec(character(0), "SITEGR1", "cor", "all-arms"),
-    "locf-site-each-general" = pilot_spec("LOCF", "SITEGR1", "general", "each-vs-control")))
+    "locf-site-each-general" = pilot_spec("LOCF", "SITEGR1", "general", "each-vs-control"),
+    "locf-site-all-ridit" = pilot_spec("LOCF", "SITEGR1", "rmeans", "all-arms", "modified-ridit")))
 }

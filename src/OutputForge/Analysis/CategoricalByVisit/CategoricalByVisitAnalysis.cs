@@ -187,9 +187,16 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         var arms = allArms ? selection.Arms.Count : 2;
         var df = VisitComparison.NominalDf(settings.Test, arms, categories.Count);
         var name = VisitComparison.MethodName(settings.Test);
-        var scoreText = settings.Scores == "equal-spacing"
-            ? $"equally spaced column scores 1 to {categories.Count} in the order listed"
-            : "table scores (column scores " + string.Join(", ", scores.Select(s => s.ToString("0.###", CultureInfo.InvariantCulture))) + " for the categories in the order listed)";
+        var scoreText = settings.Scores switch
+        {
+            "equal-spacing" => $"equally spaced column scores 1 to {categories.Count} in the order listed",
+            "modified-ridit" => "modified ridit column scores (standardized midranks) computed within each stratum",
+            _ => "table scores (column scores " + string.Join(", ", scores.Select(s => s.ToString("0.###", CultureInfo.InvariantCulture))) + " for the categories in the order listed)",
+        };
+        if (settings.Test == "general-association")
+        {
+            scoreText = "the categories taken as nominal (no scores)";
+        }
         var rowScores = settings.Test == "correlation" ? $"; row scores 1 to {arms} for the arms in column order" : string.Empty;
         var compared = allArms
             ? $"one test over all {selection.Arms.Count} arms"

@@ -68,9 +68,16 @@ internal sealed class ResponseCategories
         return -1;
     }
 
-    /// <summary>Column scores for the spec's choice: "table" (each category's score or numeric value) or "equal-spacing" (1, 2, ...).</summary>
+    /// <summary>
+    /// Column scores for the spec's choice: "table" (each category's score or numeric value) or "equal-spacing"
+    /// (1, 2, ...); empty for "modified-ridit", whose scores come from each stratum's table.
+    /// </summary>
     public double[] Scores(string choice, SpecSource source)
     {
+        if (choice == "modified-ridit")
+        {
+            return [];
+        }
         if (choice == "equal-spacing")
         {
             return Enumerable.Range(1, Items.Count).Select(i => (double)i).ToArray();

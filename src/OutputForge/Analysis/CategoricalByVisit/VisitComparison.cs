@@ -53,7 +53,10 @@ internal sealed record VisitComparison(
         else
         {
             var rowScores = Enumerable.Range(1, arms.Count).Select(i => (double)i).ToArray();
-            var all = GeneralizedCochranMantelHaenszel.Compute(tables, rowScores, columnScores);
+            // No fixed scores means modified ridit scores, computed within each stratum.
+            var all = columnScores.Count == 0
+                ? GeneralizedCochranMantelHaenszel.Compute(tables, rowScores, ModifiedRiditScores.Of)
+                : GeneralizedCochranMantelHaenszel.Compute(tables, rowScores, columnScores);
             result = test switch
             {
                 "correlation" => all.NonzeroCorrelation,
