@@ -88,6 +88,17 @@ public sealed class CategoricalByVisitAnalysisTests
         Assert.Equal(1, Value(result, "week-4-n", "p-value-active", "df"));
     }
 
+    [Fact]
+    public void A_subject_without_a_stratum_stays_in_the_counts_but_not_in_the_test()
+    {
+        using var study = new MiniStudy(adsl: Adsl.Replace("T1-008,Active,1,Y,C", "T1-008,Active,1,Y,", StringComparison.Ordinal), adeff: Adeff,
+            table: Table($$"""{ "categories": {{Categories}}, "strata": ["REG"] }"""));
+        var result = Analyze(study);
+        Assert.Equal(4, Value(result, "week-4-n", "active", "n"));
+        Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", result.Warnings);
+        Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", result.MethodNotes);
+    }
+
     /// <summary>
     /// Unstratified 2 x J row mean scores with table scores equals (n - 1) r^2, r the Pearson correlation of
     /// arm (0/1) and score (Mantel 1963, the statistic of Landis, Heyman and Koch 1978 for one stratum).

@@ -1,4 +1,3 @@
-using System.Globalization;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;
@@ -82,7 +81,7 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
                 {
                     var comparison = VisitComparison.Compute(key, arms, units, categories.Count, scores, settings.Test);
                     comparisons.Add(comparison);
-                    ReportIssues(visit, comparison, settings, testIssues);
+                    VisitTableNotes.ReportIssues(visit, comparison, settings, testIssues);
                 }
                 comparisonsByVisit.Add((visit, comparisons));
             }
@@ -111,17 +110,17 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         {
             $"N = number of subjects in the {selection.Label}; n = subjects with a response at the visit. Percentages are of n." +
                 (settings.MissingRow ? " Missing: subjects of the population without a response at the visit (not in the percentages)." : string.Empty),
-            RecordNote(endpoint, settings, imputedByVisit),
+            VisitTableNotes.Records(endpoint, settings, imputedByVisit),
         };
         if (testing)
         {
-            notes.Add("[a] " + TestNote(settings, categories, scores, strata, selection, allArms, comparisonsByVisit));
+            notes.Add("[a] " + VisitTableNotes.Test(settings, categories, scores, strata, selection, allArms, comparisonsByVisit));
             notes.AddRange(testIssues);
             warnings.AddRange(testIssues);
         }
         warnings.AddRange(comparisonsByVisit.SelectMany(v => v.Comparisons
             .Where(c => !c.Test.IsEstimable)
-            .Select(c => $"{(c.Label == "all arms" ? v.Visit : $"{v.Visit}, {c.Label}")}: NE (not estimable) p-value: {c.Test.NotEstimableReason}.")));
+            .Select(c => $"{c.Where(v.Visit)}: NE (not estimable) p-value: {c.Test.NotEstimableReason}.")));
         return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
             new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor);
     }
@@ -144,75 +143,5 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
     {
         var cell = CellFactory.PValueOf(column, comparison.Test);
         return cell with { Values = [.. cell.Values, StatisticValue.Count(StrataCount, comparison.StrataUsed) with { Method = comparison.Test.Method }] };
-    }
-
-    /// <summary>Strata left out, subjects without a stratum and a singular covariance matrix, for the footnotes and the log.</summary>
-    private static void ReportIssues(string visit, VisitComparison comparison, CategoricalByVisitSettings settings, List<string> issues)
-    {
-        var where = comparison.Label == "all arms" ? visit : $"{visit}, {comparison.Label}";
-        if (comparison.StrataLeftOut.Count > 0)
-        {
-            issues.Add($"{where}: left out of the test for having fewer than 2 subjects with a response: " +
-                string.Join("; ", comparison.StrataLeftOut.Select(s => $"{s.Stratum.Text} ({s.Subjects} subject)")) + ".");
-        }
-        if (comparison.WithoutStratum > 0)
-        {
-            issues.Add($"{where}: {comparison.WithoutStratum} subject{(comparison.WithoutStratum == 1 ? " has" : "s have")} no value of {string.Join(", ", settings.Strata)} and {(comparison.WithoutStratum == 1 ? "is" : "are")} left out of the test.");
-        }
-        issues.AddRange(comparison.Test.Notes.Select(note => $"{where}: {note.TrimEnd('.')}; the covariance matrix of the statistic is singular."));
-    }
-
-    private static string RecordNote(EndpointSpec endpoint, CategoricalByVisitSettings settings, List<string> imputedByVisit)
-    {
-        var selection = new List<string>();
-        if (endpoint.Parameter is not null)
-        {
-            selection.Add($"PARAMCD = '{endpoint.Parameter}'");
-        }
-        if (endpoint.Where is not null)
-        {
-            selection.Add(endpoint.Where);
-        }
-        var records = selection.Count > 0 ? $"Records with {string.Join(" and ", selection)}; " : string.Empty;
-        return settings.Imputation is null
-            ? records + "observed responses only (DTYPE empty), no imputation of missing values."
-            : records + $"observed responses (DTYPE empty) and, for visits without one, responses imputed by {settings.Imputation} (DTYPE = '{settings.Imputation}'); " +
-              $"imputed responses counted: {string.Join("; ", imputedByVisit)}.";
-    }
-
-    private static string TestNote(CategoricalByVisitSettings settings, ResponseCategories categories, double[] scores,
-        IReadOnlyList<RecordVariable> strata, PopulationSelection selection, bool allArms,
-        IReadOnlyList<(string Visit, IReadOnlyList<VisitComparison> Comparisons)> byVisit)
-    {
-        var arms = allArms ? selection.Arms.Count : 2;
-        var df = VisitComparison.NominalDf(settings.Test, arms, categories.Count);
-        var name = VisitComparison.MethodName(settings.Test);
-        var scoreText = settings.Scores switch
-        {
-            "equal-spacing" => $"equally spaced column scores 1 to {categories.Count} in the order listed",
-            "modified-ridit" => "modified ridit column scores (standardized midranks) computed within each stratum",
-            _ => "table scores (column scores " + string.Join(", ", scores.Select(s => s.ToString("0.###", CultureInfo.InvariantCulture))) + " for the categories in the order listed)",
-        };
-        if (settings.Test == "general-association")
-        {
-            scoreText = "the categories taken as nominal (no scores)";
-        }
-        var rowScores = settings.Test == "correlation" ? $"; row scores 1 to {arms} for the arms in column order" : string.Empty;
-        var compared = allArms
-            ? $"one test over all {selection.Arms.Count} arms"
-            : $"each active arm with {selection.Control.Label}, those two arms only";
-        string strataText;
-        if (strata.Count == 0)
-        {
-            strataText = "unstratified";
-        }
-        else
-        {
-            var counts = byVisit.SelectMany(v => v.Comparisons.Select(c => c.StrataUsed)).ToList();
-            var range = counts.Count == 0 ? string.Empty : counts.Min() == counts.Max() ? $"; {counts.Min()} strata" : $"; {counts.Min()} to {counts.Max()} strata by visit and comparison";
-            strataText = $"stratified by {string.Join(" x ", strata.Select(s => s.Name))}{(strata.Count > 1 ? " (cross-classified)" : string.Empty)}{range}";
-        }
-        return $"{name} (chi-square with {df} degree{(df == 1 ? "" : "s")} of freedom), {scoreText}{rowScores}; {strataText}; at each visit separately, {compared}. " +
-            "Strata with fewer than 2 subjects with a response are left out of a test.";
     }
 }
