@@ -34,6 +34,23 @@ public static class GeneralizedCochranMantelHaenszel
         {
             throw new ArgumentException("At least one stratum is needed.", nameof(strata));
         }
+        var a = Scores(columnScores, strata[0].GetLength(1), nameof(columnScores));
+        return Compute(strata, rowScores, _ => a);
+    }
+
+    /// <summary>
+    /// The same statistics with column scores computed from each stratum's own table, e.g.
+    /// <see cref="ModifiedRiditScores.Of"/>: the contrast of stratum h uses a_h (the SAS/STAT PROC FREQ
+    /// documentation computes rank-based scores within each stratum for these statistics).
+    /// </summary>
+    public static GeneralizedCmhResult Compute(IReadOnlyList<int[,]> strata, IReadOnlyList<double>? rowScores, Func<int[,], IReadOnlyList<double>> columnScoresOfStratum)
+    {
+        ArgumentNullException.ThrowIfNull(columnScoresOfStratum);
+        ArgumentNullException.ThrowIfNull(strata);
+        if (strata.Count == 0)
+        {
+            throw new ArgumentException("At least one stratum is needed.", nameof(strata));
+        }
         int rows = strata[0].GetLength(0);
         int columns = strata[0].GetLength(1);
         for (int h = 0; h < strata.Count; h++)
@@ -49,13 +66,10 @@ public static class GeneralizedCochranMantelHaenszel
             throw new ArgumentException($"Each stratum must be at least 2 x 2; these are {rows} x {columns}.", nameof(strata));
         }
         var c = Scores(rowScores, rows, nameof(rowScores));
-        var a = Scores(columnScores, columns, nameof(columnScores));
 
         var build = Matrix<double>.Build;
         var general = build.DenseIdentity(rows - 1, rows).KroneckerProduct(build.DenseIdentity(columns - 1, columns));
-        var rowMeans = build.DenseIdentity(rows - 1, rows).KroneckerProduct(build.DenseOfRowArrays(a));
-        var correlation = build.DenseOfRowArrays(c).KroneckerProduct(build.DenseOfRowArrays(a));
-        var accumulators = new[] { new Accumulator(correlation), new Accumulator(rowMeans), new Accumulator(general) };
+        var accumulators = new[] { new Accumulator(1), new Accumulator(rows - 1), new Accumulator(general.RowCount) };
 
         var notes = new List<string>();
         int contributing = 0;
@@ -75,10 +89,12 @@ public static class GeneralizedCochranMantelHaenszel
             var rowCovariance = build.DenseOfDiagonalVector(pRows) - pRows.OuterProduct(pRows);
             var columnCovariance = build.DenseOfDiagonalVector(pColumns) - pColumns.OuterProduct(pColumns);
             var covariance = rowCovariance.KroneckerProduct(columnCovariance) * (n * n / (n - 1));
-            foreach (var accumulator in accumulators)
-            {
-                accumulator.Add(observed - expected, covariance);
-            }
+            var a = Scores(columnScoresOfStratum(table), columns, nameof(columnScoresOfStratum));
+            var rowMeans = build.DenseIdentity(rows - 1, rows).KroneckerProduct(build.DenseOfRowArrays(a));
+            var correlation = build.DenseOfRowArrays(c).KroneckerProduct(build.DenseOfRowArrays(a));
+            accumulators[0].Add(correlation, observed - expected, covariance);
+            accumulators[1].Add(rowMeans, observed - expected, covariance);
+            accumulators[2].Add(general, observed - expected, covariance);
             contributing++;
         }
         if (contributing == 0)
@@ -108,13 +124,13 @@ public static class GeneralizedCochranMantelHaenszel
     private static Vector<double> Kronecker(Vector<double> left, Vector<double> right)
         => Vector<double>.Build.Dense(left.Count * right.Count, k => left[k / right.Count] * right[k % right.Count]);
 
-    /// <summary>Sums G = sum B (n_h - m_h) and V_G = sum B V_h B' for one choice of B.</summary>
-    private sealed class Accumulator(Matrix<double> contrast)
+    /// <summary>Sums G = sum B_h (n_h - m_h) and V_G = sum B_h V_h B_h' for one kind of contrast B_h.</summary>
+    private sealed class Accumulator(int dimension)
     {
-        private Vector<double> _g = Vector<double>.Build.Dense(contrast.RowCount);
-        private Matrix<double> _v = Matrix<double>.Build.Dense(contrast.RowCount, contrast.RowCount);
+        private Vector<double> _g = Vector<double>.Build.Dense(dimension);
+        private Matrix<double> _v = Matrix<double>.Build.Dense(dimension, dimension);
 
-        public void Add(Vector<double> deviation, Matrix<double> covariance)
+        public void Add(Matrix<double> contrast, Vector<double> deviation, Matrix<double> covariance)
         {
             _g += contrast * deviation;
             _v += contrast * covariance * contrast.Transpose();

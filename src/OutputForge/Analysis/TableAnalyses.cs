@@ -16,6 +16,7 @@ public static class TableAnalyses
         new Continuous.ContinuousAnalysis(),
         new TimeToEvent.TimeToEventAnalysis(),
         new Subgroups.SubgroupAnalysis(),
+        new CategoricalByVisit.CategoricalByVisitAnalysis(),
     }.ToDictionary(a => a.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;

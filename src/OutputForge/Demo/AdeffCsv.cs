@@ -16,7 +16,7 @@ internal static class AdeffCsv
     public static IReadOnlyList<string> Columns { get; } =
     [
         "STUDYID", "USUBJID", "TRT01P", "TRT01PN", "PARAMCD", "PARAM", "PARAMN", "AVISIT", "AVISITN",
-        "ADT", "ADY", "AVAL", "AVALC", "BASE", "CHG", "PCHG", "ABLFL", "ANL01FL", "CRIT1", "CRIT1FL",
+        "ADT", "ADY", "AVAL", "AVALC", "BASE", "CHG", "PCHG", "ABLFL", "ANL01FL", "CRIT1", "CRIT1FL", "DTYPE",
     ];
 
     /// <summary>Writes ADEFF; <paramref name="loadCopies"/> extra copies of each subject's ITCH rows, under the
@@ -36,9 +36,11 @@ internal static class AdeffCsv
                 Start(csv, s, ResponderParamCode, ResponderParam, 2, a);
                 csv.Field(responder ? 1 : 0).Field(DemoValueFormat.Flag(responder))
                     .Field((string?)null).Field((string?)null).Field((string?)null).Field((string?)null)
-                    .Field("Y").Field(ResponderCriterion).Field(DemoValueFormat.Flag(responder));
+                    .Field("Y").Field(ResponderCriterion).Field(DemoValueFormat.Flag(responder)).Field((string?)null);
                 csv.EndRow();
             }
+
+            ImpressionOfChangeCsv.Write(csv, s);
 
             for (var copy = 1; copy <= loadCopies; copy++)
             {
@@ -59,7 +61,7 @@ internal static class AdeffCsv
             else
                 csv.Field(DemoValueFormat.Tenths(a.ValueTenths - baseline))
                     .Field(DemoValueFormat.PercentChange(a.ValueTenths - baseline, baseline)).Field((string?)null);
-            csv.Field(a.IsAnalysisRecord ? "Y" : null).Field((string?)null).Field((string?)null);
+            csv.Field(a.IsAnalysisRecord ? "Y" : null).Field((string?)null).Field((string?)null).Field((string?)null);
             csv.EndRow();
         }
     }

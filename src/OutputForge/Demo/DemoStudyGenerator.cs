@@ -64,6 +64,7 @@ public static class DemoStudyGenerator
             var visitDays = DispositionSimulator.Simulate(subject, random);
             ItchTrajectorySimulator.Simulate(subject, visitDays, random);
             AdverseEventSimulator.Simulate(subject, random);
+            subject.ImpressionsOfChange = ImpressionOfChangeSimulator.Simulate(subject, options.Seed, (ulong)i);
         }
 
         subjects.Sort((a, b) => string.CompareOrdinal(a.UniqueSubjectId, b.UniqueSubjectId));

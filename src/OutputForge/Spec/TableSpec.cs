@@ -30,6 +30,8 @@ public sealed class TableSpec
 
     public SubgroupSettings? Subgroups { get; init; }
 
+    public CategoricalByVisitSettings? CategoricalByVisit { get; init; }
+
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;
 }

@@ -16,7 +16,7 @@ public sealed class AdeffContentTests : IClassFixture<DemoStudyFiles>
     {
         Assert.Equal(
             ["STUDYID", "USUBJID", "TRT01P", "TRT01PN", "PARAMCD", "PARAM", "PARAMN", "AVISIT", "AVISITN", "ADT", "ADY",
-             "AVAL", "AVALC", "BASE", "CHG", "PCHG", "ABLFL", "ANL01FL", "CRIT1", "CRIT1FL"],
+             "AVAL", "AVALC", "BASE", "CHG", "PCHG", "ABLFL", "ANL01FL", "CRIT1", "CRIT1FL", "DTYPE"],
             Adeff.Header);
     }
 
@@ -24,9 +24,10 @@ public sealed class AdeffContentTests : IClassFixture<DemoStudyFiles>
     public void Parameters_and_visits_are_the_documented_ones()
     {
         var parameters = Adeff.Rows.Select(r => (Adeff.Get(r, "PARAMCD"), Adeff.Get(r, "PARAM"), Adeff.Get(r, "PARAMN"))).Distinct().ToList();
-        Assert.Equal(2, parameters.Count);
+        Assert.Equal(3, parameters.Count);
         Assert.Contains(("ITCH", "Weekly Mean Itch Score (0-10)", "1"), parameters);
         Assert.Contains(("ITCHR50", "Itch Responder (>=50% Reduction from Baseline)", "2"), parameters);
+        Assert.Contains(("SGICITCH", "Subject Global Impression of Change in Itch (1-7)", "3"), parameters);
 
         var itchVisits = Itch.Select(r => (Adeff.Get(r, "AVISIT"), Adeff.Get(r, "AVISITN"))).Distinct().OrderBy(v => int.Parse(v.Item2, CultureInfo.InvariantCulture));
         Assert.Equal([("Baseline", "0"), ("Week 2", "2"), ("Week 4", "4"), ("Week 8", "8"), ("Week 12", "12")], itchVisits);

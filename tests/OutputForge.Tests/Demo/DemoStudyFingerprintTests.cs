@@ -17,7 +17,7 @@ public sealed class DemoStudyFingerprintTests : IClassFixture<DemoStudyFiles>
 
     [Theory]
     [InlineData("adsl.csv", "49c3886fec9417d35613b00bdaf7a01eca409f77270d7114bb8f8637d6a61d4a")]
-    [InlineData("adeff.csv", "029a49ee9da90a5c1887dcf1085c909f01f22ea34f69f2aaed9e52549554565a")]
+    [InlineData("adeff.csv", "dfffe17eb40402efa080bae2271d1bec63f16f0ff1838ec8a68fbfbd48e9a00c")]
     [InlineData("adae.csv", "4e504bcce87c54c6a99843aa40fd05e0afb51b611036314a701b160214c3f4b6")]
     [InlineData("adtte.csv", "26346fd18446cf0c1450b571e5ef88284adaa5f7d50e241d1ec42e09669e5aed")]
     public void Default_study_files_have_the_recorded_digest(string file, string sha256)

@@ -13,6 +13,7 @@ public static class ShellStandIns
         new ContinuousStandIn(),
         new TimeToEventStandIn(),
         new SubgroupStandIn(),
+        new CategoricalByVisitStandIn(),
     }.ToDictionary(s => s.Kind, StringComparer.Ordinal);
 
     public static IReadOnlyCollection<string> Kinds => ByKind.Keys;
