@@ -55,7 +55,7 @@ public sealed class DemographicVariableSpec
     /// <summary>Whether to add a "Missing" row (categorical) or to show n of missing values (continuous).</summary>
     public bool Missing { get; init; }
 
-    /// <summary>"none", "anova" (continuous), "chi-square" or "fisher" (categorical).</summary>
+    /// <summary>"none", "anova" (continuous), "chi-square", "likelihood-ratio" or "fisher" (categorical).</summary>
     public string Test { get; init; } = "none";
 }
 

@@ -44,6 +44,6 @@ public sealed class DispositionBlockSpec
     /// <summary>Whether to add a row counting subjects with no value.</summary>
     public bool Missing { get; init; }
 
-    /// <summary>"none", "chi-square" or "fisher": test of the block's levels x arms table.</summary>
+    /// <summary>"none", "chi-square", "likelihood-ratio" or "fisher": test of the block's levels x arms table.</summary>
     public string Test { get; init; } = "none";
 }

@@ -66,7 +66,7 @@ public sealed class StatisticsSpec
     public string ProportionInterval { get; init; } = "wilson";
     public string DifferenceInterval { get; init; } = "newcombe";
 
-    /// <summary>"auto" (chi-square, or Fisher's exact test when an expected count is below 5), "chi-square" or "fisher".</summary>
+    /// <summary>"auto" (chi-square, or Fisher's exact test when an expected count is below 5), "chi-square", "yates", "likelihood-ratio" or "fisher".</summary>
     public string Test { get; init; } = "auto";
 
     /// <summary>Decimals of percentages.</summary>

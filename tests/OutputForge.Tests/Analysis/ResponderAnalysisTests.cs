@@ -65,6 +65,26 @@ public sealed class ResponderAnalysisTests
         Assert.Contains(observed.MethodNotes, n => n.Contains("are excluded"));
     }
 
+    [Theory]
+    // Table [[2, 0], [1, 1]] (active, placebo). Yates: n (|ad - bc| - n/2)^2 / (r1 r2 c1 c2) = 4 (2 - 2)^2 / 12 = 0, p = 1
+    // (hand computation; R 4.2.2 chisq.test(correct = TRUE) gives p = 1). Likelihood ratio: G^2 = 2 sum O ln(O/E) with
+    // E = [[1.5, 0.5], [1.5, 0.5]] = 1.72609243471069 (hand computation), p = 0.188910700005692 (R 4.2.2 pchisq).
+    [InlineData("yates", "Pearson's chi-square test with Yates' continuity correction", 0.0, 1.0)]
+    [InlineData("likelihood-ratio", "Likelihood-ratio chi-square test", 1.72609243471069, 0.188910700005692)]
+    public void The_spec_can_name_the_yates_or_likelihood_ratio_test(string choice, string method, double statistic, double p)
+    {
+        using var study = new MiniStudy(table: MiniStudy.TableJson.Replace("\"kind\": \"responders\",",
+            $"\"kind\": \"responders\", \"statistics\": {{ \"test\": \"{choice}\" }},"));
+        var result = Analyze(study);
+        var cell = result.Rows.Single(r => r.Key == "p-value").Cells.Single(c => c.Column == "active");
+        var pValue = cell.Values.Single(v => v.Statistic == StatisticNames.PValue);
+        Assert.Equal(method, pValue.Method);
+        Assert.Equal(p, pValue.Value!.Value, 12);
+        Assert.Equal(statistic, cell.Values.Single(v => v.Statistic == StatisticNames.TestStatistic).Value!.Value, 12);
+        Assert.Contains(result.MethodNotes, n => n.Contains(choice == "yates" ? "Yates' continuity correction, unstratified" : "likelihood-ratio chi-square test, unstratified"));
+        Assert.Contains(result.Warnings, w => w.Contains("chi-square approximation may be poor"));
+    }
+
     [Fact]
     public void Forcing_chi_square_on_small_counts_warns()
     {

@@ -199,7 +199,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
     {
         if (choice != "auto")
         {
-            return $"Two-sided p-value from {(choice == "fisher" ? "Fisher's exact test" : "Pearson's chi-square test")}, unstratified.";
+            return $"Two-sided p-value from {NamedTest(choice)}, unstratified.";
         }
         var used = comparisons.Select(c => c.Test.Method).Distinct().ToList();
         var detail = used.Count == 1
@@ -208,9 +208,18 @@ public sealed class ResponderAnalysis : ITableAnalysis
         return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
     }
 
+    private static string NamedTest(string choice) => choice switch
+    {
+        "fisher" => "Fisher's exact test",
+        "yates" => "Pearson's chi-square test with Yates' continuity correction",
+        "likelihood-ratio" => "the likelihood-ratio chi-square test",
+        _ => "Pearson's chi-square test",
+    };
+
     private static IEnumerable<string> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, string choice, TreatmentArm control)
     {
-        if (choice != "chi-square")
+        // Every large-sample test the spec forces gets Cochran's caution; "auto" switches to Fisher instead.
+        if (choice is "auto" or "fisher")
         {
             yield break;
         }

@@ -27,13 +27,14 @@ public sealed record ResponderComparison(
             { control.Responders, control.NonResponders },
         };
         var expected = ContingencyTable.Diagnose(table);
-        var useFisher = testChoice switch
+        var test = testChoice switch
         {
-            "fisher" => true,
-            "chi-square" => false,
-            _ => expected.CellsBelowFive > 0,
+            "fisher" => FisherExactTest.Compute(table),
+            "chi-square" => PearsonChiSquareTest.Compute(table),
+            "yates" => YatesChiSquareTest.Compute(table),
+            "likelihood-ratio" => LikelihoodRatioChiSquareTest.Compute(table),
+            _ => expected.CellsBelowFive > 0 ? FisherExactTest.Compute(table) : PearsonChiSquareTest.Compute(table),
         };
-        var test = useFisher ? FisherExactTest.Compute(table) : PearsonChiSquareTest.Compute(table);
         return new ResponderComparison(arm, difference, test, expected);
     }
 }

@@ -4,8 +4,8 @@ using OutputForge.Stats;
 namespace OutputForge.Analysis.Summaries;
 
 /// <summary>
-/// The test of a levels x arms table that a spec names ("chi-square" or "fisher"), with its
-/// warnings: the test's own notes (empty rows or columns left out) and, for chi-square, Cochran's
+/// The test of a levels x arms table that a spec names ("chi-square", "likelihood-ratio" or "fisher"), with its
+/// warnings: the test's own notes (empty rows or columns left out) and, for the chi-square tests, Cochran's
 /// (1954) caution when expected counts fall below 5.
 /// </summary>
 public static class AssociationTest
@@ -20,7 +20,7 @@ public static class AssociationTest
         }
         else
         {
-            test = PearsonChiSquareTest.Compute(table);
+            test = choice == "likelihood-ratio" ? LikelihoodRatioChiSquareTest.Compute(table) : PearsonChiSquareTest.Compute(table);
             var expected = ContingencyTable.Diagnose(WithoutEmptyLines(table));
             if (test.IsEstimable && expected.CellsBelowFive > 0)
             {
