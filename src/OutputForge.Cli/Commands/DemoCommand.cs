@@ -13,11 +13,11 @@ public static class DemoCommand
     public static Command Create(TextWriter error)
     {
         var output = CommonOptions.Output("Folder to write into: data/ (the invented study's CSV), specs/ (its specs) and output/ (the tables).");
-        var subjects = new Option<int>("--subjects")
+        var subjects = new Option<int?>("--subjects")
         {
-            Description = "Number of randomized subjects of the invented study.",
-            DefaultValueFactory = _ => new DemoStudyOptions().Subjects,
+            Description = $"Number of randomized subjects of the invented study (default {new DemoStudyOptions().Subjects}, or {PooledStudyOptions.TargetSubjects} with --size pooled).",
         };
+        var size = DemoSizeOption.Create();
         var loadCopies = new Option<int>("--load-copies")
         {
             Description = "Extra copies of the itch-score records in adeff.csv (parameters ITCHC01, ...) to enlarge the data for speed measurements; no demo table reads them.",
@@ -29,7 +29,7 @@ public static class DemoCommand
         var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, loadCopies, formats, quiet, verbose, timestamp, combined,
+            output, subjects, size, loadCopies, formats, quiet, verbose, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -41,7 +41,7 @@ public static class DemoCommand
             var root = parse.GetValue(output)!;
             var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
             var dataFolder = Path.Combine(root, "data");
-            var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects), LoadCopies: parse.GetValue(loadCopies)));
+            var studyFile = DemoPackageWriter.Write(root, DemoSizeOption.Options(parse.GetValue(size), parse.GetValue(subjects), parse.GetValue(loadCopies)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
             PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
             {
