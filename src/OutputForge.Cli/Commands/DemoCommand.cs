@@ -18,6 +18,10 @@ public static class DemoCommand
             Description = $"Number of randomized subjects of the invented study (default {new DemoStudyOptions().Subjects}, or {PooledStudyOptions.TargetSubjects} with --size pooled).",
         };
         var size = DemoSizeOption.Create();
+        var noTables = new Option<bool>("--no-tables")
+        {
+            Description = "Write only the data and specs, without producing the tables (e.g. to time `run` on them separately).",
+        };
         var loadCopies = new Option<int>("--load-copies")
         {
             Description = "Extra copies of the itch-score records in adeff.csv (parameters ITCHC01, ...) to enlarge the data for speed measurements; no demo table reads them.",
@@ -29,7 +33,7 @@ public static class DemoCommand
         var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, size, loadCopies, formats, quiet, verbose, timestamp, combined,
+            output, subjects, size, noTables, loadCopies, formats, quiet, verbose, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -43,6 +47,10 @@ public static class DemoCommand
             var dataFolder = Path.Combine(root, "data");
             var studyFile = DemoPackageWriter.Write(root, DemoSizeOption.Options(parse.GetValue(size), parse.GetValue(subjects), parse.GetValue(loadCopies)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
+            if (parse.GetValue(noTables))
+            {
+                return ExitCodes.Success;
+            }
             PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
             {
                 RunTime = runTime,
