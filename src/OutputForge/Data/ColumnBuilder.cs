@@ -13,8 +13,11 @@ namespace OutputForge.Data;
 internal sealed class ColumnBuilder
 {
     private readonly string _name;
-    private readonly double[] _numbers;
-    private readonly sbyte[] _decimals;
+    private readonly int _capacity;
+    // Allocated on the first value that needs them: a column that turns out to be text from its first value
+    // never holds numbers, and one whose values are all canonical never holds strings.
+    private double[]? _numbers;
+    private sbyte[]? _decimals;
     private string?[]? _text;
     private bool _numeric = true;
     private bool _dates = true;
@@ -27,15 +30,30 @@ internal sealed class ColumnBuilder
     public ColumnBuilder(string name, int capacity)
     {
         _name = name;
-        _numbers = new double[capacity];
-        _decimals = new sbyte[capacity];
+        _capacity = capacity;
     }
+
+    /// <summary>Text only: the column is text and no value was stored as a number, so numbers and markers are not kept.</summary>
+    private bool TextOnly => !_numeric && !_dates && _decimals is null;
 
     public void AddMissing()
     {
-        _numbers[_count] = double.NaN;
-        _decimals[_count] = DataColumn.MissingValue;
+        if (_decimals is not null)
+        {
+            _numbers![_count] = double.NaN;
+            _decimals[_count] = DataColumn.MissingValue;
+        }
         _count++;
+    }
+
+    /// <summary>Numbers and per-row markers, the rows before the first value marked missing.</summary>
+    private void EnsureNumbers()
+    {
+        if (_decimals is not null) return;
+        _numbers = new double[_capacity];
+        _decimals = new sbyte[_capacity];
+        _numbers.AsSpan(0, _count).Fill(double.NaN);
+        _decimals.AsSpan(0, _count).Fill(DataColumn.MissingValue);
     }
 
     /// <summary>Stores a value given in canonical form without making a string; false when the general path must read it.</summary>
@@ -61,9 +79,13 @@ internal sealed class ColumnBuilder
     public void AddText(string value, int line)
     {
         _any = true;
-        _text ??= new string?[_numbers.Length];
+        _text ??= new string?[_capacity];
         _text[_count] = value;
-        _decimals[_count] = DataColumn.WrittenValue;
+        if (TextOnly)
+        {
+            _count++;
+            return;
+        }
         var number = double.NaN;
         if (_numeric)
         {
@@ -88,15 +110,21 @@ internal sealed class ColumnBuilder
                 _dates = false;
             }
         }
-        _numbers[_count] = number;
+        if (!TextOnly)
+        {
+            EnsureNumbers();
+            _numbers![_count] = number;
+            _decimals![_count] = DataColumn.WrittenValue;
+        }
         _count++;
     }
 
     private void Store(double number, sbyte decimals)
     {
         _any = true;
-        _numbers[_count] = number;
-        _decimals[_count] = decimals;
+        EnsureNumbers();
+        _numbers![_count] = number;
+        _decimals![_count] = decimals;
         _count++;
     }
 
@@ -108,19 +136,19 @@ internal sealed class ColumnBuilder
         }
         if (_numeric)
         {
-            return DataColumn.Compact(_name, VariableKind.Number, _numbers, _decimals, _text, _count);
+            return DataColumn.Compact(_name, VariableKind.Number, _numbers!, _decimals!, _text, _count);
         }
         if (_dates)
         {
-            return DataColumn.Compact(_name, VariableKind.Date, _numbers, _decimals, _text, _count);
+            return DataColumn.Compact(_name, VariableKind.Date, _numbers!, _decimals!, _text, _count);
         }
         // A text column: values read before the first text value may have been stored as canonical numbers or dates.
         var text = _text!;
-        for (var i = 0; i < _count; i++)
+        for (var i = 0; _decimals is not null && i < _count; i++)
         {
             if (_decimals[i] >= 0)
             {
-                text[i] = _canonicalDates ? CanonicalText.FormatDate(_numbers[i]) : CanonicalText.FormatNumber(_numbers[i], _decimals[i]);
+                text[i] = _canonicalDates ? CanonicalText.FormatDate(_numbers![i]) : CanonicalText.FormatNumber(_numbers![i], _decimals[i]);
             }
         }
         return new DataColumn(_name, VariableKind.Text, text, null, _count) { TextEvidence = _evidence };

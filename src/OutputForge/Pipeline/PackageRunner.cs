@@ -100,7 +100,7 @@ public static class PackageRunner
 
     /// <summary>One table analysed, laid out and rendered (to bytes, not yet written).</summary>
     private sealed record BuiltTable(LaidOutTable Table, IReadOnlyList<string> Warnings, ManifestTable Manifest,
-        IReadOnlyList<(string Name, byte[] Bytes)> Files);
+        IReadOnlyList<(string Name, byte[] Bytes)> Files, StageTimes Times);
 
     /// <summary>
     /// Builds the tables in parallel (each reads the shared, immutable datasets) and returns them in
@@ -119,7 +119,7 @@ public static class PackageRunner
             {
                 var clock = Stopwatch.StartNew();
                 built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page, context);
-                log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms");
+                log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms ({built[i].Times})");
             }
             catch (Exception e)
             {
@@ -137,7 +137,9 @@ public static class PackageRunner
     private static BuiltTable BuildTable(TableSpec table, RunRequest request, StudySpec study, StudyData data,
         IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context)
     {
+        var times = new StageTimes();
         var result = TableAnalyses.For(table).Analyze(study, table, data);
+        times.Lap("analysis");
         if (dataWarnings.Count > 0)
         {
             result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
@@ -157,6 +159,7 @@ public static class PackageRunner
         {
             Document = TableTemplates.Apply(context.Templates, laidOut.Document, TemplateValues.For(study, table, result, laidOut.Document, run)),
         };
+        times.Lap("layout");
         var files = new List<(string, byte[])>();
         foreach (var renderer in request.Renderers)
         {
@@ -168,8 +171,9 @@ public static class PackageRunner
                 bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
             }
             files.Add((OutputFileNames.ForTable(table.Id, renderer.Extension), bytes));
+            times.Lap(renderer.Extension.TrimStart('.'));
         }
-        return new BuiltTable(laidOut, result.Warnings, manifest, files);
+        return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
     }
 
     private static string DefaultDataFolder(SpecPackage package)
