@@ -1,17 +1,20 @@
 #!/usr/bin/env bash
-# Speed-and-memory benchmark of the outputforge CLI (see docs/performance.md).
-# Builds the CLI in Release, then measures wall clock and peak resident memory (GNU time -v) of
-#   (a) the small demo package, process start included, several runs (min and median);
-#   (b) a scaled invented study (demo --subjects N), then `run --verbose` on its data to read the
-#       stage timings (data reading, table building) and compute the CSV ingest throughput.
-# Usage: bench/run-benchmark.sh [SUBJECTS] [RUNS] [LOAD_COPIES]   (defaults 20000, 3, 0); run from anywhere.
-# LOAD_COPIES > 0 passes --load-copies to the scaled demo: extra copies of the itch-score records in
-# adeff.csv (19 at 20000 subjects gives about 1.9 million BDS rows) that no demo table reads.
+# Speed-and-memory benchmark of the outputforge CLI against the targets of docs/performance.md.
+# Publishes the CLI in Release (ReadyToRun), then measures wall clock and peak resident memory (GNU time -v) of
+#   (a) the small demo package (`demo`, 15 tables), process start included, several runs (min and median),
+#       and `run` of its 13 tables without Fisher's exact r x c test;
+#   (b) writing the pooled study (`demo --size pooled --no-tables`: 20,000 subjects, about 2.06 million BDS
+#       records, 200,000 adverse events, 60 table specs);
+#   (c) `run` of the 58 pooled tables that do not use Fisher's exact r x c test, every output
+#       (docx, xlsx, txt, combined, results.json, manifest), with --verbose stage timings;
+#   (d) unless the third argument is "skip-fisher": `run` of all 60 tables (adds 14.1.2.1 disposition and
+#       14.1.3.1 demographics, whose Fisher's exact r x c tests take minutes at this size).
+# Usage: bench/run-benchmark.sh [SUBJECTS] [RUNS] [skip-fisher]   (defaults 20000, 3); run from anywhere.
 set -euo pipefail
 
 subjects="${1:-20000}"
 runs="${2:-3}"
-load_copies="${3:-0}"
+fisher="${3:-with-fisher}"
 timestamp="2026-12-01T00:00:00Z"
 cd "$(dirname "$0")/.."
 
@@ -24,22 +27,25 @@ work="$(mktemp -d)"
 trap 'rm -rf "$work"' EXIT
 bin="$work/bin"
 
-echo "building the CLI in Release" >&2
-dotnet build src/OutputForge.Cli/OutputForge.Cli.csproj -c Release -o "$bin" -nologo -v quiet >"$work/build.log" 2>&1 \
+echo "publishing the CLI in Release (ReadyToRun)" >&2
+dotnet publish src/OutputForge.Cli/OutputForge.Cli.csproj -c Release -r linux-x64 --self-contained false -o "$bin" -nologo -v quiet >"$work/build.log" 2>&1 \
     || { cat "$work/build.log" >&2; exit 1; }
 cli="$bin/outputforge"
 
-# Runs a command under GNU time; prints "<wall seconds> <peak RSS MB>"; its stderr goes to $work/last.err.
+# Runs a command under GNU time; prints "<wall s> <peak RSS MB> <user+sys CPU s>"; its stderr goes to $work/last.err.
 measure() {
     /usr/bin/time -v -o "$work/time.txt" "$@" >"$work/last.out" 2>"$work/last.err" \
         || { cat "$work/last.err" >&2; exit 1; }
     awk -F': ' '
         /Elapsed \(wall clock\) time/ { n = split($2, p, ":"); s = 0; for (i = 1; i <= n; i++) s = s * 60 + p[i]; wall = s }
         /Maximum resident set size/ { rss = $2 / 1024 }
-        END { printf "%.2f %.0f\n", wall, rss }' "$work/time.txt"
+        /User time/ { cpu += $2 }
+        /System time/ { cpu += $2 }
+        END { printf "%.2f %.0f %.2f\n", wall, rss, cpu }' "$work/time.txt"
 }
 
 median() { sort -n | awk '{ v[NR] = $1 } END { print (NR % 2) ? v[(NR + 1) / 2] : (v[NR / 2] + v[NR / 2 + 1]) / 2 }'; }
+status() { awk -v v="$1" -v t="$2" 'BEGIN { print (v + 0 <= t + 0) ? "met" : "not met" }'; }
 
 echo "(a) small demo package, $runs runs" >&2
 : >"$work/small.txt"
@@ -50,43 +56,72 @@ done
 small_wall_min="$(cut -d' ' -f1 "$work/small.txt" | sort -n | head -1)"
 small_wall_median="$(cut -d' ' -f1 "$work/small.txt" | median)"
 small_rss_max="$(cut -d' ' -f2 "$work/small.txt" | sort -n | tail -1)"
+small_cpu_median="$(cut -d' ' -f3 "$work/small.txt" | median)"
 small_tables="$(ls "$work/small/output"/*.docx 2>/dev/null | wc -l)"
 
-echo "(b) scaled study: demo --subjects $subjects --load-copies $load_copies (writes the data and runs every demo table)" >&2
-read -r big_demo_wall big_demo_rss < <(measure "$cli" demo --out "$work/big" --subjects "$subjects" --load-copies "$load_copies" --timestamp "$timestamp" --verbose)
-cp "$work/last.err" "$work/big-demo.err"
-spec="$(find "$work/big/specs" -name study.json | head -1)"
-read -r big_run_wall big_run_rss < <(measure "$cli" run --spec "$spec" --data "$work/big/data" --out "$work/big/rerun" --timestamp "$timestamp" --verbose)
-cp "$work/last.err" "$work/big-run.err"
+# The same small package without its two Fisher r x c tables (14.1.2 disposition, 14.1.3 demographics), as `run`.
+small_without_fisher="14.1.1,14.2.*,14.3.*"
+: >"$work/small13.txt"
+for i in $(seq "$runs"); do
+    rm -rf "$work/small13"
+    measure "$cli" run --spec "$work/small/specs/demo/study.json" --data "$work/small/data" --out "$work/small13" \
+        --timestamp "$timestamp" --quiet --tables "$small_without_fisher" >>"$work/small13.txt"
+done
+small13_wall_min="$(cut -d' ' -f1 "$work/small13.txt" | sort -n | head -1)"
+small13_wall_median="$(cut -d' ' -f1 "$work/small13.txt" | median)"
+small13_cpu_median="$(cut -d' ' -f3 "$work/small13.txt" | median)"
 
+echo "(b) writing the pooled study ($subjects subjects)" >&2
+read -r gen_wall gen_rss gen_cpu < <(measure "$cli" demo --out "$work/big" --size pooled --subjects "$subjects" --no-tables)
+spec="$work/big/specs/pooled/study.json"
 csv_bytes="$(cat "$work/big/data"/*.csv | wc -c)"
-data_ms="$(sed -n 's/.*data: .* read in \([0-9]*\) ms.*/\1/p' "$work/big-run.err" | head -1)"
-tables_line="$(grep -m1 'tables: ' "$work/big-run.err" || true)"
-specs_line="$(grep -m1 'specs: ' "$work/big-run.err" || true)"
-big_tables="$(ls "$work/big/rerun"/*.docx 2>/dev/null | wc -l)"
-if [ -n "$data_ms" ] && [ "$data_ms" -gt 0 ]; then
-    ingest="$(awk -v b="$csv_bytes" -v ms="$data_ms" 'BEGIN { printf "%.1f", b / 1e6 / (ms / 1000) }')"
-else
-    ingest="n/a (no data timing line)"
+bds_rows="$(($(wc -l <"$work/big/data/adeff.csv") - 1))"
+ae_rows="$(($(wc -l <"$work/big/data/adae.csv") - 1))"
+
+without_fisher="14.1.1.*,14.1.2.2,14.1.3.2,14.1.3.3,14.1.3.4,14.2.*,14.3.*"
+echo "(c) run of the 58 tables without Fisher's exact r x c, every output" >&2
+read -r run_wall run_rss run_cpu < <(measure "$cli" run --spec "$spec" --data "$work/big/data" --out "$work/big/out58" \
+    --format docx,xlsx,txt --combined --timestamp "$timestamp" --verbose --tables "$without_fisher")
+cp "$work/last.err" "$work/run58.err"
+run_tables="$(ls "$work/big/out58"/*.docx | grep -vc all-tables || true)"
+
+full_wall="not run"; full_rss="not run"; full_cpu="not run"; full_tables=0; s=""; mb=""
+
+if [ "$fisher" != "skip-fisher" ]; then
+    echo "(d) run of all 60 tables, every output (Fisher's exact r x c included: minutes)" >&2
+    read -r full_wall full_rss full_cpu < <(measure "$cli" run --spec "$spec" --data "$work/big/data" --out "$work/big/out60" \
+        --format docx,xlsx,txt --combined --timestamp "$timestamp" --verbose)
+    cp "$work/last.err" "$work/run60.err"
+    full_tables="$(ls "$work/big/out60"/*.docx | grep -vc all-tables || true)"
+    s=" s"; mb=" MB"
 fi
 
+data_ms="$(sed -n 's/.*data: .* read in \([0-9]*\) ms.*/\1/p' "$work/run58.err" | head -1)"
+ingest="$(awk -v b="$csv_bytes" -v ms="$data_ms" 'BEGIN { printf "%.1f", b / 1e6 / (ms / 1000) }')"
+
 echo
-echo "## outputforge benchmark ($(date -u +%Y-%m-%dT%H:%MZ), $(nproc) cores)"
+echo "## outputforge benchmark ($(date -u +%Y-%m-%dT%H:%MZ), $(nproc) cores, load average before: $(cut -d' ' -f1-3 /proc/loadavg))"
 echo
-echo "| Measurement | Value |"
-echo "|---|---|"
-echo "| (a) small demo package ($small_tables tables), wall, min of $runs | $small_wall_min s |"
-echo "| (a) small demo package, wall, median of $runs | $small_wall_median s |"
-echo "| (a) small demo package, peak RSS (max of runs) | $small_rss_max MB |"
-echo "| (b) demo --subjects $subjects --load-copies $load_copies (write data + all tables), wall | $big_demo_wall s |"
-echo "| (b) demo --subjects $subjects --load-copies $load_copies, peak RSS | $big_demo_rss MB |"
-echo "| (b) run on the scaled data ($big_tables tables, every output), wall | $big_run_wall s |"
-echo "| (b) run on the scaled data, peak RSS | $big_run_rss MB |"
-echo "| (b) CSV data: bytes | $csv_bytes |"
-echo "| (b) CSV ingest throughput | $ingest MB/s |"
+echo "Pooled study: $subjects subjects, $bds_rows BDS records (adeff), $ae_rows adverse events (adae), $csv_bytes bytes of CSV."
 echo
-echo "Dataset rows (run): $(grep -m1 'read .* datasets from' "$work/big-run.err" | sed 's/.*: //')"
-echo "Stage timings (run): $specs_line | $(grep -m1 'data: ' "$work/big-run.err" || true) | $tables_line"
+echo "| Target | Measured | CPU (user+sys) | Status |"
+echo "|---|---|---|---|"
+echo "| (a) small demo ($small_tables tables) <= 2 s wall incl. process start | min $small_wall_min s, median $small_wall_median s of $runs; peak RSS $small_rss_max MB | median $small_cpu_median s | $(status "$small_wall_min" 2) |"
+echo "| (a) small demo without its 2 Fisher r x c tables (13 tables, \`run\`) | min $small13_wall_min s, median $small13_wall_median s of $runs | median $small13_cpu_median s | $(status "$small13_wall_min" 2) |"
+echo "| (b) writing the pooled study | $gen_wall s; peak RSS $gen_rss MB | $gen_cpu s | (no target) |"
+echo "| (c) pooled package without Fisher r x c ($run_tables tables, every output) <= 8 s | $run_wall s | $run_cpu s | $(status "$run_wall" 8) |"
+echo "| (c) peak memory <= 1.5 GB (1536 MB) | $run_rss MB | | $(status "$run_rss" 1536) |"
+echo "| (d) whole pooled package ($full_tables tables, every output) <= 8 s | $full_wall$s | $full_cpu$s | $( [ "$full_wall" = "not run" ] && echo "not run" || status "$full_wall" 8) |"
+echo "| (d) peak memory <= 1.5 GB | $full_rss$mb | | $( [ "$full_rss" = "not run" ] && echo "not run" || status "$full_rss" 1536) |"
+echo "| CSV ingest >= 100 MB/s (run (c), data stage) | $ingest MB/s ($csv_bytes bytes in $data_ms ms) | | $(awk -v v="$ingest" 'BEGIN { print (v + 0 >= 100) ? "met" : "not met" }') |"
 echo
-echo "Slowest tables (run --verbose):"
-grep 'table .*: built in' "$work/big-run.err" | sed 's/.*table \(.*\): built in \([0-9]*\) ms.*/\2 ms \1/' | sort -rn | head -10
+echo "Stage timings (c): $(grep -m1 'specs: ' "$work/run58.err" || true) | $(grep -m1 'data: ' "$work/run58.err" || true) | $(grep -m1 'tables: ' "$work/run58.err" || true)"
+echo
+echo "Slowest tables (c):"
+grep 'table .*: built in' "$work/run58.err" | sed 's/.*table \(.*\): built in \([0-9]*\) ms.*/\2 ms \1/' | sort -rn | head -10
+if [ -f "$work/run60.err" ]; then
+    echo
+    echo "Stage timings (d): $(grep -m1 'data: ' "$work/run60.err" || true) | $(grep -m1 'tables: ' "$work/run60.err" || true)"
+    echo "Slowest tables (d):"
+    grep 'table .*: built in' "$work/run60.err" | sed 's/.*table \(.*\): built in \([0-9]*\) ms.*/\2 ms \1/' | sort -rn | head -5
+fi

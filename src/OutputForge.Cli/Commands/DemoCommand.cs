@@ -13,10 +13,14 @@ public static class DemoCommand
     public static Command Create(TextWriter error)
     {
         var output = CommonOptions.Output("Folder to write into: data/ (the invented study's CSV), specs/ (its specs) and output/ (the tables).");
-        var subjects = new Option<int>("--subjects")
+        var subjects = new Option<int?>("--subjects")
         {
-            Description = "Number of randomized subjects of the invented study.",
-            DefaultValueFactory = _ => new DemoStudyOptions().Subjects,
+            Description = $"Number of randomized subjects of the invented study (default {new DemoStudyOptions().Subjects}, or {PooledStudyOptions.TargetSubjects} with --size pooled).",
+        };
+        var size = DemoSizeOption.Create();
+        var noTables = new Option<bool>("--no-tables")
+        {
+            Description = "Write only the data and specs, without producing the tables (e.g. to time `run` on them separately).",
         };
         var loadCopies = new Option<int>("--load-copies")
         {
@@ -29,7 +33,7 @@ public static class DemoCommand
         var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, loadCopies, formats, quiet, verbose, timestamp, combined,
+            output, subjects, size, noTables, loadCopies, formats, quiet, verbose, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -41,8 +45,12 @@ public static class DemoCommand
             var root = parse.GetValue(output)!;
             var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
             var dataFolder = Path.Combine(root, "data");
-            var studyFile = DemoPackageWriter.Write(root, new DemoStudyOptions(parse.GetValue(subjects), LoadCopies: parse.GetValue(loadCopies)));
+            var studyFile = DemoPackageWriter.Write(root, DemoSizeOption.Options(parse.GetValue(size), parse.GetValue(subjects), parse.GetValue(loadCopies)));
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
+            if (parse.GetValue(noTables))
+            {
+                return ExitCodes.Success;
+            }
             PackageRunner.Run(new RunRequest(studyFile, dataFolder, Path.Combine(root, "output"), renderers)
             {
                 RunTime = runTime,

@@ -27,10 +27,9 @@ public sealed class EndpointRecords
         var endpoint = table.Endpoint!;
         var dataset = data[endpoint.Dataset];
         var tests = new List<Func<int, bool>>();
-        if (endpoint.Parameter is not null)
-        {
-            tests.Add(ValueTest(dataset, "PARAMCD", endpoint.Parameter, table.Source, "/endpoint/parameter"));
-        }
+        // The parameter's records come from the PARAMCD column's shared index rather than a scan of the dataset.
+        var candidates = endpoint.Parameter is null ? null
+            : Variable(dataset, "PARAMCD", endpoint.Parameter, table.Source, "/endpoint/parameter").RowsWith(endpoint.Parameter);
         if (endpoint.Visit is not null)
         {
             tests.Add(ValueTest(dataset, "AVISIT", endpoint.Visit, table.Source, "/endpoint/visit"));
@@ -41,8 +40,10 @@ public sealed class EndpointRecords
         }
         var subjects = dataset.Get(AdamConformance.SubjectVariable);
         var rowOfSubject = new Dictionary<string, int>(StringComparer.Ordinal);
-        for (var row = 0; row < dataset.RowCount; row++)
+        var count = candidates?.Count ?? dataset.RowCount;
+        for (var i = 0; i < count; i++)
         {
+            var row = candidates?[i] ?? i;
             if (!tests.TrueForAll(t => t(row)))
             {
                 continue;
@@ -60,6 +61,13 @@ public sealed class EndpointRecords
 
     private static Func<int, bool> ValueTest(Dataset dataset, string variableName, string value, SpecSource source, string pointer)
     {
+        var variable = Variable(dataset, variableName, value, source, pointer);
+        return row => string.Equals(variable.GetText(row), value, StringComparison.Ordinal);
+    }
+
+    /// <summary>The selecting variable, checked to hold <paramref name="value"/> somewhere.</summary>
+    private static DataColumn Variable(Dataset dataset, string variableName, string value, SpecSource source, string pointer)
+    {
         var variable = dataset.Find(variableName) ?? throw new SpecException(source.Problem(pointer,
             $"{Path.GetFileName(dataset.File)} has no {variableName} variable, which this key selects on"));
         var values = variable.DistinctValues();
@@ -68,7 +76,7 @@ public sealed class EndpointRecords
             throw new SpecException(source.Problem(pointer,
                 $"no record of {Path.GetFileName(dataset.File)} has {variableName} '{value}'{NearestName.Hint(value, values.ToList())}"));
         }
-        return row => string.Equals(variable.GetText(row), value, StringComparison.Ordinal);
+        return variable;
     }
 
     /// <summary>Compiles the endpoint's response condition against the endpoint's dataset.</summary>

@@ -104,8 +104,11 @@ public static class CsvDatasetReader
             }
             var header = Fields(reader);
             CheckHeader(path, header);
-            var values = header.Select(_ => new List<string?>()).ToArray();
-            var lines = new List<int>();
+            // Every row ends at a line feed (or the end of the file), so their count bounds the number of rows.
+            var capacity = bytes.AsSpan(bodyStart).Count((byte)'\n') + 1;
+            var columns = header.Select(h => new ColumnBuilder(h, capacity)).ToArray();
+            var lines = new int[capacity];
+            var rows = 0;
             var replaced = 0;
             while (reader.Read())
             {
@@ -121,30 +124,36 @@ public static class CsvDatasetReader
                 }
                 for (var c = 0; c < header.Length; c++)
                 {
-                    var value = reader.IsEmpty(c) ? null : reader.GetString(c);
-                    if (value is { Length: > MaxFieldLength })
+                    if (reader.IsEmpty(c))
+                    {
+                        columns[c].AddMissing();
+                        continue;
+                    }
+                    var utf8 = reader.GetSpan(c);
+                    if (columns[c].TryAddCanonical(utf8))
+                    {
+                        continue;
+                    }
+                    var value = reader.GetString(c);
+                    if (value.Length > MaxFieldLength)
                     {
                         throw new DataException(path, line, header[c],
                             FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
                     }
-                    if (value is not null && ControlCharacters.IndexIn(value) >= 0)
+                    // Control characters are single bytes below 0x20 in UTF-8: look for them only when such a byte is present.
+                    if (utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 && ControlCharacters.IndexIn(value) >= 0)
                     {
                         value = HandleControlCharacter(path, line, header[c], value, options, warn, ref replaced);
                     }
-                    values[c].Add(value);
+                    columns[c].AddText(value, line);
                 }
-                lines.Add(line);
+                lines[rows++] = line;
             }
             if (replaced > 0)
             {
                 warn($"{path}: {replaced} value{(replaced == 1 ? "" : "s")} held control characters, replaced by U+FFFD");
             }
-            var columns = new List<DataColumn>(header.Length);
-            for (var c = 0; c < header.Length; c++)
-            {
-                columns.Add(TypeColumn(header[c], values[c].ToArray(), lines));
-            }
-            return new Dataset(name, path, lines.Count, columns, lines);
+            return new Dataset(name, path, rows, columns.Select(c => c.Build()).ToList(), new ArraySegment<int>(lines, 0, rows));
         }
         catch (CsvFormatException e)
         {
@@ -200,63 +209,4 @@ public static class CsvDatasetReader
             seen[variable] = c;
         }
     }
-
-    /// <summary>
-    /// A column is numeric when every non-missing value reads as an invariant-culture number, a
-    /// date when every non-missing value is an ISO 8601 date (YYYY-MM-DD), and text otherwise.
-    /// </summary>
-    private static DataColumn TypeColumn(string name, string?[] text, List<int> lines)
-    {
-        string? firstText = null;
-        var numbers = new double[text.Length];
-        var numeric = true;
-        var dates = true;
-        var any = false;
-        for (var i = 0; i < text.Length && (numeric || dates); i++)
-        {
-            var value = text[i];
-            if (value is null)
-            {
-                numbers[i] = double.NaN;
-                continue;
-            }
-            any = true;
-            if (numeric)
-            {
-                if (double.TryParse(value, NumberStyles.Float, CultureInfo.InvariantCulture, out var number) && double.IsFinite(number))
-                {
-                    numbers[i] = number;
-                }
-                else
-                {
-                    numeric = false;
-                    firstText = $"'{Shorten(value)}' on line {lines[i]}";
-                }
-            }
-            if (dates && !(value.Length == 10 && DateOnly.TryParseExact(value, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out _)))
-            {
-                dates = false;
-            }
-        }
-        if (!any)
-        {
-            return new DataColumn(name, VariableKind.Text, text, null);
-        }
-        if (numeric)
-        {
-            return new DataColumn(name, VariableKind.Number, text, numbers);
-        }
-        if (dates)
-        {
-            for (var i = 0; i < text.Length; i++)
-            {
-                numbers[i] = text[i] is null ? double.NaN
-                    : DateOnly.ParseExact(text[i]!, "yyyy-MM-dd", CultureInfo.InvariantCulture).DayNumber;
-            }
-            return new DataColumn(name, VariableKind.Date, text, numbers);
-        }
-        return new DataColumn(name, VariableKind.Text, text, null) { TextEvidence = firstText };
-    }
-
-    private static string Shorten(string value) => value.Length <= 20 ? value : value[..20] + "...";
 }

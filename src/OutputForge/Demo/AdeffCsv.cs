@@ -46,6 +46,7 @@ internal static class AdeffCsv
             {
                 WriteItch(csv, s, $"ITCHC{copy:00}", $"{ItchParam}, load copy {copy}", 100 + copy);
             }
+            WeeklyEfficacyRows.Write(csv, s);
         }
     }
 

@@ -58,7 +58,7 @@ internal static class AdverseEventSimulator
         }
     }
 
-    private static DateOnly? AddEvent(DemoSubject subject, AdverseEventTerm term, DateOnly onset, Xoshiro256StarStar random, bool forcedSevere)
+    internal static DateOnly? AddEvent(DemoSubject subject, AdverseEventTerm term, DateOnly onset, Xoshiro256StarStar random, bool forcedSevere)
     {
         var serious = random.Chance(term.SeriousProbability);
         var severityDraw = random.NextDouble();
@@ -83,7 +83,7 @@ internal static class AdverseEventSimulator
         return end;
     }
 
-    private static AdverseEventTerm PickTerm(int armIndex, Xoshiro256StarStar random, bool boostDrugRelated)
+    internal static AdverseEventTerm PickTerm(int armIndex, Xoshiro256StarStar random, bool boostDrugRelated)
     {
         var terms = AdverseEventCatalog.Terms;
         Span<double> weights = stackalloc double[terms.Count];

@@ -16,6 +16,8 @@ public static class DemoPackageWriter
         {
             DemoStudyGenerator.WriteCsv(Path.Combine(staging, "data"), options);
             var studyFile = DemoSpecFiles.Write(staging);
+            if (options.Pooled is { } pooled)
+                studyFile = PooledSpecSet.Write(staging, pooled.WeeklyParameters);
             foreach (var file in Directory.GetFiles(staging, "*", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
             {
                 var target = Path.Combine(full, Path.GetRelativePath(staging, file));

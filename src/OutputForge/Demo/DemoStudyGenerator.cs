@@ -16,6 +16,7 @@ public static class DemoStudyGenerator
     private const ulong RandomizationStream = 2;
     private const ulong BaselineStream = 3;
     private const ulong OutcomeStream = 4;
+    private const ulong PooledStream = 5;
 
     public static IReadOnlyList<string> WriteCsv(string folder, DemoStudyOptions? options = null)
     {
@@ -28,6 +29,10 @@ public static class DemoStudyGenerator
 
         if (options.LoadCopies < 0 || options.LoadCopies > 99)
             throw new DemoStudyException($"The demo study takes 0 to 99 load copies; {options.LoadCopies} was given.");
+        if (options.Pooled is { } scale && (scale.WeeklyParameters < 0 || scale.WeeklyParameters > WeeklyEfficacyParameter.All.Count
+                || scale.ExtraEventsPerSubject < 0 || scale.ExtraEventsPerSubject > 100))
+            throw new DemoStudyException(
+                $"The pooled demo study takes 0 to {WeeklyEfficacyParameter.All.Count} weekly parameters and 0 to 100 extra adverse events per subject.");
         var subjects = Simulate(options);
         try
         {
@@ -65,6 +70,8 @@ public static class DemoStudyGenerator
             ItchTrajectorySimulator.Simulate(subject, visitDays, random);
             AdverseEventSimulator.Simulate(subject, random);
             subject.ImpressionsOfChange = ImpressionOfChangeSimulator.Simulate(subject, options.Seed, (ulong)i);
+            if (options.Pooled is { } pooled)
+                PooledStudySimulator.Simulate(subject, pooled, new Xoshiro256StarStar(SplitMix64.Derive(options.Seed, PooledStream, (ulong)i)));
         }
 
         subjects.Sort((a, b) => string.CompareOrdinal(a.UniqueSubjectId, b.UniqueSubjectId));

@@ -9,4 +9,7 @@ public sealed record DemoStudyOptions(int Subjects = 450, ulong Seed = 301, int 
 {
     /// <summary>Largest study the generator accepts; keeps subject numbers within each site readable.</summary>
     public const int MaxSubjects = 1_000_000;
+
+    /// <summary>The pooled-analysis enlargement (further weekly parameters, adverse events and the pooled spec set); null for the ordinary study.</summary>
+    public PooledStudyOptions? Pooled { get; init; }
 }

@@ -41,6 +41,7 @@ internal sealed class DemoSubject
     public List<ItchAssessment> ItchAssessments { get; } = new(6);
     public List<AdverseEventRecord> AdverseEvents { get; } = new(2);
     public List<ImpressionOfChange> ImpressionsOfChange { get; set; } = [];
+    public List<WeeklyAssessment> WeeklyAssessments { get; } = [];
 
     /// <summary>EFFFL: dosed and at least one post-baseline itch value used for analysis.</summary>
     public bool InEfficacyPopulation =>

@@ -105,7 +105,7 @@ public static class PackageRunner
 
     /// <summary>One table analysed, laid out and rendered (to bytes, not yet written).</summary>
     private sealed record BuiltTable(LaidOutTable Table, IReadOnlyList<string> Warnings, ManifestTable Manifest,
-        IReadOnlyList<(string Name, byte[] Bytes)> Files);
+        IReadOnlyList<(string Name, byte[] Bytes)> Files, StageTimes Times);
 
     /// <summary>
     /// Builds the tables in parallel (each reads the shared, immutable datasets) and returns them in
@@ -124,7 +124,7 @@ public static class PackageRunner
             {
                 var clock = Stopwatch.StartNew();
                 built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page, context);
-                log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms");
+                log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms ({built[i].Times})");
             }
             catch (Exception e)
             {
@@ -142,7 +142,9 @@ public static class PackageRunner
     private static BuiltTable BuildTable(TableSpec table, RunRequest request, StudySpec study, StudyData data,
         IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context)
     {
+        var times = new StageTimes();
         var result = TableAnalyses.For(table).Analyze(study, table, data);
+        times.Lap("analysis");
         if (dataWarnings.Count > 0)
         {
             result = result with { Warnings = [.. dataWarnings, .. result.Warnings] };
@@ -167,6 +169,7 @@ public static class PackageRunner
         {
             Document = TableTemplates.Apply(context.Templates, laidOut.Document, TemplateValues.For(study, table, result, laidOut.Document, run)),
         };
+        times.Lap("layout");
         var files = new List<(string, byte[])>();
         foreach (var renderer in request.Renderers)
         {
@@ -178,12 +181,13 @@ public static class PackageRunner
                 bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
             }
             files.Add((OutputFileNames.ForTable(table.Id, renderer.Extension), bytes));
+            times.Lap(renderer.Extension.TrimStart('.'));
         }
         if (result.Figure is { } picture)
         {
             files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
         }
-        return new BuiltTable(laidOut, result.Warnings, manifest, files);
+        return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
     }
 
     private static string DefaultDataFolder(SpecPackage package)

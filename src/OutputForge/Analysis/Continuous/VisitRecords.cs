@@ -39,7 +39,7 @@ internal sealed class VisitRecords
                     $"no record of {file} has AVISIT '{settings.Visits[i]}'{NearestName.Hint(settings.Visits[i], known.ToList())}"));
             }
         }
-        Func<int, bool> parameter = _ => true;
+        IReadOnlyList<int>? candidates = null;
         if (endpoint.Parameter is not null)
         {
             var paramcd = dataset.Find("PARAMCD") ?? throw new SpecException(table.Source.Problem("/endpoint/parameter",
@@ -50,14 +50,17 @@ internal sealed class VisitRecords
                 throw new SpecException(table.Source.Problem("/endpoint/parameter",
                     $"no record of {file} has PARAMCD '{endpoint.Parameter}'{NearestName.Hint(endpoint.Parameter, codes.ToList())}"));
             }
-            parameter = row => string.Equals(paramcd.GetText(row), endpoint.Parameter, StringComparison.Ordinal);
+            // The records of the parameter come from the column's shared index rather than a scan of the dataset.
+            candidates = paramcd.RowsWith(endpoint.Parameter);
         }
         var where = endpoint.Where is null ? null : new SpecConditionText(endpoint.Where, table.Source, "/endpoint/where").Compile(dataset);
         var subjects = dataset.Get(AdamConformance.SubjectVariable);
         var byVisit = settings.Visits.Distinct().ToDictionary(v => v, _ => new Dictionary<string, int>(StringComparer.Ordinal), StringComparer.Ordinal);
-        for (var row = 0; row < dataset.RowCount; row++)
+        var count = candidates?.Count ?? dataset.RowCount;
+        for (var i = 0; i < count; i++)
         {
-            if (!parameter(row) || (where is not null && !where.Matches(row)) || visitVariable.GetText(row) is not { } visit
+            var row = candidates?[i] ?? i;
+            if ((where is not null && !where.Matches(row)) || visitVariable.GetText(row) is not { } visit
                 || !byVisit.TryGetValue(visit, out var rows))
             {
                 continue;
