@@ -24,7 +24,14 @@ internal static class ReferenceOracles
         JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
             RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "ratio_strata_oracles.json"))));
 
+    private static readonly Lazy<JsonDocument> ConditionalOddsRatioDocument = new(() =>
+        JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
+            RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "conditional_odds_ratio_oracles.json"))));
+
     public static JsonElement ProportionTable => ProportionTableDocument.Value.RootElement;
+
+    /// <summary>R 4.2.2 fisher.test values from Oracles/generate_conditional_odds_ratio_oracles.R.</summary>
+    public static IEnumerable<JsonElement> ConditionalOddsRatio => ConditionalOddsRatioDocument.Value.RootElement.GetProperty("cases").EnumerateArray();
 
     /// <summary>statsmodels 0.13.5 / R 4.2.2 values from Oracles/generate_ratio_strata_oracles.py.</summary>
     public static JsonElement RatioStrata => RatioStrataDocument.Value.RootElement;
