@@ -28,7 +28,14 @@ internal static class ReferenceOracles
         JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
             RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "conditional_odds_ratio_oracles.json"))));
 
+    private static readonly Lazy<JsonDocument> FisherLargeDocument = new(() =>
+        JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
+            RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "fisher_large_oracles.json"))));
+
     public static JsonElement ProportionTable => ProportionTableDocument.Value.RootElement;
+
+    /// <summary>R 4.2.2 fisher.test values (or FEXACT's error) from Oracles/generate_fisher_large_oracles.R.</summary>
+    public static IEnumerable<JsonElement> FisherLarge => FisherLargeDocument.Value.RootElement.GetProperty("fisher_large").EnumerateArray();
 
     /// <summary>R 4.2.2 fisher.test values from Oracles/generate_conditional_odds_ratio_oracles.R.</summary>
     public static IEnumerable<JsonElement> ConditionalOddsRatio => ConditionalOddsRatioDocument.Value.RootElement.GetProperty("cases").EnumerateArray();
