@@ -1,4 +1,3 @@
-using System.Runtime.InteropServices;
 using MathNet.Numerics;
 
 namespace OutputForge.Stats;
@@ -112,11 +111,11 @@ internal sealed class FisherNetworkEnumeration
         {
             return 0;
         }
-        var current = new Dictionary<NodeKey, Dictionary<long, double>> { [root] = new() { [0] = 1 } };
+        var current = new Dictionary<NodeKey, Dictionary<long, PastEntry>> { [root] = FisherPastValues.Start() };
         double pValue = 0;
         for (int stage = 0; stage < terminal; stage++)
         {
-            var next = new Dictionary<NodeKey, Dictionary<long, double>>();
+            var next = new Dictionary<NodeKey, Dictionary<long, PastEntry>>();
             foreach (var (node, paths) in current)
             {
                 var pasts = FisherPastValues.Of(paths);
@@ -139,13 +138,12 @@ internal sealed class FisherNetworkEnumeration
                     {
                         if (!next.TryGetValue(child, out var childPaths))
                         {
-                            childPaths = new Dictionary<long, double>();
+                            childPaths = new Dictionary<long, PastEntry>();
                             next[child] = childPaths;
                         }
                         for (int i = counted; i < carried; i++)
                         {
-                            long key = FisherPastValues.KeyOf(pasts.Values[i] + step);
-                            CollectionsMarshal.GetValueRefOrAddDefault(childPaths, key, out _) += pasts.Counts[i];
+                            FisherPastValues.Add(childPaths, pasts.Values[i] + step, pasts.Counts[i]);
                         }
                         _work += carried - counted;
                     }
@@ -164,9 +162,8 @@ internal sealed class FisherNetworkEnumeration
         foreach (var (node, paths) in current)
         {
             var (values, logPrefix) = Completions(terminal, node);
-            foreach (var (key, count) in paths)
+            foreach (var (past, count) in paths.Values)
             {
-                double past = key / FisherPastValues.MergeResolution;
                 int included = FisherPastValues.UpperBound(values, threshold - past);
                 if (included > 0)
                 {

@@ -1,3 +1,5 @@
+using System.Runtime.InteropServices;
+
 namespace OutputForge.Stats;
 
 /// <summary>
@@ -8,7 +10,8 @@ namespace OutputForge.Stats;
 /// <para>
 /// Values are merged on a grid of 1e-10 in log probability (the key is value x 1e10, rounded): two
 /// partial tables whose values differ by less than that are the same multiset of cells computed in
-/// a different order, and far inside the 1e-7 tie tolerance of the p-value.
+/// a different order, and far inside the 1e-7 tie tolerance of the p-value. The value kept for a key
+/// is the first exact value seen, not the grid point, so merging adds no rounding to the p-value.
 /// </para>
 /// </summary>
 internal sealed class FisherPastValues
@@ -21,7 +24,17 @@ internal sealed class FisherPastValues
 
     public static long KeyOf(double value) => (long)Math.Round(value * MergeResolution);
 
-    public static FisherPastValues Of(Dictionary<long, double> paths)
+    /// <summary>The start of every network: the empty partial table, value 0, one path.</summary>
+    public static Dictionary<long, PastEntry> Start() => new() { [0] = new PastEntry(0, 1) };
+
+    /// <summary>Adds <paramref name="count"/> paths of past value <paramref name="value"/> to a node's collection.</summary>
+    public static void Add(Dictionary<long, PastEntry> paths, double value, double count)
+    {
+        ref var entry = ref CollectionsMarshal.GetValueRefOrAddDefault(paths, KeyOf(value), out bool exists);
+        entry = exists ? entry with { Count = entry.Count + count } : new PastEntry(value, count);
+    }
+
+    public static FisherPastValues Of(Dictionary<long, PastEntry> paths)
     {
         var keys = paths.Keys.ToArray();
         Array.Sort(keys);
@@ -31,8 +44,8 @@ internal sealed class FisherPastValues
         logPrefix[0] = double.NegativeInfinity;
         for (int i = 0; i < keys.Length; i++)
         {
-            values[i] = keys[i] / MergeResolution;
-            counts[i] = paths[keys[i]];
+            values[i] = paths[keys[i]].Value;
+            counts[i] = paths[keys[i]].Count;
             logPrefix[i + 1] = LogAdd(logPrefix[i], Math.Log(counts[i]) + values[i]);
         }
         return new FisherPastValues { Values = values, Counts = counts, LogPrefix = logPrefix };
@@ -75,3 +88,6 @@ internal sealed class FisherPastValues
         return low;
     }
 }
+
+/// <summary>One merged past value of a network node: its exact value and how many partial tables share it.</summary>
+internal readonly record struct PastEntry(double Value, double Count);

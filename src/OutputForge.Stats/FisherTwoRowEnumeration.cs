@@ -1,4 +1,3 @@
-using System.Runtime.InteropServices;
 using MathNet.Numerics;
 
 namespace OutputForge.Stats;
@@ -87,11 +86,11 @@ internal sealed class FisherTwoRowEnumeration
         {
             largest[stage] = LargestCompletions(stage, Math.Min(rowTotal, _suffixTotals[stage]));
         }
-        var current = new Dictionary<int, Dictionary<long, double>> { [rowTotal] = new() { [0] = 1 } };
+        var current = new Dictionary<int, Dictionary<long, PastEntry>> { [rowTotal] = FisherPastValues.Start() };
         double pValue = 0;
         for (int stage = 0; stage < terminal; stage++)
         {
-            var next = new Dictionary<int, Dictionary<long, double>>();
+            var next = new Dictionary<int, Dictionary<long, PastEntry>>();
             double smallestAfter = SmallestCompletion(stage + 1);
             foreach (var (left, paths) in current)
             {
@@ -114,12 +113,12 @@ internal sealed class FisherTwoRowEnumeration
                     {
                         if (!next.TryGetValue(child, out var childPaths))
                         {
-                            childPaths = new Dictionary<long, double>();
+                            childPaths = new Dictionary<long, PastEntry>();
                             next[child] = childPaths;
                         }
                         for (int i = counted; i < carried; i++)
                         {
-                            CollectionsMarshal.GetValueRefOrAddDefault(childPaths, FisherPastValues.KeyOf(pasts.Values[i] + step), out _) += pasts.Counts[i];
+                            FisherPastValues.Add(childPaths, pasts.Values[i] + step, pasts.Counts[i]);
                         }
                         _work += carried - counted;
                     }
