@@ -23,13 +23,20 @@ namespace OutputForge.Stats;
 /// The smallest V a completion can add is bounded below by -sum log C_j! (every g_j is at least
 /// g_j(0) = g_j(C_j)); a looser bound only means fewer paths are dropped early, never a different
 /// result. Decisions use a margin of 1e-9 on the bounds so that rounding in the running sums can
-/// only delay a decision. Work is bounded by <see cref="FisherNetworkEnumeration.WorkLimit"/> steps.
+/// only delay a decision. Work is bounded by <see cref="FisherNetworkEnumeration.WorkLimit"/> steps
+/// and memory by <see cref="IncrementLimit"/>.
 /// </para>
 /// </summary>
 internal sealed class FisherTwoRowEnumeration
 {
     private const double LogTolerance = 1e-7;
     private const double BoundMargin = 1e-9;
+
+    /// <summary>
+    /// The largest-completion tables hold one increment per unit of every remaining column total, for
+    /// each stage: beyond this many in all (n x (c - 2)) the table is refused before any allocation.
+    /// </summary>
+    internal const long IncrementLimit = 100_000_000;
 
     private readonly int[] _columns;
     private readonly double[] _logFactorial;
@@ -58,9 +65,13 @@ internal sealed class FisherTwoRowEnumeration
         int[] order = Enumerable.Range(0, c).OrderBy(j => oriented[0, j] + oriented[1, j]).ToArray();
         int[] columns = order.Select(j => oriented[0, j] + oriented[1, j]).ToArray();
         int[] observedFirst = order.Select(j => oriented[first, j]).ToArray();
-        int n = columns.Sum();
+        long n = columns.Sum(v => (long)v);
+        if (n * (c - 2) > IncrementLimit)
+        {
+            return null;
+        }
         int rowTotal = observedFirst.Sum();
-        var logFactorial = new double[n + 1];
+        var logFactorial = new double[(int)n + 1];
         for (int k = 0; k <= n; k++)
         {
             logFactorial[k] = SpecialFunctions.FactorialLn(k);
@@ -71,7 +82,7 @@ internal sealed class FisherTwoRowEnumeration
         {
             observed += network.Cell(j, observedFirst[j]);
         }
-        double constant = logFactorial[rowTotal] + logFactorial[n - rowTotal] + columns.Sum(v => logFactorial[v]) - logFactorial[n];
+        double constant = logFactorial[rowTotal] + logFactorial[(int)n - rowTotal] + columns.Sum(v => logFactorial[v]) - logFactorial[(int)n];
         return network.Enumerate(rowTotal, observed + LogTolerance, constant);
     }
 

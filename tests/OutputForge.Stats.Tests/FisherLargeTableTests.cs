@@ -87,4 +87,16 @@ public class FisherLargeTableTests
         double expected = FisherBruteForce.PValue(table);
         Assert.Equal(expected, FisherExactTest.Compute(table).PValue, Math.Max(expected * 1e-9, 1e-15));
     }
+
+    /// <summary>A two-row table with 80 million subjects would need gigabytes of bounds: refused at once, with the reason.</summary>
+    [Fact]
+    public void TwoRowTableBeyondTheMemoryBoundIsRefused()
+    {
+        var table = new[,] { { 10_000_000, 10_000_000, 10_000_000, 10_000_000 }, { 10_000_000, 10_000_000, 10_000_000, 10_000_000 } };
+        var clock = Stopwatch.StartNew();
+        var result = FisherExactTest.Compute(table);
+        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(5), $"took {clock.Elapsed}");
+        Assert.False(result.IsEstimable);
+        Assert.Contains("too large", result.NotEstimableReason);
+    }
 }
