@@ -64,8 +64,9 @@ public static class FisherExactTest
     /// An r x c table. Rows and columns with a zero total are dropped (and reported); a table that
     /// reduces to 2 x 2 is computed exactly as <see cref="TwoByTwo"/>, one that reduces to a single
     /// row or column admits only the observed table and has p = 1 (with a note). Larger tables use the
-    /// network algorithm of Mehta and Patel (1983) in <see cref="FisherNetworkEnumeration"/>; a table
-    /// too large to enumerate within its work limit is reported as not estimable, never approximated.
+    /// network algorithm of Mehta and Patel (1983): for two rows or two columns the one-number network
+    /// of <see cref="FisherTwoRowEnumeration"/>, otherwise <see cref="FisherNetworkEnumeration"/>; a
+    /// table too large to enumerate within the work limit is reported as not estimable, never approximated.
     /// </summary>
     public static TestResult Compute(int[,] table)
     {
@@ -89,7 +90,7 @@ public static class FisherExactTest
         {
             return TwoByTwo(reduced[0, 0], reduced[0, 1], reduced[1, 0], reduced[1, 1]) with { Notes = notes };
         }
-        double? p = FisherNetworkEnumeration.PValue(reduced);
+        double? p = r == 2 || c == 2 ? FisherTwoRowEnumeration.PValue(reduced) : FisherNetworkEnumeration.PValue(reduced);
         return p is null
             ? TestResult.NotEstimable(MethodName, "the table is too large for exact enumeration within the work limit")
             : new TestResult(MethodName, null, null, p.Value) { Notes = notes };

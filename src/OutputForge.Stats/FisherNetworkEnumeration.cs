@@ -1,4 +1,3 @@
-using System.Runtime.InteropServices;
 using MathNet.Numerics;
 
 namespace OutputForge.Stats;
@@ -33,8 +32,14 @@ internal sealed class FisherNetworkEnumeration
 {
     internal const long WorkLimit = 1_000_000_000;
     internal const double SplitLimit = 5_000_000;
+
+    /// <summary>
+    /// Tables whose <see cref="NetworkSizeBound"/> exceeds this are refused before any work, since the
+    /// exact bounds alone would need that many steps; it is ten times <see cref="WorkLimit"/> because
+    /// the margin-based count is an overestimate (it ignores that sorted row totals merge).
+    /// </summary>
+    internal const double NetworkSizeLimit = 1e10;
     private const double LogTolerance = 1e-7;
-    private const double MergeResolution = 1e10;
 
     private readonly int[] _columnTotals;
     private readonly double[] _logFactorial;
@@ -80,7 +85,7 @@ internal sealed class FisherNetworkEnumeration
         {
             // Splits of a column are listed one node at a time; a column with more than SplitLimit
             // possible splits makes the table too large before any such list is built.
-            if (columnTotals.Any(total => SplitCount(total, r) > SplitLimit))
+            if (columnTotals.Any(total => SplitCount(total, r) > SplitLimit) || NetworkSizeBound(rowTotals, columnTotals) > NetworkSizeLimit)
             {
                 return null;
             }
@@ -106,14 +111,14 @@ internal sealed class FisherNetworkEnumeration
         {
             return 0;
         }
-        var current = new Dictionary<NodeKey, Dictionary<long, double>> { [root] = new() { [0] = 1 } };
+        var current = new Dictionary<NodeKey, Dictionary<long, PastEntry>> { [root] = FisherPastValues.Start() };
         double pValue = 0;
         for (int stage = 0; stage < terminal; stage++)
         {
-            var next = new Dictionary<NodeKey, Dictionary<long, double>>();
+            var next = new Dictionary<NodeKey, Dictionary<long, PastEntry>>();
             foreach (var (node, paths) in current)
             {
-                var pasts = SortedPasts.Of(paths);
+                var pasts = FisherPastValues.Of(paths);
                 foreach (var allocation in Allocations(node.Totals, _columnTotals[stage]))
                 {
                     var (step, child) = Step(node, allocation);
@@ -133,13 +138,12 @@ internal sealed class FisherNetworkEnumeration
                     {
                         if (!next.TryGetValue(child, out var childPaths))
                         {
-                            childPaths = new Dictionary<long, double>();
+                            childPaths = new Dictionary<long, PastEntry>();
                             next[child] = childPaths;
                         }
                         for (int i = counted; i < carried; i++)
                         {
-                            long key = (long)Math.Round((pasts.Values[i] + step) * MergeResolution);
-                            CollectionsMarshal.GetValueRefOrAddDefault(childPaths, key, out _) += pasts.Counts[i];
+                            FisherPastValues.Add(childPaths, pasts.Values[i] + step, pasts.Counts[i]);
                         }
                         _work += carried - counted;
                     }
@@ -158,10 +162,9 @@ internal sealed class FisherNetworkEnumeration
         foreach (var (node, paths) in current)
         {
             var (values, logPrefix) = Completions(terminal, node);
-            foreach (var (key, count) in paths)
+            foreach (var (past, count) in paths.Values)
             {
-                double past = key / MergeResolution;
-                int included = UpperBound(values, threshold - past);
+                int included = FisherPastValues.UpperBound(values, threshold - past);
                 if (included > 0)
                 {
                     pValue += count * Math.Exp(constant + past + logPrefix[included]);
@@ -193,6 +196,29 @@ internal sealed class FisherNetworkEnumeration
 
     private int RowCount { get; set; }
 
+    /// <summary>
+    /// An upper bound, from the margins alone, on the number of (node, column split) pairs the exact
+    /// bounds must visit: per stage, the nodes (remaining row totals, each between what the columns
+    /// already placed and still to place allow) times the splits of the stage's column.
+    /// </summary>
+    internal static double NetworkSizeBound(int[] rowTotals, int[] columnTotals)
+    {
+        int n = rowTotals.Sum();
+        int r = rowTotals.Length;
+        double size = 0;
+        int placed = 0;
+        foreach (int column in columnTotals)
+        {
+            int left = n - placed;
+            var ranges = rowTotals.Select(total => (double)Math.Min(total, left) - Math.Max(0, total - placed) + 1).Order().Take(r - 1);
+            double nodes = Math.Min(ranges.Aggregate(1.0, (product, range) => product * range), SplitCount(left, r));
+            double splits = Math.Min(rowTotals.Select(total => (double)Math.Min(total, column) + 1).Order().Take(r - 1).Aggregate(1.0, (product, range) => product * range), SplitCount(column, r));
+            size += nodes * splits;
+            placed += column;
+        }
+        return size;
+    }
+
     /// <summary>Number of ways to split a total over r rows ignoring capacities: C(total + r - 1, r - 1).</summary>
     private static double SplitCount(int total, int rows) => SpecialFunctions.Binomial(total + rows - 1, rows - 1);
 
@@ -207,7 +233,7 @@ internal sealed class FisherNetworkEnumeration
         logPrefix[0] = double.NegativeInfinity;
         for (int k = 0; k < sorted.Length; k++)
         {
-            logPrefix[k + 1] = LogAdd(logPrefix[k], sorted[k]);
+            logPrefix[k + 1] = FisherPastValues.LogAdd(logPrefix[k], sorted[k]);
         }
         return (sorted, logPrefix);
 
@@ -237,36 +263,6 @@ internal sealed class FisherNetworkEnumeration
         }
     }
 
-    private static double LogAdd(double a, double b)
-        => double.IsNegativeInfinity(a) ? b : Math.Max(a, b) + Math.Log(1 + Math.Exp(-Math.Abs(a - b)));
-
-    /// <summary>The past values of a node in increasing order, their path counts, and running log-sums of count x exp(value).</summary>
-    private sealed class SortedPasts
-    {
-        public required double[] Values { get; init; }
-        public required double[] Counts { get; init; }
-        public required double[] LogPrefix { get; init; }
-
-        public static SortedPasts Of(Dictionary<long, double> paths)
-        {
-            var keys = paths.Keys.ToArray();
-            Array.Sort(keys);
-            var values = new double[keys.Length];
-            var counts = new double[keys.Length];
-            var logPrefix = new double[keys.Length + 1];
-            logPrefix[0] = double.NegativeInfinity;
-            for (int i = 0; i < keys.Length; i++)
-            {
-                values[i] = keys[i] / MergeResolution;
-                counts[i] = paths[keys[i]];
-                logPrefix[i + 1] = LogAdd(logPrefix[i], Math.Log(counts[i]) + values[i]);
-            }
-            return new SortedPasts { Values = values, Counts = counts, LogPrefix = logPrefix };
-        }
-
-        public int CountAtMost(double limit) => UpperBound(Values, limit);
-    }
-
     private (double Step, NodeKey Child) Step(NodeKey node, int[] allocation)
     {
         double step = 0;
@@ -277,25 +273,6 @@ internal sealed class FisherNetworkEnumeration
             remaining[i] = node.Totals[i] - allocation[i];
         }
         return (step, NodeKey.Of(remaining));
-    }
-
-    private static int UpperBound(double[] sorted, double limit)
-    {
-        int low = 0;
-        int high = sorted.Length;
-        while (low < high)
-        {
-            int mid = (low + high) >>> 1;
-            if (sorted[mid] <= limit)
-            {
-                low = mid + 1;
-            }
-            else
-            {
-                high = mid;
-            }
-        }
-        return low;
     }
 
     /// <summary>log of the sum over completions of exp(V): log N'! - sum log R'_i! - sum log C'_j!.</summary>

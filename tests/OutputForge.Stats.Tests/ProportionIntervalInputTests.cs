@@ -1,6 +1,6 @@
 namespace OutputForge.Stats.Tests;
 
-/// <summary>Edge cases and invalid input of <see cref="ProportionInterval"/> (behaviour specified in docs/statistics.md).</summary>
+/// <summary>Edge cases and invalid input of <see cref="ProportionInterval"/> (behaviour specified in docs/methods.md).</summary>
 public class ProportionIntervalInputTests
 {
     [Theory]

@@ -24,7 +24,28 @@ internal static class ReferenceOracles
         JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
             RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "ratio_strata_oracles.json"))));
 
+    private static readonly Lazy<JsonDocument> ConditionalOddsRatioDocument = new(() =>
+        JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
+            RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "conditional_odds_ratio_oracles.json"))));
+
+    private static readonly Lazy<JsonDocument> FisherLargeDocument = new(() =>
+        JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
+            RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "fisher_large_oracles.json"))));
+
+    private static readonly Lazy<JsonDocument> FisherRationalDocument = new(() =>
+        JsonDocument.Parse(File.ReadAllText(System.IO.Path.Combine(
+            RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "fisher_rational_oracles.json"))));
+
     public static JsonElement ProportionTable => ProportionTableDocument.Value.RootElement;
+
+    /// <summary>Exact rational p-values (Python 3.11 fractions) from Oracles/generate_fisher_rational_oracles.py.</summary>
+    public static IEnumerable<JsonElement> FisherRational => FisherRationalDocument.Value.RootElement.GetProperty("fisher_rational").EnumerateArray();
+
+    /// <summary>R 4.2.2 fisher.test values (or FEXACT's error) from Oracles/generate_fisher_large_oracles.R.</summary>
+    public static IEnumerable<JsonElement> FisherLarge => FisherLargeDocument.Value.RootElement.GetProperty("fisher_large").EnumerateArray();
+
+    /// <summary>R 4.2.2 fisher.test values from Oracles/generate_conditional_odds_ratio_oracles.R.</summary>
+    public static IEnumerable<JsonElement> ConditionalOddsRatio => ConditionalOddsRatioDocument.Value.RootElement.GetProperty("cases").EnumerateArray();
 
     /// <summary>statsmodels 0.13.5 / R 4.2.2 values from Oracles/generate_ratio_strata_oracles.py.</summary>
     public static JsonElement RatioStrata => RatioStrataDocument.Value.RootElement;

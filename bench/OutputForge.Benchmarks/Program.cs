@@ -1,0 +1,3 @@
+using BenchmarkDotNet.Running;
+
+BenchmarkSwitcher.FromAssembly(typeof(OutputForge.Benchmarks.FisherBenchmarks).Assembly).Run(args);
