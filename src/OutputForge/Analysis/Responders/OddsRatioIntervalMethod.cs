@@ -9,6 +9,9 @@ public enum OddsRatioIntervalMethod
 {
     /// <summary>Large-sample log interval: Woolf (1955) unstratified, Robins-Breslow-Greenland (1986) around the Mantel-Haenszel odds ratio when stratified.</summary>
     Woolf,
+
+    /// <summary>Conditional maximum-likelihood odds ratio with the exact (Cornfield 1956) interval; unstratified tables only.</summary>
+    Exact,
 }
 
 public static class OddsRatioIntervalMethods
@@ -16,6 +19,7 @@ public static class OddsRatioIntervalMethods
     public static OddsRatioIntervalMethod Parse(string name) => name switch
     {
         "woolf" => OddsRatioIntervalMethod.Woolf,
+        "exact" => OddsRatioIntervalMethod.Exact,
         _ => throw new ArgumentOutOfRangeException(nameof(name), name, "Unknown odds ratio interval; the table schema lists the names."),
     };
 
@@ -23,6 +27,7 @@ public static class OddsRatioIntervalMethods
     {
         (OddsRatioIntervalMethod.Woolf, false) => "Woolf (logit)",
         (OddsRatioIntervalMethod.Woolf, true) => "Robins-Breslow-Greenland",
+        (OddsRatioIntervalMethod.Exact, false) => "exact conditional (Cornfield)",
         _ => throw new ArgumentOutOfRangeException(nameof(method), method, "Unknown odds ratio interval."),
     };
 }

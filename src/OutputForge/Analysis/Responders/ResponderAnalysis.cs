@@ -132,6 +132,11 @@ public sealed class ResponderAnalysis : ITableAnalysis
         List<ResponderRatios> ratios;
         if (settings.Stratified is { } spec)
         {
+            if (oddsMethod == OddsRatioIntervalMethod.Exact)
+            {
+                throw new SpecException(table.Source.Problem("/responders/oddsRatioInterval",
+                    "the exact conditional interval is for an unstratified odds ratio; a stratified table reports the Mantel-Haenszel odds ratio: use \"woolf\" (Robins-Breslow-Greenland) or remove \"stratified\""));
+            }
             strata = ResponderStrata.Build(spec, selection, data, table.Source);
             var subjects = selection.ArmOfSubject
                 .Select(p => records.RowOfSubject.TryGetValue(p.Key, out var row)

@@ -16,11 +16,22 @@ public sealed record ResponderRatios(TreatmentArm Arm, IntervalResult? RelativeR
             withRelativeRisk ? Stats.RelativeRisk.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level) : null,
             withOddsRatio ? UnstratifiedOddsRatio(active, control, oddsRatioMethod, level) : null);
 
+    /// <summary>
+    /// An infinite conditional estimate (and upper limit), when every subject of the active arm responded or none of the
+    /// control did, has no number to print: the cell is NE with the reason, and the interval's own notes are kept.
+    /// </summary>
+    private static IntervalResult Displayable(IntervalResult exact) =>
+        exact.IsEstimable && (double.IsInfinity(exact.Estimate) || double.IsInfinity(exact.Upper))
+            ? IntervalResult.NotEstimable("the conditional maximum-likelihood odds ratio is infinite" +
+                (exact.Notes.Count > 0 ? " (" + string.Join("; ", exact.Notes) + ")" : string.Empty)) with { Notes = exact.Notes }
+            : exact;
+
     public static ResponderRatios Stratified(StratifiedComparison comparison) => new(comparison.Arm, comparison.RelativeRisk, comparison.OddsRatio);
 
     private static IntervalResult UnstratifiedOddsRatio(ResponderCounts active, ResponderCounts control, OddsRatioIntervalMethod method, double level) => method switch
     {
         OddsRatioIntervalMethod.Woolf => Stats.OddsRatio.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level),
+        OddsRatioIntervalMethod.Exact => Displayable(ExactConditionalOddsRatio.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level)),
         _ => throw new ArgumentOutOfRangeException(nameof(method), method, "Unknown odds ratio interval."),
     };
 }
