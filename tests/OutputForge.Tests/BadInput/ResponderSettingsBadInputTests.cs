@@ -18,7 +18,7 @@ public sealed class ResponderSettingsBadInputTests
         T("no strata", "{ \"stratified\": { \"strata\": [] } }", "$.responders.stratified.strata"),
         T("strata missing", "{ \"stratified\": { \"homogeneity\": true } }", "$.responders.stratified", "strata"),
         T("unknown ratio", "{ \"ratios\": [\"hazard-ratio\"] }", "$.responders.ratios[0]"),
-        T("unknown odds ratio interval", "{ \"ratios\": [\"odds-ratio\"], \"oddsRatioInterval\": \"exact\" }", "$.responders.oddsRatioInterval"),
+        T("unknown odds ratio interval", "{ \"ratios\": [\"odds-ratio\"], \"oddsRatioInterval\": \"cornfield\" }", "$.responders.oddsRatioInterval"),
         T("homogeneity is a text", "{ \"stratified\": { \"strata\": [\"AGE\"], \"homogeneity\": \"yes\" } }", "$.responders.stratified.homogeneity", "boolean"),
         T("unknown settings key", "{ \"strata\": [\"AGE\"] }", "$.responders"),
     };
