@@ -5,7 +5,7 @@ using System.Text.Json.Nodes;
 namespace OutputForge.Demo;
 
 /// <summary>
-/// The pooled study's spec set (specs/pooled): 60 tables of all seven kinds, made from the demo's own
+/// The pooled study's spec set (specs/pooled): 60 tables of all nine kinds, made from the demo's own
 /// table specs repeated across the weekly efficacy parameters, populations, visits and subgroups, with
 /// the demo's study spec listing them. Written beside specs/demo so the schema references still resolve.
 /// </summary>
@@ -70,7 +70,7 @@ public static class PooledSpecSet
             responders.Add(($"itch-responders-week12-itt-{subgroupSlugs[g]}", Subgroup(DemoTable("14.2.1.1-itch-responders-week12-itt.json"), "", Subgroups[g])));
         foreach (var p in weekly)
             responders.Add(($"{p.Code.ToLowerInvariant()}-responders-week12-itt", WeeklyResponders(p, 12)));
-        foreach (var p in weekly.Take(4))
+        foreach (var p in weekly.Take(1))
             responders.Add(($"{p.Code.ToLowerInvariant()}-responders-week4-itt", WeeklyResponders(p, 4)));
         Number(list, responders, "14.2.1");
 
@@ -96,6 +96,13 @@ public static class PooledSpecSet
             ("time-to-discontinuation-safety", Population(DemoTable("14.2.3.2-time-to-discontinuation-itt.json"), "", "safety", "Safety Population")),
             ("time-to-itch-response-itt-female", Subgroup(DemoTable("14.2.3.1-time-to-itch-response-itt.json"), "", Subgroups[0])),
         ], "14.2.3");
+
+        Number(list,
+        [
+            ("itch-impression-by-visit-itt", DemoTable("14.2.4.1-itch-impression-by-visit-itt.json")),
+            ("itch-impression-by-visit-locf-itt", DemoTable("14.2.4.2-itch-impression-by-visit-locf-itt.json")),
+        ], "14.2.4");
+        Number(list, [("itch-responders-week12-subgroups-itt", DemoTable("14.2.5.1-itch-responders-week12-subgroups-itt.json"))], "14.2.5");
 
         var severe = DemoTable("14.3.1.1-teae-soc-pt.json");
         severe["title"] = new JsonArray("Severe Treatment-Emergent Adverse Events by System Organ Class and Preferred Term");
