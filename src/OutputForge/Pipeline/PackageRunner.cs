@@ -156,19 +156,8 @@ public static class PackageRunner
         }
         var manifest = new ManifestTable(table.Id, inputs.ForTable(result.Provenance.SpecFile, result.Provenance.Datasets),
             outputNames, ManifestStaging.Timestamp(run.RunTime));
-        LaidOutTable laidOut;
-        try
-        {
-            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, groups: context.Groups);
-        }
-        catch (ColumnGroupException e)
-        {
-            throw new SpecException(study.Source.Problem(e.Where, $"table {table.Id}: {e.Message}"));
-        }
-        laidOut = laidOut with
-        {
-            Document = TableTemplates.Apply(context.Templates, laidOut.Document, TemplateValues.For(study, table, result, laidOut.Document, run)),
-        };
+        var laidOut = TableLayOut.Build(study, table, result, studyLine, run, page, NumberDisplay.Values, context.Templates,
+            document => TemplateValues.For(study, table, result, document, run));
         times.Lap("layout");
         var files = new List<(string, byte[])>();
         foreach (var renderer in request.Renderers)

@@ -20,17 +20,8 @@ public static class ShellBuilder
     {
         var records = ShellData.For(study, table);
         var result = TableAnalyses.For(table).Analyze(study, table, records.ToStudyData()) with { Warnings = [], Figure = null };
-        LaidOutTable laidOut;
-        try
-        {
-            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, NumberDisplay.Placeholders, OutputForge.Pipeline.PackageRunner.ColumnGroupsOf(study));
-        }
-        catch (ColumnGroupException e)
-        {
-            // The same located spec error as a run gives, not an internal fault.
-            throw new SpecException(study.Source.Problem(e.Where, $"table {table.Id}: {e.Message}"));
-        }
-        var document = TableTemplates.Apply(templates, laidOut.Document, ShellTemplateValues.For(study, table, result, laidOut.Document, run));
-        return (laidOut with { Document = document }, records.Assumptions);
+        var laidOut = Pipeline.TableLayOut.Build(study, table, result, studyLine, run, page, NumberDisplay.Placeholders, templates,
+            document => ShellTemplateValues.For(study, table, result, document, run));
+        return (laidOut, records.Assumptions);
     }
 }
