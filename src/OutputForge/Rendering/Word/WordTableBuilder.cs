@@ -48,9 +48,11 @@ public sealed class WordTableBuilder
         int headerCount = _document.HeaderRows.Count;
         for (int h = 0; h < headerCount; h++)
             table.AppendChild(HeaderRow(_document.HeaderRows[h], isFirst: h == 0, isLast: h == headerCount - 1));
+        var keepWithNext = WordBlockKeeping.KeepWithNext(_document.Rows);
         for (int r = 0; r < _document.Rows.Count; r++)
         {
-            table.AppendChild(BodyRow(_document.Rows[r], isFirst: r == 0, ruleAbove: r == 0 && headerCount == 0, ruleBelow: r == _document.Rows.Count - 1));
+            table.AppendChild(BodyRow(_document.Rows[r], isFirst: r == 0, ruleAbove: r == 0 && headerCount == 0, ruleBelow: r == _document.Rows.Count - 1,
+                keepWithNext[r]));
         }
         if (_document.Rows.Count == 0)
             table.AppendChild(EmptyClosingRow(ruleAbove: headerCount == 0));
@@ -100,14 +102,14 @@ public sealed class WordTableBuilder
         return row;
     }
 
-    private TableRow BodyRow(BodyRow body, bool isFirst, bool ruleAbove, bool ruleBelow)
+    private TableRow BodyRow(BodyRow body, bool isFirst, bool ruleAbove, bool ruleBelow, bool keepWithNext)
     {
         var row = new TableRow(new TableRowProperties(new CantSplit()));
         // A wrapped label continues two levels deeper than its first line (hanging indent): one
         // level deeper would put the continuation where the rows it introduces start.
         var labelProperties = new ParagraphProperties();
-        // A section label stays on the page of the first row it introduces.
-        if (body.Kind == RowKind.Section)
+        // A section label stays on the page of the first row it introduces, a short block stays whole (WordBlockKeeping).
+        if (keepWithNext)
             labelProperties.AppendChild(new KeepNext());
         labelProperties.Append(
             new Indentation
