@@ -22,6 +22,8 @@ public static class StatisticNames
     public const string EventCount = "events";
     public const string StandardError = "se";
     public const string StrataCount = "strata";
+    public const string GeometricMean = "geomean";
+    public const string CoefficientOfVariation = "cv";
 
     public static readonly IReadOnlyList<string> All =
     [
@@ -30,5 +32,6 @@ public static class StatisticNames
         EventCount,
         StandardError,
         StrataCount,
+        GeometricMean, CoefficientOfVariation,
     ];
 }

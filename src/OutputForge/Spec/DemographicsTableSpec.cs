@@ -69,4 +69,6 @@ public sealed class StatisticDecimalsSpec
     public int? Q3 { get; init; }
     public int? Min { get; init; }
     public int? Max { get; init; }
+    public int? Geomean { get; init; }
+    public int? Cv { get; init; }
 }

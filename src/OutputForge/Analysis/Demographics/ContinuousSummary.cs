@@ -83,13 +83,18 @@ public static class ContinuousSummary
             ThirdQuartile => summary.ThirdQuartile,
             Minimum => summary.Minimum,
             Maximum => summary.Maximum,
+            GeometricMean => summary.GeometricMean,
+            CoefficientOfVariation => summary.CoefficientOfVariationPercent,
             _ => null,
         };
         if (value is { } number)
         {
             return new StatisticValue(name, number, ValueFormat.Decimal, decimals);
         }
-        var reason = summary.N == 0 ? "no values" : "a single value has no standard deviation";
+        var reason = summary.N == 0 ? "no values"
+            : name == GeometricMean ? "the geometric mean needs positive values"
+            : name == CoefficientOfVariation && summary.N > 1 ? "the coefficient of variation needs a non-zero mean"
+            : "a single value has no standard deviation";
         return StatisticValue.NotEstimable(name, ValueFormat.Decimal, reason);
     }
 }

@@ -7,7 +7,8 @@ namespace OutputForge.Analysis.Demographics;
 
 /// <summary>
 /// Decimals of each descriptive statistic. The rule of the trade (common practice): mean, median and
-/// quartiles one decimal more than the data, SD two more, min and max as collected. The data's
+/// quartiles one decimal more than the data, SD two more, min and max as collected; the geometric mean
+/// as the mean, CV% with one decimal. The data's
 /// decimals are the spec's, or the most found among the values as written. A statistic's own
 /// setting in the spec (variable first, then table) overrides the rule.
 /// </summary>
@@ -47,6 +48,8 @@ public static class StatisticDecimals
             StatisticNames.ThirdQuartile => Pick(s => s.Q3) ?? dataDecimals + 1,
             StatisticNames.Minimum => Pick(s => s.Min) ?? dataDecimals,
             StatisticNames.Maximum => Pick(s => s.Max) ?? dataDecimals,
+            StatisticNames.GeometricMean => Pick(s => s.Geomean) ?? dataDecimals + 1,
+            StatisticNames.CoefficientOfVariation => Pick(s => s.Cv) ?? 1,
             _ => 0,
         };
     }

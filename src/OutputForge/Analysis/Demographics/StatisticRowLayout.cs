@@ -23,6 +23,8 @@ public sealed partial record StatisticRowLayout(string Text, string Pattern, str
         ["q3"] = (StatisticNames.ThirdQuartile, "Q3"),
         ["min"] = (StatisticNames.Minimum, "Min"),
         ["max"] = (StatisticNames.Maximum, "Max"),
+        ["geomean"] = (StatisticNames.GeometricMean, "Geometric mean"),
+        ["cv"] = (StatisticNames.CoefficientOfVariation, "CV%"),
     };
 
     [GeneratedRegex(@"[A-Za-z][A-Za-z0-9]*")]
