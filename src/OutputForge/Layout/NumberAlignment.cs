@@ -23,7 +23,8 @@ public static partial class NumberAlignment
 {
     public const char Pad = '\u00A0';
 
-    [GeneratedRegex(@"\d+")]
+    /// <summary>A number's integer digits, or a shell's placeholder digits ("x", "xx"), which align the same way.</summary>
+    [GeneratedRegex(@"\d+|\bx+\b")]
     private static partial Regex Digits();
 
     public static IReadOnlyList<BodyRow> Apply(IReadOnlyList<BodyRow> rows)
