@@ -1,5 +1,3 @@
-using System.Globalization;
-
 namespace OutputForge.Stats;
 
 /// <summary>
@@ -28,6 +26,7 @@ internal static class CentralMoments
         mean = 0;
         sumOfSquares = 0;
         var exact = new decimal[values.Count];
+        var convert = new RoundTripDecimal();
         for (int i = 0; i < values.Count; i++)
         {
             double x = values[i];
@@ -36,7 +35,7 @@ internal static class CentralMoments
             {
                 return false;
             }
-            exact[i] = decimal.Parse(x.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
+            exact[i] = convert.Of(x);
         }
         try
         {
