@@ -52,7 +52,7 @@ public static class DescriptiveStatistics
         double? geometric = null;
         if (sorted[0] > 0)
         {
-            var (logMean, _) = CentralMoments.Compute(values.Select(v => Math.Log(v)).ToArray());
+            var logMean = CentralMoments.Mean(values.Select(v => Math.Log(v)).ToArray());
             geometric = Math.Exp(logMean);
         }
         else
