@@ -1,5 +1,3 @@
-using System.Globalization;
-
 namespace OutputForge.Stats;
 
 /// <summary>
@@ -22,12 +20,27 @@ internal static class CentralMoments
         return TryExact(values, out decimal mean, out decimal squares) ? ((double)mean, (double)squares) : TwoPass(values);
     }
 
-    /// <summary>The decimal mean and sum of squares, or false when the values do not suit decimal arithmetic.</summary>
-    public static bool TryExact(IReadOnlyList<double> values, out decimal mean, out decimal sumOfSquares)
+    /// <summary>
+    /// The mean alone, the same value as <see cref="Compute"/> gives. Where the decimal sums apply, the
+    /// sum of squares of <see cref="TryExact"/> is skipped: it cannot overflow (and so cannot send
+    /// <see cref="Compute"/> to the two-pass fallback) when n times the largest squared deviation stays
+    /// below 1e28, under the decimal maximum of 7.9e28; otherwise <see cref="Compute"/> decides. Squaring
+    /// deviations of 17 significant digits (logarithms, say) is the slow part of the decimal sums.
+    /// </summary>
+    public static double Mean(IReadOnlyList<double> values)
+    {
+        if (values.Count == 0)
+        {
+            throw new ArgumentException("At least one value is needed.", nameof(values));
+        }
+        return TryExactMean(values, out decimal mean) ? (double)mean : Compute(values).Mean;
+    }
+
+    private static bool TryExactMean(IReadOnlyList<double> values, out decimal mean)
     {
         mean = 0;
-        sumOfSquares = 0;
         var exact = new decimal[values.Count];
+        var convert = new RoundTripDecimal();
         for (int i = 0; i < values.Count; i++)
         {
             double x = values[i];
@@ -36,7 +49,46 @@ internal static class CentralMoments
             {
                 return false;
             }
-            exact[i] = decimal.Parse(x.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
+            exact[i] = convert.Of(x);
+        }
+        decimal largest = 0;
+        try
+        {
+            decimal sum = 0;
+            foreach (decimal x in exact)
+            {
+                sum += x;
+            }
+            mean = sum / exact.Length;
+            foreach (decimal x in exact)
+            {
+                largest = Math.Max(largest, Math.Abs(x - mean));
+            }
+        }
+        catch (OverflowException)
+        {
+            return false;
+        }
+        double bound = (double)largest;
+        return bound * bound * exact.Length < 1e28;
+    }
+
+    /// <summary>The decimal mean and sum of squares, or false when the values do not suit decimal arithmetic.</summary>
+    public static bool TryExact(IReadOnlyList<double> values, out decimal mean, out decimal sumOfSquares)
+    {
+        mean = 0;
+        sumOfSquares = 0;
+        var exact = new decimal[values.Count];
+        var convert = new RoundTripDecimal();
+        for (int i = 0; i < values.Count; i++)
+        {
+            double x = values[i];
+            double magnitude = Math.Abs(x);
+            if (magnitude > 1e15 || (x != 0 && magnitude < 1e-8))
+            {
+                return false;
+            }
+            exact[i] = convert.Of(x);
         }
         try
         {

@@ -45,14 +45,14 @@ public static class DescriptiveStatistics
         {
             notes.Add("The standard deviation needs at least two values.");
         }
-        var sorted = values.OrderBy(v => v).ToArray();
+        var sorted = SortedSample.Of(values);
         double median = n % 2 == 1 ? sorted[n / 2] : Midpoint(sorted[n / 2 - 1], sorted[n / 2]);
         double q1 = SortedArrayStatistics.QuantileCustom(sorted, 0.25, quartileDefinition);
         double q3 = SortedArrayStatistics.QuantileCustom(sorted, 0.75, quartileDefinition);
         double? geometric = null;
         if (sorted[0] > 0)
         {
-            var (logMean, _) = CentralMoments.Compute(values.Select(v => Math.Log(v)).ToArray());
+            var logMean = CentralMoments.Mean(values.Select(v => Math.Log(v)).ToArray());
             geometric = Math.Exp(logMean);
         }
         else

@@ -1,4 +1,3 @@
-using System.Globalization;
 using MathNet.Numerics.Statistics;
 
 namespace OutputForge.Stats;
@@ -25,8 +24,36 @@ public static class ExactQuantiles
         {
             throw new ArgumentException("The sample is empty.", nameof(values));
         }
-        var sorted = values.Order().ToArray();
+        var sorted = SortedSample.Of(values);
         if ((definition == QuantileDefinition.R2 || definition == QuantileDefinition.R7) && TryDecimals(sorted, out var exact))
+        {
+            return (double)(definition == QuantileDefinition.R2 ? Type2(exact, p) : Type7(exact, p));
+        }
+        return SortedArrayStatistics.QuantileCustom(sorted, (double)p, definition);
+    }
+
+    /// <summary>
+    /// The median and the quartiles at 0.25 and 0.75 under <paramref name="definition"/> of a non-empty
+    /// sample, the same values as <see cref="Median"/> and <see cref="Quantile"/> give, from one sort and
+    /// one decimal conversion of the sample.
+    /// </summary>
+    public static (double Median, double FirstQuartile, double ThirdQuartile) Quartiles(IReadOnlyList<double> values, QuantileDefinition definition)
+    {
+        ArgumentNullException.ThrowIfNull(values);
+        if (values.Count == 0)
+        {
+            throw new ArgumentException("The sample is empty.", nameof(values));
+        }
+        var sorted = SortedSample.Of(values);
+        var exact = TryDecimals(sorted, out var decimals) ? decimals : null;
+        return (FromSorted(sorted, exact, 0.5m, QuantileDefinition.R2),
+            FromSorted(sorted, exact, 0.25m, definition),
+            FromSorted(sorted, exact, 0.75m, definition));
+    }
+
+    private static double FromSorted(double[] sorted, decimal[]? exact, decimal p, QuantileDefinition definition)
+    {
+        if ((definition == QuantileDefinition.R2 || definition == QuantileDefinition.R7) && exact is not null)
         {
             return (double)(definition == QuantileDefinition.R2 ? Type2(exact, p) : Type7(exact, p));
         }
@@ -58,6 +85,7 @@ public static class ExactQuantiles
     private static bool TryDecimals(double[] sorted, out decimal[] exact)
     {
         exact = new decimal[sorted.Length];
+        var convert = new RoundTripDecimal();
         for (int i = 0; i < sorted.Length; i++)
         {
             double value = sorted[i];
@@ -65,7 +93,7 @@ public static class ExactQuantiles
             {
                 return false;
             }
-            exact[i] = decimal.Parse(value.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture);
+            exact[i] = convert.Of(value);
         }
         return true;
     }

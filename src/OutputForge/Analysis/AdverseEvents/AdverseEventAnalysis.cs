@@ -177,7 +177,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
 
         public IEnumerable<ResultRow> Rows(string key, string label, int indent, IReadOnlyCollection<AdverseEventRecord> records)
         {
-            var counts = columns.ToDictionary(c => c.Key, c => AdverseEventCounts.Of(records, c, severities.Count));
+            var counts = AdverseEventCounts.OfColumns(records, columns, severities.Count);
             var cells = columns.Select(c => CountCells.CountPercent(c.Key, counts[c.Key].Subjects, c.N, settings.Percent,
                 settings.Events ? counts[c.Key].Events : null)).ToList();
             foreach (var arm in active)

@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using OutputForge.Analysis.Summaries;
 
 namespace OutputForge.Analysis.AdverseEvents;
@@ -18,5 +19,38 @@ public sealed record AdverseEventCounts(int Subjects, int Events, IReadOnlyList<
             maximum.Count,
             inColumn.Count,
             Enumerable.Range(0, levels).Select(level => maximum.Count(m => m == level)).ToList());
+    }
+
+    /// <summary>
+    /// The counts of one row in every column, keyed by column, from one pass over the row's records: the
+    /// same counts as <see cref="Of"/> per column, since a subject's records all carry the subject's arm.
+    /// </summary>
+    public static Dictionary<string, AdverseEventCounts> OfColumns(IEnumerable<AdverseEventRecord> records, IReadOnlyList<SummaryColumn> columns, int severityLevels)
+    {
+        var maximumOfSubject = new Dictionary<string, (TreatmentArm Arm, int Rank)>(StringComparer.Ordinal);
+        var eventsOfArm = new Dictionary<TreatmentArm, int>();
+        foreach (var record in records)
+        {
+            ref var events = ref CollectionsMarshal.GetValueRefOrAddDefault(eventsOfArm, record.Arm, out _);
+            events++;
+            ref var maximum = ref CollectionsMarshal.GetValueRefOrAddDefault(maximumOfSubject, record.Subject, out var seen);
+            maximum = seen ? (maximum.Arm, Math.Max(maximum.Rank, record.SeverityRank)) : (record.Arm, record.SeverityRank);
+        }
+        var levels = Math.Max(1, severityLevels);
+        var counts = new Dictionary<string, AdverseEventCounts>();
+        foreach (var column in columns)
+        {
+            var subjects = 0;
+            var atLevel = new int[levels];
+            foreach (var (arm, rank) in maximumOfSubject.Values)
+            {
+                if (!column.Holds(arm)) continue;
+                subjects++;
+                if (rank >= 0 && rank < levels) atLevel[rank]++;
+            }
+            var eventCount = eventsOfArm.Where(p => column.Holds(p.Key)).Sum(p => p.Value);
+            counts.Add(column.Key, new AdverseEventCounts(subjects, eventCount, atLevel.ToList()));
+        }
+        return counts;
     }
 }

@@ -61,9 +61,18 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
                 .Select(s => (Subject: s.Key, Arm: s.Value, Response: ofVisit[s.Key]))
                 .OrderBy(s => s.Subject, StringComparer.Ordinal)
                 .ToList();
-            var n = selection.Arms.ToDictionary(a => a, a => answered.Count(s => s.Arm == a));
-            var counts = selection.Arms.ToDictionary(a => a, a => Enumerable.Range(0, categories.Count)
-                .Select(j => answered.Count(s => s.Arm == a && s.Response.Category == j)).ToArray());
+            // One pass over the answers counts every arm and category.
+            var n = selection.Arms.ToDictionary(a => a, _ => 0);
+            var counts = selection.Arms.ToDictionary(a => a, _ => new int[categories.Count]);
+            foreach (var answer in answered)
+            {
+                if (!n.ContainsKey(answer.Arm)) continue;
+                n[answer.Arm]++;
+                if (answer.Response.Category < categories.Count)
+                {
+                    counts[answer.Arm][answer.Response.Category]++;
+                }
+            }
             var imputed = answered.Count(s => s.Response.Imputed);
             if (settings.Imputation is not null)
             {

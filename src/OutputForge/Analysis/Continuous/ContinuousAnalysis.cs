@@ -54,11 +54,7 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         {
             var visitKey = ResultKeys.FromLabel(visit);
             var rowOfSubject = records.RowOfSubject(visit);
-            var subjectsOf = selection.Arms.ToDictionary(a => a, a => selection.ArmOfSubject
-                .Where(s => s.Value == a && rowOfSubject.ContainsKey(s.Key))
-                .Select(s => (Subject: s.Key, Row: rowOfSubject[s.Key]))
-                .OrderBy(s => s.Row)
-                .ToList());
+            var subjectsOf = SubjectsByArm(selection, rowOfSubject);
             rows.Add(Section(visitKey, visit, columns));
             if (baseline is not null)
             {
@@ -111,6 +107,25 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         warnings.AddRange(NotEstimableWarnings(rows));
         return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
             new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), statistics.PercentDecimals, statistics.PValueFloor);
+    }
+
+    /// <summary>The subjects of each arm with a record at the visit, in record order, from one pass over the population.</summary>
+    private static Dictionary<TreatmentArm, List<(string Subject, int Row)>> SubjectsByArm(PopulationSelection selection, IReadOnlyDictionary<string, int> rowOfSubject)
+    {
+        var subjectsOf = selection.Arms.ToDictionary(a => a, _ => new List<(string Subject, int Row)>());
+        foreach (var (subject, arm) in selection.ArmOfSubject)
+        {
+            if (rowOfSubject.TryGetValue(subject, out var row) && subjectsOf.TryGetValue(arm, out var subjects))
+            {
+                subjects.Add((subject, row));
+            }
+        }
+        // Each subject has its own record, so the rows are distinct and the order is that of the records.
+        foreach (var subjects in subjectsOf.Values)
+        {
+            subjects.Sort((a, b) => a.Row.CompareTo(b.Row));
+        }
+        return subjectsOf;
     }
 
     private static RecordVariable Numeric(RecordVariable variable, SpecSource source, string pointer, string hint) =>

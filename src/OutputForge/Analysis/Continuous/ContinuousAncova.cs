@@ -25,11 +25,16 @@ internal sealed class ContinuousAncova
         IReadOnlyList<RecordVariable> covariates, IReadOnlyList<RecordVariable> factors, RecordVariable? dose,
         IReadOnlyList<(TreatmentArm First, TreatmentArm Second)> pairs, double level)
     {
-        var observations = candidates.Where(o =>
-                covariates.All(c => double.IsFinite(c.Number(o.Row, o.Subject)))
-                && factors.All(f => f.Text(o.Row, o.Subject) is not null)
-                && (dose is null || double.IsFinite(dose.Number(o.Row, o.Subject))))
+        // Each model variable is read once per candidate (an ADSL variable costs a lookup by subject).
+        var covariateValues = covariates.Select(c => candidates.Select(o => c.Number(o.Row, o.Subject)).ToArray()).ToList();
+        var factorValues = factors.Select(f => candidates.Select(o => f.Text(o.Row, o.Subject)).ToArray()).ToList();
+        var doseValues = dose is null ? null : candidates.Select(o => dose.Number(o.Row, o.Subject)).ToArray();
+        var kept = Enumerable.Range(0, candidates.Count).Where(i =>
+                covariateValues.All(v => double.IsFinite(v[i]))
+                && factorValues.All(v => v[i] is not null)
+                && (doseValues is null || double.IsFinite(doseValues[i])))
             .ToList();
+        var observations = kept.Select(i => candidates[i]).ToList();
         var counts = arms.ToDictionary(a => a, a => observations.Count(o => o.Arm == a));
         var control = arms.First(a => a.IsControl);
         // Control first, so that reference coding makes the control the reference level.
@@ -50,9 +55,9 @@ internal sealed class ContinuousAncova
         }
         var treatment = new LinearModelFactor("treatment", fitted.Select(a => a.Value).ToList(),
             observations.Select(o => fitted.IndexOf(o.Arm)).ToList());
-        var covariateColumns = covariates.Select(c => new LinearModelCovariate(c.Name,
-            observations.Select(o => c.Number(o.Row, o.Subject)).ToList())).ToList();
-        var factorColumns = factors.Select(f => Factor(f, observations)).ToList();
+        var covariateColumns = covariates.Select((c, k) => new LinearModelCovariate(c.Name,
+            kept.Select(i => covariateValues[k][i]).ToList())).ToList();
+        var factorColumns = factors.Select((f, k) => Factor(f.Name, kept.Select(i => factorValues[k][i]!).ToList())).ToList();
         var response = observations.Select(o => o.Response).ToList();
         var fit = LinearModel.Fit(response, LinearModelDesign.Build(observations.Count, covariateColumns, [treatment, .. factorColumns]));
         if (!fit.IsEstimable)
@@ -68,7 +73,7 @@ internal sealed class ContinuousAncova
         string? doseReason = null;
         if (dose is not null)
         {
-            var doseColumn = new LinearModelCovariate(dose.Name, observations.Select(o => dose.Number(o.Row, o.Subject)).ToList());
+            var doseColumn = new LinearModelCovariate(dose.Name, kept.Select(i => doseValues![i]).ToList());
             var doseFit = LinearModel.Fit(response, LinearModelDesign.Build(observations.Count, [doseColumn, .. covariateColumns], factorColumns));
             if (doseFit.IsEstimable)
             {
@@ -91,10 +96,9 @@ internal sealed class ContinuousAncova
     }
 
     /// <summary>A class covariate with its observed levels in ordinal order (the first is the reference).</summary>
-    private static LinearModelFactor Factor(RecordVariable variable, IReadOnlyList<ModelObservation> observations)
+    private static LinearModelFactor Factor(string name, List<string> values)
     {
-        var values = observations.Select(o => variable.Text(o.Row, o.Subject)!).ToList();
         var levels = values.Distinct().Order(StringComparer.Ordinal).ToList();
-        return new LinearModelFactor(variable.Name, levels, values.Select(v => levels.IndexOf(v)).ToList());
+        return new LinearModelFactor(name, levels, values.Select(v => levels.IndexOf(v)).ToList());
     }
 }

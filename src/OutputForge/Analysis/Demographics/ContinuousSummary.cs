@@ -58,14 +58,12 @@ public static class ContinuousSummary
     private static DescriptiveSummary Summarize(List<double> values, QuantileDefinition quantiles)
     {
         var summary = DescriptiveStatistics.Compute(values, quantiles);
-        return values.Count == 0
-            ? summary
-            : summary with
-            {
-                Median = ExactQuantiles.Median(values),
-                FirstQuartile = ExactQuantiles.Quantile(values, 0.25m, quantiles),
-                ThirdQuartile = ExactQuantiles.Quantile(values, 0.75m, quantiles),
-            };
+        if (values.Count == 0)
+        {
+            return summary;
+        }
+        var (median, firstQuartile, thirdQuartile) = ExactQuantiles.Quartiles(values, quantiles);
+        return summary with { Median = median, FirstQuartile = firstQuartile, ThirdQuartile = thirdQuartile };
     }
 
     private static StatisticValue Value(string name, DescriptiveSummary summary, int decimals)

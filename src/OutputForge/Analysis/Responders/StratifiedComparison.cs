@@ -27,11 +27,31 @@ public sealed partial record StratifiedComparison(
         var notes = new List<string>();
         var used = new List<StratumCounts>();
         var usedNames = new List<string>();
+        // One pass sorts the two arms' subjects into their strata, rather than one scan of all subjects per stratum.
+        var ofStratum = new Dictionary<string, (List<ResponderSubject> Active, List<ResponderSubject> Reference)>(StringComparer.Ordinal);
         foreach (var stratum in strata.Levels)
         {
-            var own = subjects.Where(s => s.InDenominator && strata.StratumOfSubject.TryGetValue(s.Subject, out var v) && v == stratum).ToList();
-            var active = own.Where(s => s.Arm == arm).ToList();
-            var reference = own.Where(s => s.Arm == control).ToList();
+            ofStratum.TryAdd(stratum, ([], []));
+        }
+        foreach (var subject in subjects)
+        {
+            if (!subject.InDenominator || !strata.StratumOfSubject.TryGetValue(subject.Subject, out var value)
+                || !ofStratum.TryGetValue(value, out var lists))
+            {
+                continue;
+            }
+            if (subject.Arm == arm)
+            {
+                lists.Active.Add(subject);
+            }
+            if (subject.Arm == control)
+            {
+                lists.Reference.Add(subject);
+            }
+        }
+        foreach (var stratum in strata.Levels)
+        {
+            var (active, reference) = ofStratum[stratum];
             if (active.Count == 0 || reference.Count == 0)
             {
                 var count = active.Count + reference.Count;

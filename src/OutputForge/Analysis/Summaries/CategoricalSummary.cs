@@ -24,12 +24,25 @@ public static class CategoricalSummary
         var warnings = new List<string>();
         var levels = LevelOrder.Arrange(request, adsl, counted.Select(s => s.Row).ToList(), variable, source, warnings);
 
+        // One pass sorts the counted subjects by their value (in subject order), rather than one scan per level.
+        var byValue = new Dictionary<string, List<(int Row, TreatmentArm Arm)>>(StringComparer.Ordinal);
+        foreach (var subject in counted)
+        {
+            if (variable.GetText(subject.Row) is not { } text) continue;
+            if (!byValue.TryGetValue(text, out var withValue))
+            {
+                withValue = [];
+                byValue[text] = withValue;
+            }
+            withValue.Add(subject);
+        }
+
         var rows = new List<ResultRow>();
         var table = new int[levels.Count, arms.Count];
         for (var i = 0; i < levels.Count; i++)
         {
             var value = levels[i].Value;
-            var inLevel = counted.Where(s => variable.GetText(s.Row) == value).ToList();
+            var inLevel = value is null ? counted.Where(s => variable.GetText(s.Row) is null).ToList() : byValue.GetValueOrDefault(value) ?? [];
             for (var j = 0; j < arms.Count; j++)
             {
                 table[i, j] = inLevel.Count(s => s.Arm == arms[j]);
