@@ -1,5 +1,3 @@
-using MathNet.Numerics;
-
 namespace OutputForge.Stats;
 
 /// <summary>
@@ -13,16 +11,12 @@ public static class LikelihoodRatioChiSquareTest
 {
     public const string MethodName = "Likelihood-ratio chi-square test";
 
-    public static TestResult Compute(int[,] table)
+    public static TestResult Compute(int[,] table) => ChiSquareTableTest.Compute(table, MethodName, Statistic);
+
+    private static double Statistic(int[,] reduced)
     {
-        TableMargins.Validate(table);
-        var (reduced, notes) = TableMargins.DropEmptyLines(table);
         int r = reduced.GetLength(0);
         int c = reduced.GetLength(1);
-        if (r < 2 || c < 2)
-        {
-            return TestResult.NotEstimable(MethodName, PearsonChiSquareTest.NotEstimableReason(table, r, c));
-        }
         long[] rows = TableMargins.RowTotals(reduced);
         long[] columns = TableMargins.ColumnTotals(reduced);
         double n = rows.Sum();
@@ -38,13 +32,6 @@ public static class LikelihoodRatioChiSquareTest
                 }
             }
         }
-        statistic = Math.Max(0, statistic);
-        int df = (r - 1) * (c - 1);
-        double p = SpecialFunctions.GammaUpperRegularized(df / 2.0, statistic / 2.0);
-        if (SmallExpectedCountNote.For(reduced) is { } warning)
-        {
-            notes.Add(warning);
-        }
-        return new TestResult(MethodName, statistic, df, p) { Notes = notes };
+        return Math.Max(0, statistic);
     }
 }

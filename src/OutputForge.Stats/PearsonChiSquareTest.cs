@@ -15,25 +15,7 @@ public static class PearsonChiSquareTest
 {
     public const string MethodName = "Pearson's chi-square test";
 
-    public static TestResult Compute(int[,] table)
-    {
-        TableMargins.Validate(table);
-        var (reduced, notes) = TableMargins.DropEmptyLines(table);
-        int r = reduced.GetLength(0);
-        int c = reduced.GetLength(1);
-        if (r < 2 || c < 2)
-        {
-            return TestResult.NotEstimable(MethodName, NotEstimableReason(table, r, c));
-        }
-        double statistic = Statistic(reduced);
-        int df = (r - 1) * (c - 1);
-        double p = SpecialFunctions.GammaUpperRegularized(df / 2.0, statistic / 2.0);
-        if (SmallExpectedCountNote.For(reduced) is { } warning)
-        {
-            notes.Add(warning);
-        }
-        return new TestResult(MethodName, statistic, df, p) { Notes = notes };
-    }
+    public static TestResult Compute(int[,] table) => ChiSquareTableTest.Compute(table, MethodName, Statistic);
 
     internal static double Statistic(int[,] table)
     {
