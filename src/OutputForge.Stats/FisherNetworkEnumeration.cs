@@ -5,7 +5,7 @@ namespace OutputForge.Stats;
 /// <summary>
 /// Two-sided p-value of Fisher's exact test for an r x c table by the network algorithm of Mehta and
 /// Patel (1983), JASA 78:427-434 (also Mehta and Patel 1986, ACM TOMS 12:154-161, the FEXACT code
-/// used by R's fisher.test).
+/// used by R's fisher.test), run from both ends and joined in the middle.
 /// <para>
 /// With fixed margins, P(table) = exp(K + V) where K = sum log R_i! + sum log C_j! - log N! and
 /// V = -sum log n_ij!. The table is built column by column; a node of the network is the stage (how
@@ -17,15 +17,26 @@ namespace OutputForge.Stats;
 /// its completions are no more probable than the observed table), dropped when P + smallest
 /// completion exceeds it, and extended only otherwise. The past values of a node are kept sorted with
 /// running log-sums, so that the counted and dropped ones are found by binary search and only the
-/// undecided ones are carried; the last two or three columns are not enumerated path by path: the
-/// completions of each node are listed once, sorted, and every past value is settled by binary search.
+/// undecided ones are carried.
+/// </para>
+/// <para>
+/// The forward pass stops at a meeting stage two or three columns before the end
+/// (<see cref="MeetingStage"/>). The last columns are then run backwards (<see cref="FisherBackwardPass"/>):
+/// from the end, each node collects the distinct values of its completions, and a completion value is
+/// counted whole or dropped against the largest and smallest past value (and the total mass) of the
+/// undecided partial tables that can reach it, which are propagated forward from the meeting stage. At
+/// the meeting stage a node's sorted past values and sorted completion values are joined with one
+/// merge-like sweep (the pairs with past + completion at most the threshold), instead of one search
+/// per past value. Every table is decided exactly once, in one of the two passes or at the join.
 /// </para>
 /// <para>
 /// "No more probable" allows a tolerance of 1e-7 on the log scale, the relative tolerance R's
-/// fisher.test applies to 2 x 2 tables (FEXACT uses 3.45e-7); past values that agree to 1e-10 are
-/// merged. The work is bounded: beyond <see cref="WorkLimit"/> steps, or when one column could be split
-/// over the rows in more than <see cref="SplitLimit"/> ways, the enumeration stops and reports that the
-/// table is too large rather than running on (or approximating).
+/// fisher.test applies to 2 x 2 tables (FEXACT uses 3.45e-7); values that agree to 1e-10 are
+/// merged. Nodes of one stage are processed in parallel and their sums added in a fixed order, so the
+/// result does not depend on the number of threads. The work is bounded: beyond <see cref="WorkLimit"/>
+/// steps, or when one column could be split over the rows in more than <see cref="SplitLimit"/> ways,
+/// the enumeration stops and reports that the table is too large rather than running on (or
+/// approximating).
 /// </para>
 /// </summary>
 internal sealed class FisherNetworkEnumeration
@@ -43,7 +54,7 @@ internal sealed class FisherNetworkEnumeration
 
     private readonly int[] _columnTotals;
     private readonly double[] _logFactorial;
-    private readonly Dictionary<NodeKey, (double Max, double Min)>[] _bounds;
+    private readonly Dictionary<FisherNodeKey, (double Max, double Min)>[] _bounds;
     private long _work;
 
     private FisherNetworkEnumeration(int[] columnTotals, int n)
@@ -54,7 +65,7 @@ internal sealed class FisherNetworkEnumeration
         {
             _logFactorial[k] = SpecialFunctions.FactorialLn(k);
         }
-        _bounds = Enumerable.Range(0, columnTotals.Length).Select(_ => new Dictionary<NodeKey, (double, double)>()).ToArray();
+        _bounds = Enumerable.Range(0, columnTotals.Length).Select(_ => new Dictionary<FisherNodeKey, (double, double)>()).ToArray();
     }
 
     /// <summary>The p-value, or null when the work limit was reached.</summary>
@@ -99,9 +110,9 @@ internal sealed class FisherNetworkEnumeration
 
     private double? Enumerate(int[] rowTotals, double threshold, double constant)
     {
-        int stages = _columnTotals.Length;
-        int terminal = TerminalStage();
-        var root = NodeKey.Of(rowTotals);
+        var root = FisherNodeKey.Of((int[])rowTotals.Clone());
+        // The bounds of the root visit every node the network can reach, so that afterwards they are
+        // only read, also from the parallel loops below.
         var (rootMax, rootMin) = Bounds(0, root);
         if (rootMax <= threshold)
         {
@@ -111,90 +122,138 @@ internal sealed class FisherNetworkEnumeration
         {
             return 0;
         }
-        var current = new Dictionary<NodeKey, Dictionary<long, PastEntry>> { [root] = FisherPastValues.Start() };
+        int meet = MeetingStage();
+        var nodes = new List<FisherNodeKey> { root };
+        var pasts = new List<FisherPastValues> { FisherPastValues.Start() };
         double pValue = 0;
-        for (int stage = 0; stage < terminal; stage++)
+        for (int stage = 0; stage < meet && nodes.Count > 0; stage++)
         {
-            var next = new Dictionary<NodeKey, Dictionary<long, PastEntry>>();
-            foreach (var (node, paths) in current)
-            {
-                var pasts = FisherPastValues.Of(paths);
-                foreach (var allocation in Allocations(node.Totals, _columnTotals[stage]))
-                {
-                    var (step, child) = Step(node, allocation);
-                    var (maxFuture, minFuture) = Bounds(stage + 1, child);
-                    // Past values up to `whole` complete only into tables no more probable than the
-                    // observed one: their total is added at once. Those above `open` can never
-                    // qualify. Only the ones in between are carried to the child node.
-                    double whole = threshold - step - maxFuture;
-                    double open = threshold - step - minFuture;
-                    int counted = pasts.CountAtMost(whole);
-                    if (counted > 0)
-                    {
-                        pValue += Math.Exp(constant + step + LogCompletionCount(stage + 1, child.Totals) + pasts.LogPrefix[counted]);
-                    }
-                    int carried = pasts.CountAtMost(open);
-                    if (carried > counted)
-                    {
-                        if (!next.TryGetValue(child, out var childPaths))
-                        {
-                            childPaths = new Dictionary<long, PastEntry>();
-                            next[child] = childPaths;
-                        }
-                        for (int i = counted; i < carried; i++)
-                        {
-                            FisherPastValues.Add(childPaths, pasts.Values[i] + step, pasts.Counts[i]);
-                        }
-                        _work += carried - counted;
-                    }
-                    _work++;
-                    if (_work > WorkLimit)
-                    {
-                        return null;
-                    }
-                }
-            }
-            current = next;
-        }
-
-        // The remaining columns are few enough that every completion of a node can be listed: with the
-        // completion values sorted and their running log-sums, each past path is settled by binary search.
-        foreach (var (node, paths) in current)
-        {
-            var (values, logPrefix) = Completions(terminal, node);
-            foreach (var (past, count) in paths.Values)
-            {
-                int included = FisherPastValues.UpperBound(values, threshold - past);
-                if (included > 0)
-                {
-                    pValue += count * Math.Exp(constant + past + logPrefix[included]);
-                }
-            }
-            _work += paths.Count + values.Length;
-            if (_work > WorkLimit)
+            var (counted, childNodes, childPasts) = ForwardStage(stage, nodes, pasts, threshold, constant);
+            if (childNodes is null)
             {
                 return null;
             }
+            pValue += counted;
+            nodes = childNodes;
+            pasts = childPasts!;
         }
-        return Math.Min(1, pValue);
+        if (nodes.Count == 0)
+        {
+            return Math.Min(1, pValue);
+        }
+        double? joined = new FisherBackwardPass(this, meet, threshold, constant).Settle(nodes, pasts);
+        return joined is null ? null : Math.Min(1, pValue + joined.Value);
     }
 
     /// <summary>
-    /// The stage from which completions are listed outright: the last three columns when their free
-    /// splits number at most a million (the last column is forced), otherwise the last two.
+    /// One column of the forward pass: every node's past values are split, per way of filling the
+    /// column, into those counted whole, those dropped and those carried to the child node. Returns the
+    /// probability counted whole and the child nodes with their past values (null when the work limit
+    /// is passed).
     /// </summary>
-    private int TerminalStage()
+    private (double Counted, List<FisherNodeKey>? Nodes, List<FisherPastValues>? Pasts) ForwardStage(
+        int stage, List<FisherNodeKey> nodes, List<FisherPastValues> pasts, double threshold, double constant)
+    {
+        var counted = new double[nodes.Count];
+        var carries = new List<Carry>[nodes.Count];
+        Parallel.For(0, nodes.Count, p =>
+        {
+            var own = pasts[p];
+            var list = new List<Carry>();
+            double sum = 0;
+            foreach (var (step, child) in Moves(nodes[p], stage))
+            {
+                var (maxFuture, minFuture) = Bounds(stage + 1, child);
+                // Past values up to `whole` complete only into tables no more probable than the
+                // observed one: their total is added at once. Those above `open` can never qualify.
+                // Only the ones in between are carried to the child node.
+                int whole = own.CountAtMost(threshold - step - maxFuture);
+                int open = own.CountAtMost(threshold - step - minFuture);
+                if (whole > 0)
+                {
+                    sum += Math.Exp(constant + step + LogCompletionCount(stage + 1, child.Totals) + own.LogPrefix[whole]);
+                }
+                if (open > whole)
+                {
+                    list.Add(new Carry(child, p, step, whole, open));
+                }
+            }
+            counted[p] = sum;
+            carries[p] = list;
+        });
+        _work += nodes.Count;
+
+        // Children are listed in the order they are first reached, and each collects its carries in
+        // parent order, so the values kept and the sums do not depend on the threads.
+        var index = new Dictionary<FisherNodeKey, int>();
+        var incoming = new List<List<Carry>>();
+        var children = new List<FisherNodeKey>();
+        long carried = 0;
+        foreach (var list in carries)
+        {
+            foreach (var carry in list)
+            {
+                if (!index.TryGetValue(carry.Child, out int c))
+                {
+                    c = children.Count;
+                    index[carry.Child] = c;
+                    children.Add(carry.Child);
+                    incoming.Add([]);
+                }
+                incoming[c].Add(carry);
+                carried += carry.To - carry.From;
+            }
+        }
+        _work += carried;
+        if (_work > WorkLimit)
+        {
+            return (0, null, null);
+        }
+        var childPasts = new FisherPastValues[children.Count];
+        Parallel.For(0, children.Count, c =>
+        {
+            var arriving = incoming[c];
+            var collector = new FisherValueCollector(arriving.Max(carry => carry.To - carry.From));
+            foreach (var carry in arriving)
+            {
+                var from = pasts[carry.Parent];
+                for (int i = carry.From; i < carry.To; i++)
+                {
+                    collector.Add(from.Values[i] + carry.Step, from.Counts[i]);
+                }
+            }
+            childPasts[c] = collector.ToPastValues();
+        });
+        return (counted.Sum(), children, [.. childPasts]);
+    }
+
+    /// <summary>Past values [From, To) of parent node Parent, shifted by Step, go to Child.</summary>
+    private readonly record struct Carry(FisherNodeKey Child, int Parent, double Step, int From, int To);
+
+    /// <summary>
+    /// The stage where the forward and backward passes meet: three columns before the end when the two
+    /// columns before the last (which is forced) can be filled in at most a million ways together,
+    /// otherwise two; the columns are in increasing order of their totals, so the backward pass holds
+    /// the largest ones, whose completions take the fewest distinct values per node.
+    /// </summary>
+    private int MeetingStage()
     {
         int stages = _columnTotals.Length;
         if (stages < 3)
         {
-            return stages - 2;
+            return 0;
         }
         double splits = SplitCount(_columnTotals[stages - 3], RowCount) * SplitCount(_columnTotals[stages - 2], RowCount);
         return splits <= 1e6 ? stages - 3 : stages - 2;
     }
 
+    /// <summary>Adds backward-pass work; false once the work limit is passed (safe from parallel loops).</summary>
+    internal bool AddWork(long amount) => Interlocked.Add(ref _work, amount) <= WorkLimit;
+
     private int RowCount { get; set; }
+
+    /// <summary>The number of columns, the stages of the network.</summary>
+    internal int StageCount => _columnTotals.Length;
 
     /// <summary>
     /// An upper bound, from the margins alone, on the number of (node, column split) pairs the exact
@@ -222,59 +281,6 @@ internal sealed class FisherNetworkEnumeration
     /// <summary>Number of ways to split a total over r rows ignoring capacities: C(total + r - 1, r - 1).</summary>
     private static double SplitCount(int total, int rows) => SpecialFunctions.Binomial(total + rows - 1, rows - 1);
 
-    /// <summary>Sorted completion values of a node from <paramref name="stage"/> on, with running log-sums.</summary>
-    private (double[] Values, double[] LogPrefix) Completions(int stage, NodeKey node)
-    {
-        var values = new List<double>();
-        Collect(stage, node.Totals, 0);
-        var sorted = values.ToArray();
-        Array.Sort(sorted);
-        var logPrefix = new double[sorted.Length + 1];
-        logPrefix[0] = double.NegativeInfinity;
-        for (int k = 0; k < sorted.Length; k++)
-        {
-            logPrefix[k + 1] = FisherPastValues.LogAdd(logPrefix[k], sorted[k]);
-        }
-        return (sorted, logPrefix);
-
-        void Collect(int at, int[] totals, double sofar)
-        {
-            if (at == _columnTotals.Length - 1)
-            {
-                double last = sofar;
-                foreach (int t in totals)
-                {
-                    last -= _logFactorial[t];
-                }
-                values.Add(last);
-                return;
-            }
-            foreach (var allocation in Allocations(totals, _columnTotals[at]))
-            {
-                double step = 0;
-                var remaining = new int[totals.Length];
-                for (int i = 0; i < remaining.Length; i++)
-                {
-                    step -= _logFactorial[allocation[i]];
-                    remaining[i] = totals[i] - allocation[i];
-                }
-                Collect(at + 1, remaining, sofar + step);
-            }
-        }
-    }
-
-    private (double Step, NodeKey Child) Step(NodeKey node, int[] allocation)
-    {
-        double step = 0;
-        var remaining = new int[node.Totals.Length];
-        for (int i = 0; i < remaining.Length; i++)
-        {
-            step -= _logFactorial[allocation[i]];
-            remaining[i] = node.Totals[i] - allocation[i];
-        }
-        return (step, NodeKey.Of(remaining));
-    }
-
     /// <summary>log of the sum over completions of exp(V): log N'! - sum log R'_i! - sum log C'_j!.</summary>
     private double LogCompletionCount(int stage, int[] totals)
     {
@@ -292,22 +298,27 @@ internal sealed class FisherNetworkEnumeration
     }
 
     /// <summary>Largest and smallest V that the columns from <paramref name="stage"/> on can add.</summary>
-    private (double Max, double Min) Bounds(int stage, NodeKey node)
+    private (double Max, double Min) Bounds(int stage, FisherNodeKey node)
     {
         if (stage == _columnTotals.Length - 1)
         {
-            double forced = -node.Totals.Sum(t => _logFactorial[t]);
+            double forced = LastColumnValue(node);
             return (forced, forced);
         }
         if (_bounds[stage].TryGetValue(node, out var known))
         {
             return known;
         }
+        if (stage == _columnTotals.Length - 2 && node.Totals.Length <= FisherLastTwoColumnsBounds.MaxRows)
+        {
+            var direct = FisherLastTwoColumnsBounds.Of(node.Totals, _columnTotals[stage], _logFactorial);
+            _bounds[stage][node] = direct;
+            return direct;
+        }
         double max = double.NegativeInfinity;
         double min = double.PositiveInfinity;
-        foreach (var allocation in Allocations(node.Totals, _columnTotals[stage]))
+        foreach (var (step, child) in Moves(node, stage))
         {
-            var (step, child) = Step(node, allocation);
             var (childMax, childMin) = Bounds(stage + 1, child);
             max = Math.Max(max, step + childMax);
             min = Math.Min(min, step + childMin);
@@ -320,29 +331,35 @@ internal sealed class FisherNetworkEnumeration
         return (max, min);
     }
 
-    /// <summary>Every way to split a column total over the rows without exceeding their remaining totals.</summary>
-    private List<int[]> Allocations(int[] capacities, int total)
+    /// <summary>
+    /// Every way to fill column <paramref name="stage"/> from a node, without exceeding its remaining row
+    /// totals: the value the column adds (-sum log x_i!) and the child node. Safe to call from parallel loops.
+    /// </summary>
+    internal List<(double Step, FisherNodeKey Child)> Moves(FisherNodeKey node, int stage)
     {
-        var result = new List<int[]>();
-        var suffixCapacity = new int[capacities.Length + 1];
-        for (int i = capacities.Length - 1; i >= 0; i--)
+        int[] capacities = node.Totals;
+        int rows = capacities.Length;
+        var result = new List<(double, FisherNodeKey)>();
+        var suffixCapacity = new int[rows + 1];
+        for (int i = rows - 1; i >= 0; i--)
         {
             suffixCapacity[i] = suffixCapacity[i + 1] + capacities[i];
         }
-        var current = new int[capacities.Length];
-        Fill(0, total);
+        var current = new int[rows];
+        Fill(0, _columnTotals[stage], 0);
         return result;
 
-        void Fill(int row, int left)
+        void Fill(int row, int left, double step)
         {
-            if (row == capacities.Length - 1)
+            if (row == rows - 1)
             {
-                current[row] = left;
-                result.Add((int[])current.Clone());
-                if (++_work > WorkLimit)
+                var remaining = new int[rows];
+                for (int i = 0; i < rows - 1; i++)
                 {
-                    throw new WorkLimitReachedException();
+                    remaining[i] = capacities[i] - current[i];
                 }
+                remaining[row] = capacities[row] - left;
+                result.Add((step - _logFactorial[left], FisherNodeKey.Of(remaining)));
                 return;
             }
             int lowest = Math.Max(0, left - suffixCapacity[row + 1]);
@@ -350,9 +367,20 @@ internal sealed class FisherNetworkEnumeration
             for (int value = lowest; value <= highest; value++)
             {
                 current[row] = value;
-                Fill(row + 1, left - value);
+                Fill(row + 1, left - value, step - _logFactorial[value]);
             }
         }
+    }
+
+    /// <summary>The value the last column adds from a node: it is forced to hold the remaining row totals.</summary>
+    internal double LastColumnValue(FisherNodeKey node)
+    {
+        double value = 0;
+        foreach (int t in node.Totals)
+        {
+            value -= _logFactorial[t];
+        }
+        return value;
     }
 
     private static int[,] Transpose(int[,] table)
@@ -366,38 +394,6 @@ internal sealed class FisherNetworkEnumeration
             }
         }
         return transposed;
-    }
-
-    /// <summary>The multiset of remaining row totals, kept sorted so that row permutations merge.</summary>
-    private sealed class NodeKey : IEquatable<NodeKey>
-    {
-        private readonly int _hash;
-
-        private NodeKey(int[] totals)
-        {
-            Totals = totals;
-            var hash = new HashCode();
-            foreach (int t in totals)
-            {
-                hash.Add(t);
-            }
-            _hash = hash.ToHashCode();
-        }
-
-        public int[] Totals { get; }
-
-        public static NodeKey Of(int[] totals)
-        {
-            var sorted = (int[])totals.Clone();
-            Array.Sort(sorted);
-            return new NodeKey(sorted);
-        }
-
-        public bool Equals(NodeKey? other) => other is not null && Totals.AsSpan().SequenceEqual(other.Totals);
-
-        public override bool Equals(object? obj) => Equals(obj as NodeKey);
-
-        public override int GetHashCode() => _hash;
     }
 
     /// <summary>Unwinds the bound recursion when the work limit is reached; never leaves this class.</summary>

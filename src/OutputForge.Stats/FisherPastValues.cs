@@ -1,5 +1,3 @@
-using System.Runtime.InteropServices;
-
 namespace OutputForge.Stats;
 
 /// <summary>
@@ -25,27 +23,15 @@ internal sealed class FisherPastValues
     public static long KeyOf(double value) => (long)Math.Round(value * MergeResolution);
 
     /// <summary>The start of every network: the empty partial table, value 0, one path.</summary>
-    public static Dictionary<long, PastEntry> Start() => new() { [0] = new PastEntry(0, 1) };
+    public static FisherPastValues Start() => Sorted([0], [1]);
 
-    /// <summary>Adds <paramref name="count"/> paths of past value <paramref name="value"/> to a node's collection.</summary>
-    public static void Add(Dictionary<long, PastEntry> paths, double value, double count)
+    /// <summary>Values already in increasing order with their counts; the running log-sums are added.</summary>
+    public static FisherPastValues Sorted(double[] values, double[] counts)
     {
-        ref var entry = ref CollectionsMarshal.GetValueRefOrAddDefault(paths, KeyOf(value), out bool exists);
-        entry = exists ? entry with { Count = entry.Count + count } : new PastEntry(value, count);
-    }
-
-    public static FisherPastValues Of(Dictionary<long, PastEntry> paths)
-    {
-        var keys = paths.Keys.ToArray();
-        Array.Sort(keys);
-        var values = new double[keys.Length];
-        var counts = new double[keys.Length];
-        var logPrefix = new double[keys.Length + 1];
+        var logPrefix = new double[values.Length + 1];
         logPrefix[0] = double.NegativeInfinity;
-        for (int i = 0; i < keys.Length; i++)
+        for (int i = 0; i < values.Length; i++)
         {
-            values[i] = paths[keys[i]].Value;
-            counts[i] = paths[keys[i]].Count;
             logPrefix[i + 1] = LogAdd(logPrefix[i], Math.Log(counts[i]) + values[i]);
         }
         return new FisherPastValues { Values = values, Counts = counts, LogPrefix = logPrefix };
@@ -88,6 +74,3 @@ internal sealed class FisherPastValues
         return low;
     }
 }
-
-/// <summary>One merged past value of a network node: its exact value and how many partial tables share it.</summary>
-internal readonly record struct PastEntry(double Value, double Count);

@@ -97,15 +97,14 @@ internal sealed class FisherTwoRowEnumeration
         {
             largest[stage] = LargestCompletions(stage, Math.Min(rowTotal, _suffixTotals[stage]));
         }
-        var current = new Dictionary<int, Dictionary<long, PastEntry>> { [rowTotal] = FisherPastValues.Start() };
+        var current = new Dictionary<int, FisherPastValues> { [rowTotal] = FisherPastValues.Start() };
         double pValue = 0;
         for (int stage = 0; stage < terminal; stage++)
         {
-            var next = new Dictionary<int, Dictionary<long, PastEntry>>();
+            var next = new Dictionary<int, FisherValueCollector>();
             double smallestAfter = SmallestCompletion(stage + 1);
-            foreach (var (left, paths) in current)
+            foreach (var (left, pasts) in current)
             {
-                var pasts = FisherPastValues.Of(paths);
                 int low = Math.Max(0, left - _suffixTotals[stage + 1]);
                 int high = Math.Min(_columns[stage], left);
                 for (int x = low; x <= high; x++)
@@ -124,12 +123,12 @@ internal sealed class FisherTwoRowEnumeration
                     {
                         if (!next.TryGetValue(child, out var childPaths))
                         {
-                            childPaths = new Dictionary<long, PastEntry>();
+                            childPaths = new FisherValueCollector(carried - counted);
                             next[child] = childPaths;
                         }
                         for (int i = counted; i < carried; i++)
                         {
-                            FisherPastValues.Add(childPaths, pasts.Values[i] + step, pasts.Counts[i]);
+                            childPaths.Add(pasts.Values[i] + step, pasts.Counts[i]);
                         }
                         _work += carried - counted;
                     }
@@ -139,12 +138,12 @@ internal sealed class FisherTwoRowEnumeration
                     }
                 }
             }
-            current = next;
+            current = next.ToDictionary(entry => entry.Key, entry => entry.Value.ToPastValues());
         }
-        foreach (var (left, paths) in current)
+        foreach (var (left, pasts) in current)
         {
-            pValue += SettleLastTwoColumns(left, FisherPastValues.Of(paths), threshold, constant);
-            _work += paths.Count + _columns[terminal];
+            pValue += SettleLastTwoColumns(left, pasts, threshold, constant);
+            _work += pasts.Values.Length + _columns[terminal];
             if (_work > FisherNetworkEnumeration.WorkLimit)
             {
                 return null;
