@@ -1,5 +1,3 @@
-using System.Diagnostics;
-
 namespace OutputForge.Stats.Tests;
 
 public class FisherExactRxcTests
@@ -25,7 +23,6 @@ public class FisherExactRxcTests
         Assert.Equal(rP, result.PValue, rP * 1e-8);
     }
 
-    /// <summary>A 10 x 3 table with n = 250 concentrated in a few categories, as clinical tables are, is fast.</summary>
     /// <summary>
     /// The demo's race table (5 x 3, n = 450). Source: the exact p-value by listing every table with its margins,
     /// Oracles/generate_fisher_bruteforce_oracle.csx (0.8168692716558724; the probabilities listed sum to 1 within
@@ -40,15 +37,14 @@ public class FisherExactRxcTests
         Assert.Equal(0.8168692716558724, result.PValue, 0.8168692716558724 * 1e-9);
     }
 
+    /// <summary>A 10 x 3 table with n = 250 concentrated in a few categories, as clinical tables are (R 4.2.2 fisher.test, oracle file); its speed is in docs/performance-micro.md.</summary>
     [Fact]
-    public void SparseTenByThreeIsFast()
+    public void SparseTenByThreeMatchesR()
     {
         var row = ReferenceOracles.FisherRxc.ElementAt(8);
         var table = ReferenceOracles.Table(row.GetProperty("table"));
         Assert.Equal(250, table.Cast<int>().Sum());
-        var clock = Stopwatch.StartNew();
         var result = FisherExactTest.Compute(table);
-        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(10), $"took {clock.Elapsed}");
         Assert.Equal(row.GetProperty("p").GetDouble(), result.PValue, 1e-8);
     }
 
@@ -58,16 +54,14 @@ public class FisherExactRxcTests
     /// the same statistic (4e6 replicates, seed 20261201) is 0.3962 with standard error 0.00024, about
     /// 90 standard errors away; a second run (2e6 replicates, seed 1) gave 0.3967. The exact value here
     /// is checked against the Monte Carlo estimate within 5 standard errors, and FEXACT's value is
-    /// recorded in the oracle file but not used. The enumeration must also end in bounded time.
+    /// recorded in the oracle file but not used.
     /// </summary>
     [Fact]
-    public void EvenlySpreadTenByThreeAgreesWithMonteCarloInBoundedTime()
+    public void EvenlySpreadTenByThreeAgreesWithMonteCarlo()
     {
         var row = ReferenceOracles.FisherRxc.ElementAt(TenByThreeIndex);
         var table = ReferenceOracles.Table(row.GetProperty("table"));
-        var clock = Stopwatch.StartNew();
         var result = FisherExactTest.Compute(table);
-        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(400), $"took {clock.Elapsed}");
         Assert.True(result.IsEstimable, result.NotEstimableReason);
         double simulated = row.GetProperty("simulated_p").GetDouble();
         double se = row.GetProperty("simulated_se").GetDouble();
@@ -131,11 +125,9 @@ public class FisherExactRxcTests
                 table[i, j] = 10 + (i * 7 + j * 3) % 11;
             }
         }
-        var clock = Stopwatch.StartNew();
         var result = FisherExactTest.Compute(table);
         Assert.False(result.IsEstimable);
         Assert.Contains("too large", result.NotEstimableReason);
-        Assert.True(clock.Elapsed < TimeSpan.FromSeconds(400), $"took {clock.Elapsed}");
     }
 
     [Fact]
