@@ -15,6 +15,7 @@ namespace OutputForge.Stats;
 internal sealed class FisherValueCollector
 {
     private Slot[] _slots;
+    private double[] _values;
     private int _mask;
 
     public FisherValueCollector(int expected = 8)
@@ -25,6 +26,7 @@ internal sealed class FisherValueCollector
             capacity <<= 1;
         }
         _slots = new Slot[capacity];
+        _values = new double[capacity];
         _mask = capacity - 1;
     }
 
@@ -41,14 +43,15 @@ internal sealed class FisherValueCollector
             ref var entry = ref _slots[slot];
             if (entry.Count == 0)
             {
-                entry = new Slot(value, count);
+                entry = new Slot(key, count);
+                _values[slot] = value;
                 if (++Count * 2 > _slots.Length)
                 {
                     Grow();
                 }
                 return;
             }
-            if (FisherPastValues.KeyOf(entry.Value) == key)
+            if (entry.Key == key)
             {
                 entry.Count += count;
                 return;
@@ -63,12 +66,12 @@ internal sealed class FisherValueCollector
         var values = new double[Count];
         var counts = new double[Count];
         int k = 0;
-        foreach (var entry in _slots)
+        for (int slot = 0; slot < _slots.Length; slot++)
         {
-            if (entry.Count != 0)
+            if (_slots[slot].Count != 0)
             {
-                values[k] = entry.Value;
-                counts[k] = entry.Count;
+                values[k] = _values[slot];
+                counts[k] = _slots[slot].Count;
                 k++;
             }
         }
@@ -82,25 +85,28 @@ internal sealed class FisherValueCollector
     private void Grow()
     {
         var old = _slots;
+        var oldValues = _values;
         _slots = new Slot[old.Length * 2];
+        _values = new double[old.Length * 2];
         _mask = _slots.Length - 1;
-        foreach (var entry in old)
+        for (int i = 0; i < old.Length; i++)
         {
-            if (entry.Count != 0)
+            if (old[i].Count != 0)
             {
-                int slot = Hash(FisherPastValues.KeyOf(entry.Value)) & _mask;
+                int slot = Hash(old[i].Key) & _mask;
                 while (_slots[slot].Count != 0)
                 {
                     slot = (slot + 1) & _mask;
                 }
-                _slots[slot] = entry;
+                _slots[slot] = old[i];
+                _values[slot] = oldValues[i];
             }
         }
     }
 
-    private struct Slot(double value, double count)
+    private struct Slot(long key, double count)
     {
-        public double Value = value;
+        public long Key = key;
         public double Count = count;
     }
 }
