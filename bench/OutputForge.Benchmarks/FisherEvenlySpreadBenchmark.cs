@@ -4,8 +4,8 @@ using OutputForge.Stats;
 
 namespace OutputForge.Benchmarks;
 
-/// <summary>The evenly spread 10 x 3 table with n = 250, the hard case of the r x c network: seconds per call, so one cold run.</summary>
-[SimpleJob(RunStrategy.ColdStart, launchCount: 1, warmupCount: 0, iterationCount: 1)]
+/// <summary>The evenly spread 10 x 3 table with n = 250, the hard case of the r x c network: seconds per call, so few iterations.</summary>
+[SimpleJob(RunStrategy.Monitoring, launchCount: 1, warmupCount: 1, iterationCount: 5)]
 public class FisherEvenlySpreadBenchmark
 {
     private static readonly int[,] EvenlySpread =

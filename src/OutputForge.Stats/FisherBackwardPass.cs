@@ -4,17 +4,19 @@ namespace OutputForge.Stats;
 /// The backward half of <see cref="FisherNetworkEnumeration"/>: the columns after the meeting stage,
 /// run from the last one back, then joined with the forward pass's past values at the meeting stage.
 /// <para>
-/// First the undecided partial tables of the meeting stage are followed forward in summary only: for
-/// every node they can reach, the log of their total mass (sum of exp(past value)) and their largest
-/// and smallest past value. Then, from the last column back, each node collects the distinct values of
-/// its completions (the last column is forced; an earlier node adds each way of filling its column to
-/// the kept values of the child). A completion value F of a node is counted whole when F plus the
-/// largest past value reaching the node is at most the threshold (every table through it qualifies:
-/// its probability is exp(K + F) times the node's past mass), dropped when F plus the smallest past
-/// value exceeds it, and kept for the node's parents otherwise. A counted or dropped completion is not
-/// passed back, so no table is counted twice. At the meeting stage the node's sorted past values and
-/// sorted completion values are joined in one sweep: as the past value grows, the count of completions
-/// at most threshold - past only shrinks.
+/// First the meeting column is split as in the forward pass (<see cref="FisherNetworkEnumeration.SplitMoves"/>):
+/// past values whose every completion qualifies are counted, those that can never qualify dropped,
+/// and the rest, per way of filling the column, form a carry to a child node, which is not gathered
+/// into a list. The carries are followed to the end in summary only: for every node they can reach,
+/// the log of their total mass (sum of exp(past value)) and their largest and smallest past value.
+/// Then, from the last column back, each node collects the distinct values of its completions (the
+/// last column is forced; an earlier node adds each way of filling its column to the kept values of
+/// the child). A completion value F of a node is counted whole when F plus the largest past value
+/// reaching the node is at most the threshold (every table through it qualifies: its probability is
+/// exp(K + F) times the node's past mass), dropped when F plus the smallest past value exceeds it, and
+/// kept for the node's parents otherwise. A counted or dropped completion is not passed back, so no
+/// table is counted twice. Last, each carry is joined with the kept completions of its child
+/// (<see cref="FisherMeetingJoin"/>).
 /// </para>
 /// </summary>
 internal sealed class FisherBackwardPass
@@ -38,14 +40,17 @@ internal sealed class FisherBackwardPass
     public double? Settle(List<FisherNodeKey> meetingNodes, List<FisherPastValues> meetingPasts)
     {
         int stages = _network.StageCount;
-        var summaries = Summaries(meetingNodes, meetingPasts, stages);
+        var (counted, carries) = _network.SplitMoves(_meet, meetingNodes, meetingPasts, _threshold, _constant);
+        var weights = new FisherMeetingJoin.Scale?[meetingPasts.Count];
+        Parallel.For(0, meetingPasts.Count, k => weights[k] = FisherMeetingJoin.Scale.Of(meetingPasts[k]));
+        var summaries = Summaries(carries, meetingPasts, weights, stages);
         if (summaries is null)
         {
             return null;
         }
-        double total = 0;
+        double total = counted;
         var later = new Dictionary<FisherNodeKey, FisherPastValues>();
-        for (int stage = stages - 1; stage >= _meet; stage--)
+        for (int stage = stages - 1; stage > _meet; stage--)
         {
             var (nodes, summary) = summaries[stage];
             var kept = new FisherPastValues?[nodes.Count];
@@ -61,11 +66,6 @@ internal sealed class FisherBackwardPass
                 if (!_network.AddWork(completions.Values.Length))
                 {
                     withinLimit = false;
-                    return;
-                }
-                if (stage == _meet)
-                {
-                    sums[k] = Join(meetingPasts[k], completions);
                     return;
                 }
                 var (sum, undecided) = Prune(completions, summary[k]);
@@ -86,52 +86,99 @@ internal sealed class FisherBackwardPass
                 }
             }
         }
-        return total;
+        double? joined = Join(carries, meetingPasts, weights, later);
+        return joined is null ? null : total + joined.Value;
     }
 
     /// <summary>
-    /// The mass and range of the undecided past values, from the meeting stage to the last column, for
-    /// every node they reach (in the order first reached, so the result does not depend on threads).
+    /// The mass and range of the carried past values, from the stage after the meeting one to the last
+    /// column, for every node they reach (in the order first reached, so the result does not depend on
+    /// threads).
     /// </summary>
-    private (List<FisherNodeKey> Nodes, List<PastSummary> Summary)[]? Summaries(List<FisherNodeKey> meetingNodes, List<FisherPastValues> meetingPasts, int stages)
+    private (List<FisherNodeKey> Nodes, List<PastSummary> Summary)[]? Summaries(
+        List<FisherNetworkEnumeration.Carry>[] carries, List<FisherPastValues> meetingPasts, FisherMeetingJoin.Scale?[] weights, int stages)
     {
         var result = new (List<FisherNodeKey>, List<PastSummary>)[stages];
-        var summary = meetingPasts.Select(p => new PastSummary(p.LogPrefix[^1], p.Values[^1], p.Values[0])).ToList();
-        result[_meet] = (meetingNodes, summary);
-        for (int stage = _meet; stage < stages - 1; stage++)
+        var first = new SummaryBuilder();
+        foreach (var list in carries)
+        {
+            foreach (var carry in list)
+            {
+                var pasts = meetingPasts[carry.Parent];
+                double logMass = RangeLogMass(pasts, weights[carry.Parent], carry.From, carry.To);
+                first.Add(carry.Child, new PastSummary(logMass + carry.Step, pasts.Values[carry.To - 1] + carry.Step, pasts.Values[carry.From] + carry.Step));
+            }
+            if (!_network.AddWork(list.Count))
+            {
+                return null;
+            }
+        }
+        result[_meet + 1] = (first.Nodes, first.Summary);
+        for (int stage = _meet + 1; stage < stages - 1; stage++)
         {
             var (nodes, current) = result[stage];
             var moves = new List<(double Step, FisherNodeKey Child)>[nodes.Count];
             Parallel.For(0, nodes.Count, k => moves[k] = _network.Moves(nodes[k], stage));
-            var index = new Dictionary<FisherNodeKey, int>();
-            var childNodes = new List<FisherNodeKey>();
-            var childSummary = new List<PastSummary>();
+            var next = new SummaryBuilder();
             for (int k = 0; k < nodes.Count; k++)
             {
                 var from = current[k];
                 foreach (var (step, child) in moves[k])
                 {
-                    var arriving = new PastSummary(from.LogMass + step, from.Max + step, from.Min + step);
-                    if (index.TryGetValue(child, out int c))
-                    {
-                        var had = childSummary[c];
-                        childSummary[c] = new PastSummary(FisherPastValues.LogAdd(had.LogMass, arriving.LogMass), Math.Max(had.Max, arriving.Max), Math.Min(had.Min, arriving.Min));
-                    }
-                    else
-                    {
-                        index[child] = childNodes.Count;
-                        childNodes.Add(child);
-                        childSummary.Add(arriving);
-                    }
+                    next.Add(child, new PastSummary(from.LogMass + step, from.Max + step, from.Min + step));
                 }
                 if (!_network.AddWork(moves[k].Count))
                 {
                     return null;
                 }
             }
-            result[stage + 1] = (childNodes, childSummary);
+            result[stage + 1] = (next.Nodes, next.Summary);
         }
         return result;
+    }
+
+    /// <summary>log of the sum of count x exp(value) over past values [from, to) of a node, summed directly (no differences of running sums).</summary>
+    private static double RangeLogMass(FisherPastValues pasts, FisherMeetingJoin.Scale? weights, int from, int to)
+    {
+        if (weights is not null)
+        {
+            double sum = 0;
+            for (int i = from; i < to; i++)
+            {
+                sum += weights.Weights[i];
+            }
+            return Math.Log(sum) + weights.Reference;
+        }
+        double log = double.NegativeInfinity;
+        for (int i = from; i < to; i++)
+        {
+            log = FisherPastValues.LogAdd(log, Math.Log(pasts.Counts[i]) + pasts.Values[i]);
+        }
+        return log;
+    }
+
+    /// <summary>Summaries of the nodes of one stage, merged as they arrive.</summary>
+    private sealed class SummaryBuilder
+    {
+        private readonly Dictionary<FisherNodeKey, int> _index = [];
+
+        public List<FisherNodeKey> Nodes { get; } = [];
+        public List<PastSummary> Summary { get; } = [];
+
+        public void Add(FisherNodeKey node, PastSummary arriving)
+        {
+            if (_index.TryGetValue(node, out int c))
+            {
+                var had = Summary[c];
+                Summary[c] = new PastSummary(FisherPastValues.LogAdd(had.LogMass, arriving.LogMass), Math.Max(had.Max, arriving.Max), Math.Min(had.Min, arriving.Min));
+            }
+            else
+            {
+                _index[node] = Nodes.Count;
+                Nodes.Add(node);
+                Summary.Add(arriving);
+            }
+        }
     }
 
     /// <summary>The distinct completion values of a node, from the kept values of its children (null when none).</summary>
@@ -170,24 +217,41 @@ internal sealed class FisherBackwardPass
         return (sum, FisherPastValues.Sorted(values, counts));
     }
 
-    /// <summary>Sum over past values P and completion values F with P + F at most the threshold of their probabilities.</summary>
-    private double Join(FisherPastValues pasts, FisherPastValues completions)
+    /// <summary>
+    /// Joins every carry of the meeting column with the kept completions of its child
+    /// (<see cref="FisherMeetingJoin"/>); null past the work limit.
+    /// </summary>
+    private double? Join(List<FisherNetworkEnumeration.Carry>[] carries, List<FisherPastValues> meetingPasts, FisherMeetingJoin.Scale?[] weights, Dictionary<FisherNodeKey, FisherPastValues> later)
     {
-        double sum = 0;
-        int j = completions.Values.Length;
-        for (int i = 0; i < pasts.Values.Length; i++)
+        var children = later.ToArray();
+        var scales = new FisherMeetingJoin.Scale?[children.Length];
+        Parallel.For(0, children.Length, c => scales[c] = FisherMeetingJoin.Scale.Of(children[c].Value));
+        var index = new Dictionary<FisherNodeKey, int>();
+        for (int c = 0; c < children.Length; c++)
         {
-            double limit = _threshold - pasts.Values[i];
-            while (j > 0 && completions.Values[j - 1] > limit)
-            {
-                j--;
-            }
-            if (j == 0)
-            {
-                break;
-            }
-            sum += pasts.Counts[i] * Math.Exp(_constant + pasts.Values[i] + completions.LogPrefix[j]);
+            index[children[c].Key] = c;
         }
-        return sum;
+        var sums = new double[carries.Length];
+        bool withinLimit = true;
+        Parallel.For(0, carries.Length, k =>
+        {
+            var pasts = meetingPasts[k];
+            double sum = 0;
+            long work = 0;
+            foreach (var carry in carries[k])
+            {
+                if (index.TryGetValue(carry.Child, out int c))
+                {
+                    sum += FisherMeetingJoin.Sum(pasts, weights[k], carry.From, carry.To, children[c].Value, scales[c], _threshold - carry.Step, _constant + carry.Step);
+                    work += carry.To - carry.From;
+                }
+            }
+            sums[k] = sum;
+            if (!_network.AddWork(work))
+            {
+                withinLimit = false;
+            }
+        });
+        return withinLimit ? sums.Sum() : null;
     }
 }

@@ -146,13 +146,11 @@ internal sealed class FisherNetworkEnumeration
     }
 
     /// <summary>
-    /// One column of the forward pass: every node's past values are split, per way of filling the
-    /// column, into those counted whole, those dropped and those carried to the child node. Returns the
-    /// probability counted whole and the child nodes with their past values (null when the work limit
-    /// is passed).
+    /// Every node's past values split, per way of filling column <paramref name="stage"/>, into those
+    /// counted whole, those dropped and those carried to the child node: the probability counted whole
+    /// and, per node, its carries.
     /// </summary>
-    private (double Counted, List<FisherNodeKey>? Nodes, List<FisherPastValues>? Pasts) ForwardStage(
-        int stage, List<FisherNodeKey> nodes, List<FisherPastValues> pasts, double threshold, double constant)
+    internal (double Counted, List<Carry>[] Carries) SplitMoves(int stage, List<FisherNodeKey> nodes, List<FisherPastValues> pasts, double threshold, double constant)
     {
         var counted = new double[nodes.Count];
         var carries = new List<Carry>[nodes.Count];
@@ -182,6 +180,18 @@ internal sealed class FisherNetworkEnumeration
             carries[p] = list;
         });
         _work += nodes.Count;
+        return (counted.Sum(), carries);
+    }
+
+    /// <summary>
+    /// One column of the forward pass (<see cref="SplitMoves"/>, then the carried values gathered per
+    /// child). Returns the probability counted whole and the child nodes with their past values (null
+    /// when the work limit is passed).
+    /// </summary>
+    private (double Counted, List<FisherNodeKey>? Nodes, List<FisherPastValues>? Pasts) ForwardStage(
+        int stage, List<FisherNodeKey> nodes, List<FisherPastValues> pasts, double threshold, double constant)
+    {
+        var (counted, carries) = SplitMoves(stage, nodes, pasts, threshold, constant);
 
         // Children are listed in the order they are first reached, and each collects its carries in
         // parent order, so the values kept and the sums do not depend on the threads.
@@ -224,17 +234,19 @@ internal sealed class FisherNetworkEnumeration
             }
             childPasts[c] = collector.ToPastValues();
         });
-        return (counted.Sum(), children, [.. childPasts]);
+        return (counted, children, [.. childPasts]);
     }
 
     /// <summary>Past values [From, To) of parent node Parent, shifted by Step, go to Child.</summary>
-    private readonly record struct Carry(FisherNodeKey Child, int Parent, double Step, int From, int To);
+    internal readonly record struct Carry(FisherNodeKey Child, int Parent, double Step, int From, int To);
 
     /// <summary>
-    /// The stage where the forward and backward passes meet: three columns before the end when the two
-    /// columns before the last (which is forced) can be filled in at most a million ways together,
-    /// otherwise two; the columns are in increasing order of their totals, so the backward pass holds
-    /// the largest ones, whose completions take the fewest distinct values per node.
+    /// The stage where the forward and backward passes meet. The backward pass holds the last three
+    /// columns when the two before the last (which is forced) can be filled in at most a million ways
+    /// together, otherwise the last two; the forward pass stops one column before them, and that
+    /// column's splits are joined directly with the children's completions. The columns are in
+    /// increasing order of their totals, so the backward pass holds the largest ones, whose completions
+    /// take the fewest distinct values per node.
     /// </summary>
     private int MeetingStage()
     {
@@ -244,7 +256,8 @@ internal sealed class FisherNetworkEnumeration
             return 0;
         }
         double splits = SplitCount(_columnTotals[stages - 3], RowCount) * SplitCount(_columnTotals[stages - 2], RowCount);
-        return splits <= 1e6 ? stages - 3 : stages - 2;
+        int backward = splits <= 1e6 ? stages - 3 : stages - 2;
+        return Math.Max(0, backward - 1);
     }
 
     /// <summary>Adds backward-pass work; false once the work limit is passed (safe from parallel loops).</summary>
