@@ -20,14 +20,14 @@ namespace OutputForge.Stats;
 /// undecided ones are carried.
 /// </para>
 /// <para>
-/// The forward pass stops at a meeting stage two or three columns before the end
+/// The forward pass stops at a meeting stage three or four columns before the end
 /// (<see cref="MeetingStage"/>). The last columns are then run backwards (<see cref="FisherBackwardPass"/>):
 /// from the end, each node collects the distinct values of its completions, and a completion value is
 /// counted whole or dropped against the largest and smallest past value (and the total mass) of the
-/// undecided partial tables that can reach it, which are propagated forward from the meeting stage. At
-/// the meeting stage a node's sorted past values and sorted completion values are joined with one
-/// merge-like sweep (the pairs with past + completion at most the threshold), instead of one search
-/// per past value. Every table is decided exactly once, in one of the two passes or at the join.
+/// undecided partial tables that can reach it, which are followed forward in summary from the meeting
+/// stage. Each way of filling the meeting column is then joined with its child's kept completions in
+/// one sweep over the two sorted lists (<see cref="FisherMeetingJoin"/>), instead of gathering the
+/// carried values into lists. Every table is decided exactly once, in one of the two passes or at the join.
 /// </para>
 /// <para>
 /// "No more probable" allows a tolerance of 1e-7 on the log scale, the relative tolerance R's
