@@ -65,7 +65,7 @@ internal sealed class FisherNetworkEnumeration
         {
             _logFactorial[k] = SpecialFunctions.FactorialLn(k);
         }
-        _bounds = Enumerable.Range(0, columnTotals.Length).Select(_ => new Dictionary<FisherNodeKey, (double, double)>()).ToArray();
+        _bounds = Enumerable.Range(0, columnTotals.Length).Select(_ => new Dictionary<FisherNodeKey, (double, double)>(FisherNodeKeyComparer.Instance)).ToArray();
     }
 
     /// <summary>The p-value, or null when the work limit was reached.</summary>
@@ -328,11 +328,67 @@ internal sealed class FisherNetworkEnumeration
             _bounds[stage][node] = direct;
             return direct;
         }
+        var (max, min) = BoundsOverSplits(stage, node.Totals);
+        _bounds[stage][node] = (max, min);
+        return (max, min);
+    }
+
+    /// <summary>
+    /// The bounds of a node by listing the splits of its column: for each, the child's remaining totals
+    /// are sorted into a scratch buffer and looked up without allocating; only a child seen for the
+    /// first time becomes a key (and is solved recursively).
+    /// </summary>
+    private (double Max, double Min) BoundsOverSplits(int stage, int[] capacities)
+    {
+        int rows = capacities.Length;
+        bool childIsLast = stage + 1 == _columnTotals.Length - 1;
+        var known = _bounds[stage + 1].GetAlternateLookup<ReadOnlySpan<int>>();
+        var suffixCapacity = new int[rows + 1];
+        for (int i = rows - 1; i >= 0; i--)
+        {
+            suffixCapacity[i] = suffixCapacity[i + 1] + capacities[i];
+        }
+        var current = new int[rows];
+        var child = new int[rows];
         double max = double.NegativeInfinity;
         double min = double.PositiveInfinity;
-        foreach (var (step, child) in Moves(node, stage))
+        Fill(0, _columnTotals[stage], 0);
+        return (max, min);
+
+        void Fill(int row, int left, double step)
         {
-            var (childMax, childMin) = Bounds(stage + 1, child);
+            if (row < rows - 1)
+            {
+                int lowest = Math.Max(0, left - suffixCapacity[row + 1]);
+                int highest = Math.Min(capacities[row], left);
+                for (int value = lowest; value <= highest; value++)
+                {
+                    current[row] = value;
+                    Fill(row + 1, left - value, step - _logFactorial[value]);
+                }
+                return;
+            }
+            current[row] = left;
+            step -= _logFactorial[left];
+            for (int i = 0; i < rows; i++)
+            {
+                child[i] = capacities[i] - current[i];
+            }
+            double childMax;
+            double childMin;
+            if (childIsLast)
+            {
+                childMax = childMin = LastColumnValue(child);
+            }
+            else
+            {
+                InsertionSort(child);
+                if (!known.TryGetValue(child, out var bounds))
+                {
+                    bounds = Bounds(stage + 1, FisherNodeKey.Of((int[])child.Clone()));
+                }
+                (childMax, childMin) = bounds;
+            }
             max = Math.Max(max, step + childMax);
             min = Math.Min(min, step + childMin);
             if (++_work > WorkLimit)
@@ -340,8 +396,21 @@ internal sealed class FisherNetworkEnumeration
                 throw new WorkLimitReachedException();
             }
         }
-        _bounds[stage][node] = (max, min);
-        return (max, min);
+    }
+
+    private static void InsertionSort(int[] values)
+    {
+        for (int i = 1; i < values.Length; i++)
+        {
+            int value = values[i];
+            int j = i - 1;
+            while (j >= 0 && values[j] > value)
+            {
+                values[j + 1] = values[j];
+                j--;
+            }
+            values[j + 1] = value;
+        }
     }
 
     /// <summary>
@@ -386,10 +455,12 @@ internal sealed class FisherNetworkEnumeration
     }
 
     /// <summary>The value the last column adds from a node: it is forced to hold the remaining row totals.</summary>
-    internal double LastColumnValue(FisherNodeKey node)
+    internal double LastColumnValue(FisherNodeKey node) => LastColumnValue(node.Totals);
+
+    private double LastColumnValue(int[] totals)
     {
         double value = 0;
-        foreach (int t in node.Totals)
+        foreach (int t in totals)
         {
             value -= _logFactorial[t];
         }

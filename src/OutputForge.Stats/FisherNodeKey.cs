@@ -12,12 +12,7 @@ internal sealed class FisherNodeKey : IEquatable<FisherNodeKey>
     private FisherNodeKey(int[] totals)
     {
         Totals = totals;
-        var hash = new HashCode();
-        foreach (int t in totals)
-        {
-            hash.Add(t);
-        }
-        _hash = hash.ToHashCode();
+        _hash = HashOf(totals);
     }
 
     public int[] Totals { get; }
@@ -34,4 +29,34 @@ internal sealed class FisherNodeKey : IEquatable<FisherNodeKey>
     public override bool Equals(object? obj) => Equals(obj as FisherNodeKey);
 
     public override int GetHashCode() => _hash;
+
+    /// <summary>The hash of sorted totals, the same for a key and for a span holding its totals.</summary>
+    public static int HashOf(ReadOnlySpan<int> totals)
+    {
+        var hash = new HashCode();
+        foreach (int t in totals)
+        {
+            hash.Add(t);
+        }
+        return hash.ToHashCode();
+    }
+}
+
+/// <summary>
+/// Compares nodes, and lets a dictionary of nodes be searched with a span of sorted totals, so that the
+/// bounds' dynamic programming looks up a child without allocating a key for it.
+/// </summary>
+internal sealed class FisherNodeKeyComparer : IEqualityComparer<FisherNodeKey>, IAlternateEqualityComparer<ReadOnlySpan<int>, FisherNodeKey>
+{
+    public static readonly FisherNodeKeyComparer Instance = new();
+
+    public bool Equals(FisherNodeKey? x, FisherNodeKey? y) => x is null ? y is null : x.Equals(y);
+
+    public int GetHashCode(FisherNodeKey key) => key.GetHashCode();
+
+    public bool Equals(ReadOnlySpan<int> alternate, FisherNodeKey other) => alternate.SequenceEqual(other.Totals);
+
+    public int GetHashCode(ReadOnlySpan<int> alternate) => FisherNodeKey.HashOf(alternate);
+
+    public FisherNodeKey Create(ReadOnlySpan<int> alternate) => FisherNodeKey.Of(alternate.ToArray());
 }
