@@ -82,6 +82,41 @@ public class FisherLargeTableTests
         Assert.Equal(expected, FisherExactTest.Compute(table).PValue, Math.Max(expected * 1e-9, 1e-15));
     }
 
+    /// <summary>
+    /// More shapes for the two-ended network (forward pass, backward pass, join at the meeting column):
+    /// random small tables, some with equal row totals (rows that merge in the sorted nodes) and zero
+    /// cells, against listing every table with the margins.
+    /// </summary>
+    public static IEnumerable<object[]> SmallRandomTables()
+    {
+        var random = new Random(20261202);
+        int[][] shapes = [[3, 3], [3, 4], [4, 3], [3, 6], [4, 4], [5, 3], [3, 7]];
+        foreach (var shape in shapes)
+        {
+            for (int k = 0; k < 4; k++)
+            {
+                var table = new int[shape[0], shape[1]];
+                for (int i = 0; i < shape[0]; i++)
+                {
+                    for (int j = 0; j < shape[1]; j++)
+                    {
+                        // Fewer units in the larger shapes keep the full listing to a second or so.
+                        table[i, j] = k == 3 && i == 1 ? table[0, j] : random.Next(0, shape[0] * shape[1] > 15 ? 4 : 5);
+                    }
+                }
+                yield return [table];
+            }
+        }
+    }
+
+    [Theory]
+    [MemberData(nameof(SmallRandomTables))]
+    public void TwoEndedNetworkEqualsFullEnumeration(int[,] table)
+    {
+        double expected = FisherBruteForce.PValue(table);
+        Assert.Equal(expected, FisherExactTest.Compute(table).PValue, Math.Max(expected * 1e-9, 1e-15));
+    }
+
     /// <summary>A two-row table with 80 million subjects would need gigabytes of bounds: refused at once, with the reason.</summary>
     [Fact]
     public void TwoRowTableBeyondTheMemoryBoundIsRefused()
