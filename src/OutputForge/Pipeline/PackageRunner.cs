@@ -34,7 +34,9 @@ public static class PackageRunner
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
+        var digesting = Stopwatch.StartNew();
         var inputs = RunInputs.Read(package, data);
+        log.Detail($"inputs: SHA-256 digests of the spec and data files in {digesting.Elapsed.TotalMilliseconds:0} ms");
         var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
         {
@@ -47,6 +49,8 @@ public static class PackageRunner
         var context = new LayoutContext(templates, ColumnGroupsOf(study));
         var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log);
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        log.Detail(CollectorFacts.Describe());
+        var writing = new StageTimes();
         var manifestTables = built.Select(b => b.Manifest).ToList();
         var laidOut = built.Select(b => (b.Table, b.Warnings)).ToList();
         foreach (var table in built)
@@ -66,20 +70,27 @@ public static class PackageRunner
                 stream.Write(bytes);
             }
         }
+        writing.Lap("table files");
         if (request.Combined && laidOut.Count > 0)
         {
             CombinedOutputs.Write(staging, request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime);
         }
+        writing.Lap("combined");
         using (var stream = staging.Create(ResultsFileName))
         {
             var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
             ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut, kept, package.Tables.Select(t => t.Id).ToList());
         }
+        writing.Lap("results.json");
         var previous = request.Tables is not null && File.Exists(Path.Combine(request.OutputFolder, ManifestJson.FileName))
             ? ManifestJson.Read(request.OutputFolder)
             : null;
         ManifestStaging.Write(staging, request, dataFolder, study.Study.Id, run.RunTime, inputs, manifestTables, previous);
+        writing.Lap("manifest");
         var files = staging.Commit();
+        writing.Lap("commit");
+        log.Detail($"after the tables: {writing}");
+        log.Detail(CollectorFacts.Describe());
         foreach (var (table, _) in laidOut)
         {
             var names = request.Renderers.Select(r => OutputFileNames.ForTable(table.Document.TableId, r.Extension)).ToList();
