@@ -71,17 +71,31 @@ public static class PackageRunner
             }
         }
         writing.Lap("table files");
-        if (request.Combined && laidOut.Count > 0)
+        // The combined documents and results.json are rendered at the same time (each on its own core), then staged in
+        // the fixed order: combined documents, results.json.
+        IReadOnlyList<(string Name, byte[] Bytes)> combined = [];
+        byte[] results = [];
+        InOrderParallel.Invoke(
+            () =>
+            {
+                if (request.Combined && laidOut.Count > 0)
+                {
+                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime);
+                }
+            },
+            () =>
+            {
+                using var buffer = new MemoryStream();
+                var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
+                ResultsJsonWriter.Write(buffer, study.Study.Id, run, laidOut, kept, package.Tables.Select(t => t.Id).ToList());
+                results = buffer.ToArray();
+            });
+        foreach (var (name, bytes) in combined.Append((ResultsFileName, results)))
         {
-            CombinedOutputs.Write(staging, request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime);
+            using var stream = staging.Create(name);
+            stream.Write(bytes);
         }
-        writing.Lap("combined");
-        using (var stream = staging.Create(ResultsFileName))
-        {
-            var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
-            ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut, kept, package.Tables.Select(t => t.Id).ToList());
-        }
-        writing.Lap("results.json");
+        writing.Lap("combined and results.json");
         var previous = request.Tables is not null && File.Exists(Path.Combine(request.OutputFolder, ManifestJson.FileName))
             ? ManifestJson.Read(request.OutputFolder)
             : null;
@@ -127,9 +141,8 @@ public static class PackageRunner
         IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context, IRunLog log)
     {
         var built = new BuiltTable[selected.Count];
-        var failures = new Exception?[selected.Count];
         var done = 0;
-        Parallel.For(0, selected.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        InOrderParallel.For(selected.Count, i =>
         {
             try
             {
@@ -137,16 +150,11 @@ public static class PackageRunner
                 built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page, context);
                 log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms ({built[i].Times})");
             }
-            catch (Exception e)
+            finally
             {
-                failures[i] = e;
+                log.Progress(Interlocked.Increment(ref done), selected.Count, selected[i].Id);
             }
-            log.Progress(Interlocked.Increment(ref done), selected.Count, selected[i].Id);
         });
-        if (failures.FirstOrDefault(f => f is not null) is { } failure)
-        {
-            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(failure).Throw();
-        }
         return built;
     }
 
