@@ -142,6 +142,9 @@ public static class PackageRunner
     {
         var built = new BuiltTable[selected.Count];
         var done = 0;
+        // The tables already keep every core busy; MathNet's own threads inside a factorization would only contend with
+        // them (spinning and waiting). Each column of its algorithms is computed the same way on one thread.
+        MathNet.Numerics.Control.UseSingleThread();
         InOrderParallel.For(selected.Count, i =>
         {
             try

@@ -55,23 +55,67 @@ internal sealed class VisitRecords
         }
         var where = endpoint.Where is null ? null : new SpecConditionText(endpoint.Where, table.Source, "/endpoint/where").Compile(dataset);
         var subjects = dataset.Get(AdamConformance.SubjectVariable);
-        var byVisit = settings.Visits.Distinct().ToDictionary(v => v, _ => new Dictionary<string, int>(StringComparer.Ordinal), StringComparer.Ordinal);
-        var count = candidates?.Count ?? dataset.RowCount;
-        for (var i = 0; i < count; i++)
+        var byVisit = new Dictionary<string, Dictionary<string, int>>(StringComparer.Ordinal);
+        // Each visit's records are the rows both of the parameter and of AVISIT = visit, taken from the columns' shared
+        // indexes (ascending rows) instead of reading the visit of every record of the parameter.
+        (string Visit, int First, int Second)? duplicate = null;
+        foreach (var visit in settings.Visits.Distinct())
         {
-            var row = candidates?[i] ?? i;
-            if ((where is not null && !where.Matches(row)) || visitVariable.GetText(row) is not { } visit
-                || !byVisit.TryGetValue(visit, out var rows))
+            var rows = new Dictionary<string, int>(StringComparer.Ordinal);
+            byVisit[visit] = rows;
+            foreach (var row in BothOf(visitVariable.RowsWith(visit), candidates))
             {
-                continue;
-            }
-            var subject = subjects.GetText(row)!;
-            if (!rows.TryAdd(subject, row))
-            {
-                throw new SpecException(table.Source.Problem(endpoint.Where is null ? "/endpoint" : "/endpoint/where",
-                    $"the endpoint selects more than one {visit} record of subject {subject} ({file} lines {dataset.LineOfRow[rows[subject]]} and {dataset.LineOfRow[row]}); narrow the selection so that each subject has at most one record per visit (e.g. ANL01FL = 'Y')"));
+                if (where is not null && !where.Matches(row))
+                {
+                    continue;
+                }
+                var subject = subjects.GetText(row)!;
+                if (!rows.TryAdd(subject, row))
+                {
+                    // Reading all records in row order would stop at the lowest repeated row of any visit.
+                    if (duplicate is null || row < duplicate.Value.Second)
+                    {
+                        duplicate = (visit, rows[subject], row);
+                    }
+                    break;
+                }
             }
         }
+        if (duplicate is var (repeated, first, second))
+        {
+            throw new SpecException(table.Source.Problem(endpoint.Where is null ? "/endpoint" : "/endpoint/where",
+                $"the endpoint selects more than one {repeated} record of subject {subjects.GetText(second)} ({file} lines {dataset.LineOfRow[first]} and {dataset.LineOfRow[second]}); narrow the selection so that each subject has at most one record per visit (e.g. ANL01FL = 'Y')"));
+        }
         return new VisitRecords(dataset, byVisit);
+    }
+
+    /// <summary>The rows in both ascending lists (all of <paramref name="rows"/> when there is no second list), ascending.</summary>
+    private static IEnumerable<int> BothOf(IReadOnlyList<int> rows, IReadOnlyList<int>? candidates)
+    {
+        if (candidates is null)
+        {
+            foreach (var row in rows)
+            {
+                yield return row;
+            }
+            yield break;
+        }
+        for (int i = 0, j = 0; i < rows.Count && j < candidates.Count;)
+        {
+            if (rows[i] < candidates[j])
+            {
+                i++;
+            }
+            else if (rows[i] > candidates[j])
+            {
+                j++;
+            }
+            else
+            {
+                yield return rows[i];
+                i++;
+                j++;
+            }
+        }
     }
 }
