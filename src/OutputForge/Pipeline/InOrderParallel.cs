@@ -9,20 +9,34 @@ namespace OutputForge.Pipeline;
 /// </summary>
 internal static class InOrderParallel
 {
-    public static void For(int count, Action<int> body)
+    /// <param name="order">The order in which the cores take up the pieces (a permutation of 0..count-1); by index when null.</param>
+    public static void For(int count, Action<int> body, IReadOnlyList<int>? order = null)
     {
         var failures = new Exception?[count];
-        Parallel.For(0, count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        var next = -1;
+        void Work()
         {
-            try
+            int taken;
+            while ((taken = Interlocked.Increment(ref next)) < count)
             {
-                body(i);
+                var i = order?[taken] ?? taken;
+                try
+                {
+                    body(i);
+                }
+                catch (Exception e)
+                {
+                    failures[i] = e;
+                }
             }
-            catch (Exception e)
-            {
-                failures[i] = e;
-            }
-        });
+        }
+        // Each worker takes the next piece in the order when it is free (Parallel.For would split the range between
+        // the workers up front and ignore the order).
+        var helpers = Enumerable.Range(1, Math.Max(0, Math.Min(Environment.ProcessorCount, count) - 1))
+            .Select(_ => Task.Factory.StartNew(Work, CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default))
+            .ToArray();
+        Work();
+        Task.WaitAll(helpers);
         if (failures.FirstOrDefault(f => f is not null) is { } failure)
         {
             ExceptionDispatchInfo.Capture(failure).Throw();

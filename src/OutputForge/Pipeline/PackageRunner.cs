@@ -157,7 +157,7 @@ public static class PackageRunner
             {
                 log.Progress(Interlocked.Increment(ref done), selected.Count, selected[i].Id);
             }
-        });
+        }, TableWorkOrder.Of(selected));
         return built;
     }
 
