@@ -22,6 +22,8 @@ namespace OutputForge.Stats;
 /// </summary>
 public static class DescriptiveStatistics
 {
+    /// <param name="values">The non-missing values.</param>
+    /// <param name="quartileDefinition">How Q1 and Q3 are taken from the sorted values.</param>
     /// <param name="geometricMean">False leaves the geometric mean out (null, without its note): a table that does not
     /// show it skips the logarithm and exact mean of every value.</param>
     public static DescriptiveSummary Compute(IReadOnlyList<double> values, QuantileDefinition quartileDefinition = QuantileDefinition.R2,
