@@ -65,7 +65,8 @@ internal sealed class VisitRecords
             var rows = new Dictionary<string, int>(StringComparer.Ordinal);
             var ordered = new List<(string Subject, int Row)>();
             inRowOrder[visit] = ordered;
-            foreach (var row in BothOf(visitVariable.RowsWith(visit), candidates))
+            var visitRows = visitVariable.RowsWith(visit);
+            foreach (var row in candidates is null ? visitRows : SortedRows.Intersection(visitRows, candidates))
             {
                 if (where is not null && !where.Matches(row))
                 {
@@ -90,35 +91,5 @@ internal sealed class VisitRecords
                 $"the endpoint selects more than one {repeated} record of subject {subjects.GetText(second)} ({file} lines {dataset.LineOfRow[first]} and {dataset.LineOfRow[second]}); narrow the selection so that each subject has at most one record per visit (e.g. ANL01FL = 'Y')"));
         }
         return new VisitRecords(dataset, inRowOrder);
-    }
-
-    /// <summary>The rows in both ascending lists (all of <paramref name="rows"/> when there is no second list), ascending.</summary>
-    private static IEnumerable<int> BothOf(IReadOnlyList<int> rows, IReadOnlyList<int>? candidates)
-    {
-        if (candidates is null)
-        {
-            foreach (var row in rows)
-            {
-                yield return row;
-            }
-            yield break;
-        }
-        for (int i = 0, j = 0; i < rows.Count && j < candidates.Count;)
-        {
-            if (rows[i] < candidates[j])
-            {
-                i++;
-            }
-            else if (rows[i] > candidates[j])
-            {
-                j++;
-            }
-            else
-            {
-                yield return rows[i];
-                i++;
-                j++;
-            }
-        }
     }
 }
