@@ -13,22 +13,24 @@ namespace OutputForge.Pipeline;
 public static class CombinedOutputs
 {
     /// <summary>The combined files' names and bytes, each document rendered on its own core.</summary>
-    public static IReadOnlyList<(string Name, byte[] Bytes)> Render(IReadOnlyList<ITableRenderer> renderers, IReadOnlyList<LaidOutTable> tables, DateTimeOffset runTime)
+    /// <param name="workbook">The combined workbook when it was built beside the tables (<see cref="CombinedWorkbookBuilder"/>).</param>
+    internal static IReadOnlyList<(string Name, byte[] Bytes)> Render(IReadOnlyList<ITableRenderer> renderers, IReadOnlyList<LaidOutTable> tables,
+        DateTimeOffset runTime, CombinedWorkbookBuilder? workbook = null)
     {
         var ordered = tables.OrderBy(t => t.Document.TableId, TableIdOrder.Instance).ToList();
         var documents = ordered.Select(t => t.Document).ToList();
-        var jobs = new List<(string Name, Action<Stream> Render)>();
+        var jobs = new List<(string Name, Func<byte[]> Render)>();
         if (renderers.Any(r => r is WordTableRenderer))
         {
-            jobs.Add((OutputFileNames.Combined + ".docx", s => new WordCombinedRenderer().Write(documents, s)));
+            jobs.Add((OutputFileNames.Combined + ".docx", () => Bytes(s => new WordCombinedRenderer().Write(documents, s), runTime)));
         }
         if (renderers.Any(r => r is ExcelTableRenderer))
         {
-            var records = ordered.SelectMany(t => t.Records).ToList();
-            jobs.Add((OutputFileNames.Combined + ".xlsx", s => new ExcelWorkbookRenderer().Write(documents, s, records)));
+            jobs.Add((OutputFileNames.Combined + ".xlsx", workbook is not null ? workbook.Bytes : () => Bytes(s =>
+                new ExcelWorkbookRenderer().Write(documents, s, ordered.SelectMany(t => t.Records).ToList()), runTime)));
         }
         var bytes = new byte[jobs.Count][];
-        InOrderParallel.For(jobs.Count, i => bytes[i] = Bytes(jobs[i].Render, runTime));
+        InOrderParallel.For(jobs.Count, i => bytes[i] = jobs[i].Render());
         return jobs.Select((job, i) => (job.Name, bytes[i])).ToList();
     }
 

@@ -3,6 +3,7 @@ using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Layout;
 using OutputForge.Rendering;
+using OutputForge.Rendering.Excel;
 using OutputForge.Spec;
 using OutputForge.Templates;
 using OutputForge.Workflow;
@@ -47,7 +48,19 @@ public static class PackageRunner
         var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
         var context = new LayoutContext(templates, ColumnGroupsOf(study));
-        var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log);
+        var workbook = request.Combined && selected.Count > 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
+            ? new CombinedWorkbookBuilder(selected.Select(t => t.Id).ToList(), run.RunTime)
+            : null;
+        BuiltTable[] built;
+        try
+        {
+            built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log, workbook);
+        }
+        catch
+        {
+            workbook?.AbandonAll();
+            throw;
+        }
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
         log.Detail(CollectorFacts.Describe());
         var writing = new StageTimes();
@@ -80,7 +93,7 @@ public static class PackageRunner
             {
                 if (request.Combined && laidOut.Count > 0)
                 {
-                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime);
+                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime, workbook);
                 }
             },
             () =>
@@ -138,7 +151,8 @@ public static class PackageRunner
     /// message does not depend on thread timing.
     /// </summary>
     private static BuiltTable[] BuildTables(IReadOnlyList<TableSpec> selected, RunRequest request, StudySpec study, StudyData data,
-        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context, IRunLog log)
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context, IRunLog log,
+        CombinedWorkbookBuilder? workbook)
     {
         var built = new BuiltTable[selected.Count];
         var done = 0;
@@ -151,7 +165,13 @@ public static class PackageRunner
             {
                 var clock = Stopwatch.StartNew();
                 built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page, context);
+                workbook?.Ready(i, built[i].Table);
                 log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms ({built[i].Times})");
+            }
+            catch
+            {
+                workbook?.Abandon(i);
+                throw;
             }
             finally
             {
