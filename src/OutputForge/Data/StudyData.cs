@@ -11,9 +11,33 @@ public sealed class StudyData
     {
         Folder = folder;
         _datasets = datasets;
+        _subjectLevelRowOfSubject = new Lazy<Dictionary<string, int>>(() =>
+        {
+            var adsl = SubjectLevel;
+            var subjects = adsl.Get(AdamConformance.SubjectVariable);
+            var rowOfSubject = new Dictionary<string, int>(adsl.RowCount, StringComparer.Ordinal);
+            for (var row = 0; row < adsl.RowCount; row++)
+            {
+                rowOfSubject[subjects.GetText(row)!] = row;
+            }
+            return rowOfSubject;
+        }, LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
     public string Folder { get; }
+
+    private readonly Lazy<Dictionary<string, int>> _subjectLevelRowOfSubject;
+    private readonly System.Collections.Concurrent.ConcurrentDictionary<string, Lazy<SubjectLevelRows>> _subjectLevelRows = new(StringComparer.Ordinal);
+
+    /// <summary>
+    /// The ADSL rows of the records of <paramref name="records"/>: shared by all tables when it is one of this study's
+    /// datasets, made anew for any other (such as records a table derived).
+    /// </summary>
+    public SubjectLevelRows SubjectLevelRowsOf(Dataset records) =>
+        _datasets.TryGetValue(records.Name, out var own) && ReferenceEquals(own, records)
+            ? _subjectLevelRows.GetOrAdd(records.Name, _ => new Lazy<SubjectLevelRows>(
+                () => new SubjectLevelRows(_subjectLevelRowOfSubject.Value, records.RowCount), LazyThreadSafetyMode.ExecutionAndPublication)).Value
+            : new SubjectLevelRows(_subjectLevelRowOfSubject.Value, records.RowCount);
 
     public Dataset SubjectLevel => _datasets["adsl"];
 
