@@ -22,7 +22,12 @@ namespace OutputForge.Stats;
 /// </summary>
 public static class DescriptiveStatistics
 {
-    public static DescriptiveSummary Compute(IReadOnlyList<double> values, QuantileDefinition quartileDefinition = QuantileDefinition.R2)
+    /// <param name="values">The non-missing values.</param>
+    /// <param name="quartileDefinition">How Q1 and Q3 are taken from the sorted values.</param>
+    /// <param name="geometricMean">False leaves the geometric mean out (null, without its note): a table that does not
+    /// show it skips the logarithm and exact mean of every value.</param>
+    public static DescriptiveSummary Compute(IReadOnlyList<double> values, QuantileDefinition quartileDefinition = QuantileDefinition.R2,
+        bool geometricMean = true)
     {
         ArgumentNullException.ThrowIfNull(values);
         if (values.Any(v => double.IsNaN(v) || double.IsInfinity(v)))
@@ -50,12 +55,12 @@ public static class DescriptiveStatistics
         double q1 = SortedArrayStatistics.QuantileCustom(sorted, 0.25, quartileDefinition);
         double q3 = SortedArrayStatistics.QuantileCustom(sorted, 0.75, quartileDefinition);
         double? geometric = null;
-        if (sorted[0] > 0)
+        if (geometricMean && sorted[0] > 0)
         {
             var logMean = CentralMoments.Mean(values.Select(v => Math.Log(v)).ToArray());
             geometric = Math.Exp(logMean);
         }
-        else
+        else if (geometricMean)
         {
             notes.Add("The geometric mean needs every value to be positive.");
         }

@@ -40,25 +40,31 @@ public sealed class LinearModelDesign
         {
             names.AddRange(f.Levels.Skip(1).Select(l => $"{f.Name}[{l}]"));
         }
-        var matrix = Matrix<double>.Build.Dense(rows, names.Count);
-        for (var i = 0; i < rows; i++)
+        // Filled column by column into MathNet's column-major storage: one pass per column instead of an indexer call per cell.
+        var cells = new double[rows * names.Count];
+        Array.Fill(cells, 1.0, 0, rows);
+        var column = 1;
+        foreach (var c in covariates)
         {
-            matrix[i, 0] = 1;
-            var column = 1;
-            foreach (var c in covariates)
+            for (var i = 0; i < rows; i++)
             {
-                matrix[i, column++] = c.Values[i];
+                cells[column * rows + i] = c.Values[i];
             }
-            foreach (var f in factors)
+            column++;
+        }
+        foreach (var f in factors)
+        {
+            for (var i = 0; i < rows; i++)
             {
                 var level = f.LevelOfRow[i];
                 if (level >= 1)
                 {
-                    matrix[i, column + level - 1] = 1;
+                    cells[(column + level - 1) * rows + i] = 1;
                 }
-                column += f.Levels.Count - 1;
             }
+            column += f.Levels.Count - 1;
         }
+        var matrix = Matrix<double>.Build.Dense(rows, names.Count, cells);
         return new LinearModelDesign(matrix, names, covariates, factors);
     }
 

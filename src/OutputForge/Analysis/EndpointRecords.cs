@@ -26,25 +26,23 @@ public sealed class EndpointRecords
     {
         var endpoint = table.Endpoint!;
         var dataset = data[endpoint.Dataset];
-        var tests = new List<Func<int, bool>>();
         // The parameter's records come from the PARAMCD column's shared index rather than a scan of the dataset.
         var candidates = endpoint.Parameter is null ? null
             : Variable(dataset, "PARAMCD", endpoint.Parameter, table.Source, "/endpoint/parameter").RowsWith(endpoint.Parameter);
         if (endpoint.Visit is not null)
         {
-            tests.Add(ValueTest(dataset, "AVISIT", endpoint.Visit, table.Source, "/endpoint/visit"));
+            // So are the visit's records: the rows of both, in row order.
+            var visitRows = Variable(dataset, "AVISIT", endpoint.Visit, table.Source, "/endpoint/visit").RowsWith(endpoint.Visit);
+            candidates = candidates is null ? visitRows : SortedRows.Intersection(candidates, visitRows);
         }
-        if (endpoint.Where is not null)
-        {
-            tests.Add(new SpecConditionText(endpoint.Where, table.Source, "/endpoint/where").Compile(dataset).Matches);
-        }
+        var where = endpoint.Where is null ? null : new SpecConditionText(endpoint.Where, table.Source, "/endpoint/where").Compile(dataset);
         var subjects = dataset.Get(AdamConformance.SubjectVariable);
         var rowOfSubject = new Dictionary<string, int>(StringComparer.Ordinal);
         var count = candidates?.Count ?? dataset.RowCount;
         for (var i = 0; i < count; i++)
         {
             var row = candidates?[i] ?? i;
-            if (!tests.TrueForAll(t => t(row)))
+            if (where is not null && !where.Matches(row))
             {
                 continue;
             }
@@ -57,12 +55,6 @@ public sealed class EndpointRecords
             }
         }
         return new EndpointRecords(dataset, rowOfSubject);
-    }
-
-    private static Func<int, bool> ValueTest(Dataset dataset, string variableName, string value, SpecSource source, string pointer)
-    {
-        var variable = Variable(dataset, variableName, value, source, pointer);
-        return row => string.Equals(variable.GetText(row), value, StringComparison.Ordinal);
     }
 
     /// <summary>The selecting variable, checked to hold <paramref name="value"/> somewhere.</summary>

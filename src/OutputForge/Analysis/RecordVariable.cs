@@ -12,13 +12,13 @@ namespace OutputForge.Analysis;
 public sealed class RecordVariable
 {
     private readonly DataColumn _column;
-    private readonly IReadOnlyDictionary<string, int>? _adslRowOfSubject;
+    private readonly SubjectLevelRows? _adslRows;
 
-    private RecordVariable(string name, DataColumn column, IReadOnlyDictionary<string, int>? adslRowOfSubject, string datasetFile)
+    private RecordVariable(string name, DataColumn column, SubjectLevelRows? adslRows, string datasetFile)
     {
         Name = name;
         _column = column;
-        _adslRowOfSubject = adslRowOfSubject;
+        _adslRows = adslRows;
         DatasetFile = datasetFile;
     }
 
@@ -36,21 +36,15 @@ public sealed class RecordVariable
         var adsl = data.SubjectLevel;
         if (adsl.Find(name) is { } subjectLevel)
         {
-            var subjects = adsl.Get(AdamConformance.SubjectVariable);
-            var rowOfSubject = new Dictionary<string, int>(StringComparer.Ordinal);
-            for (var row = 0; row < adsl.RowCount; row++)
-            {
-                rowOfSubject[subjects.GetText(row)!] = row;
-            }
-            return new RecordVariable(name, subjectLevel, rowOfSubject, Path.GetFileName(adsl.File));
+            return new RecordVariable(name, subjectLevel, data.SubjectLevelRowsOf(records), Path.GetFileName(adsl.File));
         }
         var known = records.Columns.Select(c => c.Name).Concat(adsl.Columns.Select(c => c.Name)).Distinct().ToList();
         throw new SpecException(source.Problem(pointer,
             $"neither {Path.GetFileName(records.File)} nor ADSL has a variable {name}{NearestName.Hint(name, known)}"));
     }
 
-    private int Row(int recordRow, string subject) =>
-        _adslRowOfSubject is null ? recordRow : _adslRowOfSubject.TryGetValue(subject, out var r) ? r : -1;
+    /// <summary>The row of the variable's own dataset; <paramref name="subject"/> is the record's own USUBJID.</summary>
+    private int Row(int recordRow, string subject) => _adslRows is null ? recordRow : _adslRows.Of(recordRow, subject);
 
     public string? Text(int recordRow, string subject) => Row(recordRow, subject) is var r && r >= 0 ? _column.GetText(r) : null;
 

@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Security.Cryptography;
 using System.Text;
 using CsvHelper;
 using OutputForge.Expressions;
@@ -32,8 +33,13 @@ public static class CsvDatasetReader
         {
             throw new DataException(path, null, null, $"cannot read the file ({e.Message})");
         }
+        // The manifest names the bytes that were parsed: their SHA-256 is computed on another core while they are
+        // parsed, instead of reading the file a second time afterwards.
+        var digest = Task.Run(() => Convert.ToHexStringLower(SHA256.HashData(bytes)));
         var bodyStart = CheckEncoding(path, bytes);
-        return Parse(name, path, bytes, bodyStart, options, warn);
+        var dataset = Parse(name, path, bytes, bodyStart, options, warn);
+        dataset.ContentSha256 = digest.GetAwaiter().GetResult();
+        return dataset;
     }
 
     private static int CheckEncoding(string path, byte[] bytes)

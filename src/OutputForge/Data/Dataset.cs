@@ -25,6 +25,9 @@ public sealed class Dataset : IVariableSource
 
     public int RowCount { get; }
 
+    /// <summary>The SHA-256 (lower-case hex) of the file's bytes as read, or null for a dataset built in memory.</summary>
+    public string? ContentSha256 { get; internal set; }
+
     public IReadOnlyList<DataColumn> Columns { get; }
 
     /// <summary>The line of the file on which each row starts (1-based; line 1 is the header).</summary>

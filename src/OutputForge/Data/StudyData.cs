@@ -11,9 +11,33 @@ public sealed class StudyData
     {
         Folder = folder;
         _datasets = datasets;
+        _subjectLevelRowOfSubject = new Lazy<Dictionary<string, int>>(() =>
+        {
+            var adsl = SubjectLevel;
+            var subjects = adsl.Get(AdamConformance.SubjectVariable);
+            var rowOfSubject = new Dictionary<string, int>(adsl.RowCount, StringComparer.Ordinal);
+            for (var row = 0; row < adsl.RowCount; row++)
+            {
+                rowOfSubject[subjects.GetText(row)!] = row;
+            }
+            return rowOfSubject;
+        }, LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
     public string Folder { get; }
+
+    private readonly Lazy<Dictionary<string, int>> _subjectLevelRowOfSubject;
+    private readonly System.Collections.Concurrent.ConcurrentDictionary<string, Lazy<SubjectLevelRows>> _subjectLevelRows = new(StringComparer.Ordinal);
+
+    /// <summary>
+    /// The ADSL rows of the records of <paramref name="records"/>: shared by all tables when it is one of this study's
+    /// datasets, made anew for any other (such as records a table derived).
+    /// </summary>
+    public SubjectLevelRows SubjectLevelRowsOf(Dataset records) =>
+        _datasets.TryGetValue(records.Name, out var own) && ReferenceEquals(own, records)
+            ? _subjectLevelRows.GetOrAdd(records.Name, _ => new Lazy<SubjectLevelRows>(
+                () => new SubjectLevelRows(_subjectLevelRowOfSubject.Value, records.RowCount), LazyThreadSafetyMode.ExecutionAndPublication)).Value
+            : new SubjectLevelRows(_subjectLevelRowOfSubject.Value, records.RowCount);
 
     public Dataset SubjectLevel => _datasets["adsl"];
 
@@ -46,16 +70,39 @@ public sealed class StudyData
         {
             throw new DataException(folder, null, null, "no such data folder");
         }
-        var datasets = new Dictionary<string, Dataset>(StringComparer.Ordinal);
-        foreach (var (name, fileName) in study.Data.Datasets.OrderBy(d => d.Key == "adsl" ? 0 : 1).ThenBy(d => d.Key, StringComparer.Ordinal))
+        var files = study.Data.Datasets.OrderBy(d => d.Key == "adsl" ? 0 : 1).ThenBy(d => d.Key, StringComparer.Ordinal).ToList();
+        // The files are read on all cores (one large BDS file would otherwise keep the others waiting); each keeps its
+        // warnings and error, replayed below in the listed order, so messages do not depend on thread timing.
+        var outcomes = new (Dataset? Dataset, List<string> Warnings, Exception? Error)[files.Count];
+        Parallel.For(0, files.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
         {
-            var path = Path.Combine(folder, fileName);
-            if (!File.Exists(path))
+            var (name, fileName) = files[i];
+            var warnings = new List<string>();
+            try
             {
-                throw new DataException(path, null, null,
-                    $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
+                var path = Path.Combine(folder, fileName);
+                if (!File.Exists(path))
+                {
+                    throw new DataException(path, null, null,
+                        $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
+                }
+                outcomes[i] = (CsvDatasetReader.Read(name, path, options, warnings.Add), warnings, null);
             }
-            datasets[name] = CsvDatasetReader.Read(name, path, options, warn);
+            catch (Exception e)
+            {
+                outcomes[i] = (null, warnings, e);
+            }
+        });
+        var datasets = new Dictionary<string, Dataset>(StringComparer.Ordinal);
+        for (var i = 0; i < files.Count; i++)
+        {
+            var (dataset, warnings, error) = outcomes[i];
+            warnings.ForEach(warn);
+            if (error is not null)
+            {
+                System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(error).Throw();
+            }
+            datasets[files[i].Key] = dataset!;
         }
         var adsl = datasets["adsl"];
         AdamConformance.CheckSubjectLevel(adsl);

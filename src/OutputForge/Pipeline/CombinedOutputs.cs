@@ -12,27 +12,32 @@ namespace OutputForge.Pipeline;
 /// </summary>
 public static class CombinedOutputs
 {
-    public static void Write(OutputStaging staging, IReadOnlyList<ITableRenderer> renderers, IReadOnlyList<LaidOutTable> tables, DateTimeOffset runTime)
+    /// <summary>The combined files' names and bytes, each document rendered on its own core.</summary>
+    /// <param name="workbook">The combined workbook when it was built beside the tables (<see cref="CombinedWorkbookBuilder"/>).</param>
+    internal static IReadOnlyList<(string Name, byte[] Bytes)> Render(IReadOnlyList<ITableRenderer> renderers, IReadOnlyList<LaidOutTable> tables,
+        DateTimeOffset runTime, CombinedWorkbookBuilder? workbook = null)
     {
         var ordered = tables.OrderBy(t => t.Document.TableId, TableIdOrder.Instance).ToList();
         var documents = ordered.Select(t => t.Document).ToList();
+        var jobs = new List<(string Name, Func<byte[]> Render)>();
         if (renderers.Any(r => r is WordTableRenderer))
         {
-            Save(staging, OutputFileNames.Combined + ".docx", runTime, s => new WordCombinedRenderer().Write(documents, s));
+            jobs.Add((OutputFileNames.Combined + ".docx", () => Bytes(s => new WordCombinedRenderer().Write(documents, s), runTime)));
         }
         if (renderers.Any(r => r is ExcelTableRenderer))
         {
-            var records = ordered.SelectMany(t => t.Records).ToList();
-            Save(staging, OutputFileNames.Combined + ".xlsx", runTime, s => new ExcelWorkbookRenderer().Write(documents, s, records));
+            jobs.Add((OutputFileNames.Combined + ".xlsx", workbook is not null ? workbook.Bytes : () => Bytes(s =>
+                new ExcelWorkbookRenderer().Write(documents, s, ordered.SelectMany(t => t.Records).ToList()), runTime)));
         }
+        var bytes = new byte[jobs.Count][];
+        InOrderParallel.For(jobs.Count, i => bytes[i] = jobs[i].Render());
+        return jobs.Select((job, i) => (job.Name, bytes[i])).ToList();
     }
 
-    private static void Save(OutputStaging staging, string name, DateTimeOffset runTime, Action<Stream> render)
+    private static byte[] Bytes(Action<Stream> render, DateTimeOffset runTime)
     {
         using var buffer = new MemoryStream();
         render(buffer);
-        var bytes = PackageNormalizer.Normalize(buffer.ToArray(), runTime);
-        using var stream = staging.Create(name);
-        stream.Write(bytes);
+        return PackageNormalizer.Normalize(buffer.ToArray(), runTime);
     }
 }

@@ -3,6 +3,7 @@ using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Layout;
 using OutputForge.Rendering;
+using OutputForge.Rendering.Excel;
 using OutputForge.Spec;
 using OutputForge.Templates;
 using OutputForge.Workflow;
@@ -34,7 +35,9 @@ public static class PackageRunner
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
+        var digesting = Stopwatch.StartNew();
         var inputs = RunInputs.Read(package, data);
+        log.Detail($"inputs: SHA-256 digests of the spec and data files in {digesting.Elapsed.TotalMilliseconds:0} ms");
         var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
         {
@@ -45,8 +48,22 @@ public static class PackageRunner
         var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
         var context = new LayoutContext(templates, ColumnGroupsOf(study));
-        var built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log);
+        var workbook = request.Combined && selected.Count > 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
+            ? new CombinedWorkbookBuilder(selected.Select(t => t.Id).ToList(), run.RunTime)
+            : null;
+        BuiltTable[] built;
+        try
+        {
+            built = BuildTables(selected, request, study, data, dataWarnings, inputs, run, studyLine, page, context, log, workbook);
+        }
+        catch
+        {
+            workbook?.AbandonAll();
+            throw;
+        }
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        log.Detail(CollectorFacts.Describe());
+        var writing = new StageTimes();
         var manifestTables = built.Select(b => b.Manifest).ToList();
         var laidOut = built.Select(b => (b.Table, b.Warnings)).ToList();
         foreach (var table in built)
@@ -66,20 +83,41 @@ public static class PackageRunner
                 stream.Write(bytes);
             }
         }
-        if (request.Combined && laidOut.Count > 0)
+        writing.Lap("table files");
+        // The combined documents and results.json are rendered at the same time (each on its own core), then staged in
+        // the fixed order: combined documents, results.json.
+        IReadOnlyList<(string Name, byte[] Bytes)> combined = [];
+        byte[] results = [];
+        InOrderParallel.Invoke(
+            () =>
+            {
+                if (request.Combined && laidOut.Count > 0)
+                {
+                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime, workbook);
+                }
+            },
+            () =>
+            {
+                using var buffer = new MemoryStream();
+                var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
+                ResultsJsonWriter.Write(buffer, study.Study.Id, run, laidOut, kept, package.Tables.Select(t => t.Id).ToList());
+                results = buffer.ToArray();
+            });
+        foreach (var (name, bytes) in combined.Append((ResultsFileName, results)))
         {
-            CombinedOutputs.Write(staging, request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime);
+            using var stream = staging.Create(name);
+            stream.Write(bytes);
         }
-        using (var stream = staging.Create(ResultsFileName))
-        {
-            var kept = request.Tables is null ? null : KeptResults.Read(request.OutputFolder);
-            ResultsJsonWriter.Write(stream, study.Study.Id, run, laidOut, kept, package.Tables.Select(t => t.Id).ToList());
-        }
+        writing.Lap("combined and results.json");
         var previous = request.Tables is not null && File.Exists(Path.Combine(request.OutputFolder, ManifestJson.FileName))
             ? ManifestJson.Read(request.OutputFolder)
             : null;
         ManifestStaging.Write(staging, request, dataFolder, study.Study.Id, run.RunTime, inputs, manifestTables, previous);
+        writing.Lap("manifest");
         var files = staging.Commit();
+        writing.Lap("commit");
+        log.Detail($"after the tables: {writing}");
+        log.Detail(CollectorFacts.Describe());
         foreach (var (table, _) in laidOut)
         {
             var names = request.Renderers.Select(r => OutputFileNames.ForTable(table.Document.TableId, r.Extension)).ToList();
@@ -113,29 +151,33 @@ public static class PackageRunner
     /// message does not depend on thread timing.
     /// </summary>
     private static BuiltTable[] BuildTables(IReadOnlyList<TableSpec> selected, RunRequest request, StudySpec study, StudyData data,
-        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context, IRunLog log)
+        IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context, IRunLog log,
+        CombinedWorkbookBuilder? workbook)
     {
         var built = new BuiltTable[selected.Count];
-        var failures = new Exception?[selected.Count];
         var done = 0;
-        Parallel.For(0, selected.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        // The tables already keep every core busy; MathNet's own threads inside a factorization would only contend with
+        // them (spinning and waiting). Each column of its algorithms is computed the same way on one thread.
+        MathNet.Numerics.Control.UseSingleThread();
+        InOrderParallel.For(selected.Count, i =>
         {
             try
             {
                 var clock = Stopwatch.StartNew();
                 built[i] = BuildTable(selected[i], request, study, data, dataWarnings, inputs, run, studyLine, page, context);
+                workbook?.Ready(i, built[i].Table);
                 log.Detail($"table {selected[i].Id}: built in {clock.Elapsed.TotalMilliseconds:0} ms ({built[i].Times})");
             }
-            catch (Exception e)
+            catch
             {
-                failures[i] = e;
+                workbook?.Abandon(i);
+                throw;
             }
-            log.Progress(Interlocked.Increment(ref done), selected.Count, selected[i].Id);
-        });
-        if (failures.FirstOrDefault(f => f is not null) is { } failure)
-        {
-            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(failure).Throw();
-        }
+            finally
+            {
+                log.Progress(Interlocked.Increment(ref done), selected.Count, selected[i].Id);
+            }
+        }, TableWorkOrder.Of(selected));
         return built;
     }
 

@@ -53,8 +53,7 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         foreach (var visit in settings.Visits.Distinct())
         {
             var visitKey = ResultKeys.FromLabel(visit);
-            var rowOfSubject = records.RowOfSubject(visit);
-            var subjectsOf = SubjectsByArm(selection, rowOfSubject);
+            var subjectsOf = SubjectsByArm(selection, records.InRowOrder(visit));
             rows.Add(Section(visitKey, visit, columns));
             if (baseline is not null)
             {
@@ -109,21 +108,17 @@ public sealed class ContinuousAnalysis : ITableAnalysis
             new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), statistics.PercentDecimals, statistics.PValueFloor);
     }
 
-    /// <summary>The subjects of each arm with a record at the visit, in record order, from one pass over the population.</summary>
-    private static Dictionary<TreatmentArm, List<(string Subject, int Row)>> SubjectsByArm(PopulationSelection selection, IReadOnlyDictionary<string, int> rowOfSubject)
+    /// <summary>The subjects of each arm with a record at the visit, in record order, from one pass over the visit's records.</summary>
+    private static Dictionary<TreatmentArm, List<(string Subject, int Row)>> SubjectsByArm(PopulationSelection selection,
+        IReadOnlyList<(string Subject, int Row)> records)
     {
         var subjectsOf = selection.Arms.ToDictionary(a => a, _ => new List<(string Subject, int Row)>());
-        foreach (var (subject, arm) in selection.ArmOfSubject)
+        foreach (var (subject, row) in records)
         {
-            if (rowOfSubject.TryGetValue(subject, out var row) && subjectsOf.TryGetValue(arm, out var subjects))
+            if (selection.ArmOfSubject.TryGetValue(subject, out var arm) && subjectsOf.TryGetValue(arm, out var subjects))
             {
                 subjects.Add((subject, row));
             }
-        }
-        // Each subject has its own record, so the rows are distinct and the order is that of the records.
-        foreach (var subjects in subjectsOf.Values)
-        {
-            subjects.Sort((a, b) => a.Row.CompareTo(b.Row));
         }
         return subjectsOf;
     }
@@ -135,8 +130,8 @@ public sealed class ContinuousAnalysis : ITableAnalysis
     private static void AddSummary(List<ResultRow> rows, string key, string label, RecordVariable variable,
         Dictionary<TreatmentArm, List<(string Subject, int Row)>> subjectsOf, IReadOnlyList<ResultColumn> columns, int d)
     {
-        var summaries = subjectsOf.ToDictionary(p => p.Key.Key, p => DescriptiveStatistics.Compute(p.Value
-            .Select(s => variable.Number(s.Row, s.Subject)).Where(double.IsFinite).ToList()));
+        var summaries = subjectsOf.ToDictionary(p => p.Key.Key, p => DescriptiveStatistics.Compute(FiniteValues(variable, p.Value),
+            geometricMean: false));
         rows.Add(new ResultRow(key, label, 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
         rows.Add(new ResultRow($"{key}-n", "n", 2, columns.Select(c => CellFactory.Count(c.Key, summaries[c.Key].N)).ToList()));
         rows.Add(new ResultRow($"{key}-mean", "Mean (SD)", 2, columns.Select(c => Cell(c.Key, "{mean} ({sd})", summaries[c.Key],
@@ -145,6 +140,21 @@ public sealed class ContinuousAnalysis : ITableAnalysis
             (Median, s => s.Median, d + 1))).ToList()));
         rows.Add(new ResultRow($"{key}-range", "Min, Max", 2, columns.Select(c => Cell(c.Key, "{min}, {max}", summaries[c.Key],
             (Minimum, s => s.Minimum, d), (Maximum, s => s.Maximum, d))).ToList()));
+    }
+
+    /// <summary>The variable's non-missing values over the records, in record order.</summary>
+    private static List<double> FiniteValues(RecordVariable variable, List<(string Subject, int Row)> records)
+    {
+        var values = new List<double>(records.Count);
+        foreach (var (subject, row) in records)
+        {
+            var value = variable.Number(row, subject);
+            if (double.IsFinite(value))
+            {
+                values.Add(value);
+            }
+        }
+        return values;
     }
 
     private static ResultCell Cell(string column, string pattern, DescriptiveSummary summary,

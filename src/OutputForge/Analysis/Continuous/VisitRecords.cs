@@ -6,21 +6,22 @@ namespace OutputForge.Analysis.Continuous;
 
 /// <summary>
 /// The endpoint records of each visit of a continuous table (PARAMCD, the endpoint's further
-/// condition, and AVISIT = the visit), at most one per subject and visit, keyed by USUBJID.
+/// condition, and AVISIT = the visit), at most one per subject and visit, in row order with their USUBJID.
 /// </summary>
 internal sealed class VisitRecords
 {
-    private VisitRecords(Dataset dataset, IReadOnlyDictionary<string, Dictionary<string, int>> byVisit)
+    private VisitRecords(Dataset dataset, IReadOnlyDictionary<string, List<(string Subject, int Row)>> inRowOrder)
     {
         Dataset = dataset;
-        _byVisit = byVisit;
+        _inRowOrder = inRowOrder;
     }
 
-    private readonly IReadOnlyDictionary<string, Dictionary<string, int>> _byVisit;
+    private readonly IReadOnlyDictionary<string, List<(string Subject, int Row)>> _inRowOrder;
 
     public Dataset Dataset { get; }
 
-    public IReadOnlyDictionary<string, int> RowOfSubject(string visit) => _byVisit[visit];
+    /// <summary>The visit's records with their subjects, in row order.</summary>
+    public IReadOnlyList<(string Subject, int Row)> InRowOrder(string visit) => _inRowOrder[visit];
 
     public static VisitRecords Select(TableSpec table, StudyData data)
     {
@@ -55,23 +56,40 @@ internal sealed class VisitRecords
         }
         var where = endpoint.Where is null ? null : new SpecConditionText(endpoint.Where, table.Source, "/endpoint/where").Compile(dataset);
         var subjects = dataset.Get(AdamConformance.SubjectVariable);
-        var byVisit = settings.Visits.Distinct().ToDictionary(v => v, _ => new Dictionary<string, int>(StringComparer.Ordinal), StringComparer.Ordinal);
-        var count = candidates?.Count ?? dataset.RowCount;
-        for (var i = 0; i < count; i++)
+        var inRowOrder = new Dictionary<string, List<(string Subject, int Row)>>(StringComparer.Ordinal);
+        // Each visit's records are the rows both of the parameter and of AVISIT = visit, taken from the columns' shared
+        // indexes (ascending rows) instead of reading the visit of every record of the parameter.
+        (string Visit, int First, int Second)? duplicate = null;
+        foreach (var visit in settings.Visits.Distinct())
         {
-            var row = candidates?[i] ?? i;
-            if ((where is not null && !where.Matches(row)) || visitVariable.GetText(row) is not { } visit
-                || !byVisit.TryGetValue(visit, out var rows))
+            var rows = new Dictionary<string, int>(StringComparer.Ordinal);
+            var ordered = new List<(string Subject, int Row)>();
+            inRowOrder[visit] = ordered;
+            var visitRows = visitVariable.RowsWith(visit);
+            foreach (var row in candidates is null ? visitRows : SortedRows.Intersection(visitRows, candidates))
             {
-                continue;
-            }
-            var subject = subjects.GetText(row)!;
-            if (!rows.TryAdd(subject, row))
-            {
-                throw new SpecException(table.Source.Problem(endpoint.Where is null ? "/endpoint" : "/endpoint/where",
-                    $"the endpoint selects more than one {visit} record of subject {subject} ({file} lines {dataset.LineOfRow[rows[subject]]} and {dataset.LineOfRow[row]}); narrow the selection so that each subject has at most one record per visit (e.g. ANL01FL = 'Y')"));
+                if (where is not null && !where.Matches(row))
+                {
+                    continue;
+                }
+                var subject = subjects.GetText(row)!;
+                if (!rows.TryAdd(subject, row))
+                {
+                    // Reading all records in row order would stop at the lowest repeated row of any visit.
+                    if (duplicate is null || row < duplicate.Value.Second)
+                    {
+                        duplicate = (visit, rows[subject], row);
+                    }
+                    break;
+                }
+                ordered.Add((subject, row));
             }
         }
-        return new VisitRecords(dataset, byVisit);
+        if (duplicate is (var repeated, var first, var second))
+        {
+            throw new SpecException(table.Source.Problem(endpoint.Where is null ? "/endpoint" : "/endpoint/where",
+                $"the endpoint selects more than one {repeated} record of subject {subjects.GetText(second)} ({file} lines {dataset.LineOfRow[first]} and {dataset.LineOfRow[second]}); narrow the selection so that each subject has at most one record per visit (e.g. ANL01FL = 'Y')"));
+        }
+        return new VisitRecords(dataset, inRowOrder);
     }
 }

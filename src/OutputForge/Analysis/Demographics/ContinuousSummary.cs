@@ -31,9 +31,10 @@ public static class ContinuousSummary
         }
         // Hyndman-Fan definition 2 is SAS's default (QNTLDEF=5), definition 7 R's.
         var quantiles = settings.Quartiles == "hyndman-fan-7" ? QuantileDefinition.R7 : QuantileDefinition.R2;
+        var geometricMean = layouts.Any(l => l.Statistics.Contains(GeometricMean));
         var summaries = columns.ToDictionary(c => c.Key, c => Summarize(
             subjects.Where(s => c.Holds(s.Arm) && !double.IsNaN(column.GetNumber(s.Row))).Select(s => column.GetNumber(s.Row)).ToList(),
-            quantiles));
+            quantiles, geometricMean));
 
         var rows = new List<ResultRow>();
         foreach (var layout in layouts)
@@ -55,9 +56,10 @@ public static class ContinuousSummary
     /// The descriptive statistics, with the median and quartiles taken on exact decimals, so that one
     /// lying on a rounding midpoint (0.65 from 0.6 and 0.7) displays as it should.
     /// </summary>
-    private static DescriptiveSummary Summarize(List<double> values, QuantileDefinition quantiles)
+    /// <param name="geometricMean">Whether a row shows the geometric mean (it costs a logarithm and an exact mean per value).</param>
+    private static DescriptiveSummary Summarize(List<double> values, QuantileDefinition quantiles, bool geometricMean)
     {
-        var summary = DescriptiveStatistics.Compute(values, quantiles);
+        var summary = DescriptiveStatistics.Compute(values, quantiles, geometricMean);
         if (values.Count == 0)
         {
             return summary;

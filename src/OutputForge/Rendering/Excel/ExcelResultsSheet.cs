@@ -30,6 +30,9 @@ public static class ExcelResultsSheet
             sheet.Column(c + 1).Width = Columns[c].Width;
         }
         int row = 2;
+        // Every number cell gets the same style: it is built on the first and then assigned whole, one look-up in
+        // ClosedXML's style repository instead of two changes per cell.
+        IXLStyle? numberStyle = null;
         foreach (var record in records)
         {
             Text(sheet.Cell(row, 1), record.Table);
@@ -38,10 +41,20 @@ public static class ExcelResultsSheet
             Text(sheet.Cell(row, 4), record.Statistic);
             if (record.Value is double value && double.IsFinite(value))
             {
-                sheet.Cell(row, 5).SetValue(value);
-                // General shows up to 11 significant digits; the cell holds 15.
-                sheet.Cell(row, 5).Style.NumberFormat.Format = "General";
-                sheet.Cell(row, 5).Style.Alignment.Horizontal = XLAlignmentHorizontalValues.Left;
+                // One lookup of the cell (ClosedXML finds or makes it by address on every call).
+                var cell = sheet.Cell(row, 5);
+                cell.SetValue(value);
+                if (numberStyle is null)
+                {
+                    // General shows up to 11 significant digits; the cell holds 15.
+                    cell.Style.NumberFormat.Format = "General";
+                    cell.Style.Alignment.Horizontal = XLAlignmentHorizontalValues.Left;
+                    numberStyle = cell.Style;
+                }
+                else
+                {
+                    cell.Style = numberStyle;
+                }
             }
             else if (record.Value is double other)
             {

@@ -19,20 +19,34 @@ public sealed class ExcelWorkbookRenderer
         // Check every table before writing, so that a bad table leaves no partial workbook behind.
         foreach (var document in documents)
             TableShape.Check(document);
+        WriteInOrder(documents, output, results is null ? null : () => results);
+    }
 
+    /// <summary>
+    /// Writes each table's sheet as soon as <paramref name="documents"/> yields it (the tables of a run can still be
+    /// in the making), then the results sheet from <paramref name="results"/>, asked for after the last table.
+    /// Each table is checked when it arrives.
+    /// </summary>
+    public void WriteInOrder(IEnumerable<TableDocument> documents, Stream output, Func<IReadOnlyList<Results.ResultRecord>>? results)
+    {
         using var workbook = new XLWorkbook();
-        workbook.Properties.Title = documents.Count == 1
-            ? string.Join(" ", new[] { documents[0].Heading }.Concat(documents[0].Titles))
-            : string.Join(", ", documents.Select(d => d.Heading));
-
         var names = new ExcelSheetName();
+        var written = new List<TableDocument>();
         foreach (var document in documents)
         {
+            TableShape.Check(document);
             var sheet = workbook.Worksheets.Add(names.Next(document.TableId));
             new ExcelSheetWriter(document).Write(sheet);
+            written.Add(document);
         }
+        if (written.Count == 0)
+            throw new TableRenderException("A workbook needs at least one table.");
+        // The title goes into the package's core properties, which are written on saving.
+        workbook.Properties.Title = written.Count == 1
+            ? string.Join(" ", new[] { written[0].Heading }.Concat(written[0].Titles))
+            : string.Join(", ", written.Select(d => d.Heading));
         if (results is not null)
-            ExcelResultsSheet.Write(workbook.Worksheets.Add(names.Next(ExcelResultsSheet.Name)), results);
+            ExcelResultsSheet.Write(workbook.Worksheets.Add(names.Next(ExcelResultsSheet.Name)), results());
         using var package = new MemoryStream();
         workbook.SaveAs(package);
         ExcelPrintTitles.MakeAbsolute(package);

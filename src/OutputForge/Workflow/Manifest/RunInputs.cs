@@ -5,8 +5,9 @@ using OutputForge.Spec;
 namespace OutputForge.Workflow.Manifest;
 
 /// <summary>
-/// The spec and data files of a run with their SHA-256 digests, read once before any table is
-/// produced, so the manifest and every table's source line name the same bytes.
+/// The spec and data files of a run with their SHA-256 digests, taken before any table is produced
+/// (a data file's from the very bytes its reader parsed), so the manifest and every table's source
+/// line name the same bytes.
 /// </summary>
 public sealed record RunInputs(IReadOnlyList<ManifestFile> Specs, IReadOnlyList<ManifestFile> Data)
 {
@@ -20,7 +21,7 @@ public sealed record RunInputs(IReadOnlyList<ManifestFile> Specs, IReadOnlyList<
         specs.AddRange(package.Tables.Select(t => new ManifestFile(SpecPaths.RelativeToStudy(study, t), FileDigest.Sha256(t.Source.File))));
         var files = study.Data.Datasets
             .OrderBy(d => d.Key, StringComparer.Ordinal)
-            .Select(d => new ManifestFile(d.Value, FileDigest.Sha256(Path.Combine(data.Folder, d.Value)), d.Key, data[d.Key].RowCount))
+            .Select(d => new ManifestFile(d.Value, data[d.Key].ContentSha256 ?? FileDigest.Sha256(Path.Combine(data.Folder, d.Value)), d.Key, data[d.Key].RowCount))
             .ToList();
         return new RunInputs(specs, files);
     }
