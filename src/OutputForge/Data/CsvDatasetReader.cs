@@ -116,6 +116,7 @@ public static class CsvDatasetReader
             var lines = new int[capacity];
             var rows = 0;
             var replaced = 0;
+            var repeats = new RepeatedText[header.Length];
             while (reader.Read())
             {
                 var line = (int)reader.LineNumber;
@@ -140,6 +141,11 @@ public static class CsvDatasetReader
                     {
                         continue;
                     }
+                    if (repeats[c].Matches(utf8) is { } repeated)
+                    {
+                        columns[c].AddText(repeated, line);
+                        continue;
+                    }
                     var value = reader.GetString(c);
                     if (value.Length > MaxFieldLength)
                     {
@@ -150,6 +156,10 @@ public static class CsvDatasetReader
                     if (utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 && ControlCharacters.IndexIn(value) >= 0)
                     {
                         value = HandleControlCharacter(path, line, header[c], value, options, warn, ref replaced);
+                    }
+                    else
+                    {
+                        repeats[c].Remember(utf8, value);
                     }
                     columns[c].AddText(value, line);
                 }

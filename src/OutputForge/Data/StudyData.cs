@@ -36,7 +36,10 @@ public sealed class StudyData
     public SubjectLevelRows SubjectLevelRowsOf(Dataset records) =>
         _datasets.TryGetValue(records.Name, out var own) && ReferenceEquals(own, records)
             ? _subjectLevelRows.GetOrAdd(records.Name, _ => new Lazy<SubjectLevelRows>(
-                () => new SubjectLevelRows(_subjectLevelRowOfSubject.Value, records.RowCount), LazyThreadSafetyMode.ExecutionAndPublication)).Value
+                () => records.Find(AdamConformance.SubjectVariable) is { } subjects
+                    ? new SubjectLevelRows(_subjectLevelRowOfSubject.Value, subjects)
+                    : new SubjectLevelRows(_subjectLevelRowOfSubject.Value, records.RowCount),
+                LazyThreadSafetyMode.ExecutionAndPublication)).Value
             : new SubjectLevelRows(_subjectLevelRowOfSubject.Value, records.RowCount);
 
     public Dataset SubjectLevel => _datasets["adsl"];

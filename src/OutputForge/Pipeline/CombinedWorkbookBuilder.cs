@@ -49,20 +49,36 @@ internal sealed class CombinedWorkbookBuilder
         }
     }
 
+    /// <summary>Where the workbook's time went (for --verbose): waiting for tables, their sheets, the results sheet and saving.</summary>
+    public string Times => _times.ToString();
+
+    private readonly StageTimes _times = new();
+
     private byte[] Render(DateTimeOffset runTime)
     {
         var tables = new List<LaidOutTable>();
+        var waiting = TimeSpan.Zero;
         IEnumerable<TableDocument> InOrder()
         {
             foreach (var i in _order)
             {
+                var clock = System.Diagnostics.Stopwatch.StartNew();
                 var table = _tables[i].Task.GetAwaiter().GetResult();
+                waiting += clock.Elapsed;
                 tables.Add(table);
                 yield return table.Document;
             }
         }
+        IReadOnlyList<Results.ResultRecord> Records()
+        {
+            _times.Lap($"waiting for tables {waiting.TotalMilliseconds:0}, sheets");
+            return tables.SelectMany(t => t.Records).ToList();
+        }
         using var buffer = new MemoryStream();
-        new ExcelWorkbookRenderer().WriteInOrder(InOrder(), buffer, () => tables.SelectMany(t => t.Records).ToList());
-        return PackageNormalizer.Normalize(buffer.ToArray(), runTime);
+        new ExcelWorkbookRenderer().WriteInOrder(InOrder(), buffer, Records);
+        _times.Lap("results sheet and saving");
+        var bytes = PackageNormalizer.Normalize(buffer.ToArray(), runTime);
+        _times.Lap("normalizing");
+        return bytes;
     }
 }

@@ -109,6 +109,10 @@ public static class PackageRunner
             stream.Write(bytes);
         }
         writing.Lap("combined and results.json");
+        if (workbook is not null)
+        {
+            log.Detail($"combined workbook (built beside the tables): {workbook.Times}");
+        }
         var previous = request.Tables is not null && File.Exists(Path.Combine(request.OutputFolder, ManifestJson.FileName))
             ? ManifestJson.Read(request.OutputFolder)
             : null;

@@ -1,26 +1,21 @@
+using OutputForge.Layout;
 using OutputForge.Spec;
 
 namespace OutputForge.Pipeline;
 
 /// <summary>
-/// The order in which the cores take up the tables: the slowest kinds first (longest processing time first), so
-/// that the run does not end with one core building a large table while the other waits. Only the order of work
-/// changes: every table is still analysed on its own and the outputs stay in package order. The weights are the
-/// kinds' relative costs on the pooled study (docs/performance.md, per-table timings of `run --verbose`).
+/// The order in which the cores take up the tables: table-number order, so that the combined workbook, written sheet
+/// by sheet in that order beside the tables (<see cref="CombinedWorkbookBuilder"/>), can take each table soon after
+/// it is ready; except that the subgroup tables, several times slower than any other (a logistic regression per
+/// subgroup, docs/performance.md), go first, so that the run does not end with one core on them while the other
+/// waits. Only the order of work changes: every table is analysed on its own and the outputs stay in package order.
 /// </summary>
 internal static class TableWorkOrder
 {
     public static int[] Of(IReadOnlyList<TableSpec> tables) =>
-        Enumerable.Range(0, tables.Count).OrderByDescending(i => Weight(tables[i])).ThenBy(i => i).ToArray();
-
-    private static int Weight(TableSpec table) => table.Kind switch
-    {
-        "subgroups" => 20,
-        // One model (and its descriptive rows) per visit.
-        "continuous" => 4 * Math.Max(1, table.Continuous?.Visits.Count ?? 1),
-        "demographics" => 10,
-        "adverse-events" or "time-to-event" or "categorical-by-visit" or "disposition" => 5,
-        "responders" => 2,
-        _ => 1,
-    };
+        Enumerable.Range(0, tables.Count)
+            .OrderBy(i => tables[i].Kind == "subgroups" ? 0 : 1)
+            .ThenBy(i => tables[i].Id, TableIdOrder.Instance)
+            .ThenBy(i => i)
+            .ToArray();
 }

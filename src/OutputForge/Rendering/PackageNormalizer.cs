@@ -17,6 +17,10 @@ public static partial class PackageNormalizer
     [GeneratedRegex(@"Id=""(R[0-9a-f]{16})""")]
     private static partial Regex RandomRelationshipId();
 
+    // Generated rather than interpreted: it scans every XML part, the largest of a combined workbook being tens of megabytes.
+    [GeneratedRegex(@"\bR[0-9a-f]{16}\b")]
+    private static partial Regex AnyRelationshipId();
+
     [GeneratedRegex(@"[0-9a-f]{32}\.psmdcp")]
     private static partial Regex RandomCorePropertiesName();
 
@@ -86,7 +90,7 @@ public static partial class PackageNormalizer
         rewritten = DocumentDates().Replace(rewritten, m => m.Groups[1].Value + stamp + m.Groups[3].Value);
         if (renames.Count > 0)
         {
-            rewritten = Regex.Replace(rewritten, @"\bR[0-9a-f]{16}\b", m => renames.GetValueOrDefault(m.Value, m.Value));
+            rewritten = AnyRelationshipId().Replace(rewritten, m => renames.GetValueOrDefault(m.Value, m.Value));
         }
         return ReferenceEquals(rewritten, text) || rewritten == text ? content : Encoding.UTF8.GetBytes(rewritten);
     }
