@@ -106,6 +106,12 @@ internal sealed class FisherNetworkEnumeration
         {
             return null;
         }
+        catch (AggregateException e) when (e.Flatten().InnerExceptions.All(inner => inner is WorkLimitReachedException))
+        {
+            // The bounds are all found before the parallel stages, so this is not expected; should a bound still be
+            // computed inside one, its work limit must end in the same "too large" result, not an exception.
+            return null;
+        }
     }
 
     private double? Enumerate(int[] rowTotals, double threshold, double constant)
