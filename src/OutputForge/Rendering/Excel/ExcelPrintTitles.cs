@@ -16,9 +16,8 @@ public static partial class ExcelPrintTitles
     [GeneratedRegex(@"!\$?(\d+):\$?(\d+)$")]
     private static partial Regex RowRange();
 
-    public static void MakeAbsolute(Stream package)
+    public static void MakeAbsolute(SpreadsheetDocument document)
     {
-        using var document = SpreadsheetDocument.Open(package, isEditable: true);
         var names = document.WorkbookPart?.Workbook.DefinedNames;
         if (names is null)
             return;

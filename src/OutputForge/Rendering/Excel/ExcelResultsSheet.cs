@@ -20,7 +20,12 @@ public static class ExcelResultsSheet
         ("rowLabel", 40), ("columnLabel", 16), ("method", 30), ("note", 40),
     ];
 
-    public static void Write(IXLWorksheet sheet, IReadOnlyList<ResultRecord> records)
+    /// <summary>
+    /// Writes the sheet's frame for <paramref name="records"/>: header row, widths, frozen row, autofilter over every
+    /// row to come, print setup, and a probe row that gives the value cells their style. The rows themselves are
+    /// streamed into the saved package by <see cref="ExcelResultsRows.Fill"/>.
+    /// </summary>
+    public static void WriteFrame(IXLWorksheet sheet, IReadOnlyList<ResultRecord> records)
     {
         for (int c = 0; c < Columns.Length; c++)
         {
@@ -29,45 +34,15 @@ public static class ExcelResultsSheet
             cell.Style.Font.Bold = true;
             sheet.Column(c + 1).Width = Columns[c].Width;
         }
-        int row = 2;
-        // Every number cell gets the same style: it is built on the first and then assigned whole, one look-up in
-        // ClosedXML's style repository instead of two changes per cell.
-        IXLStyle? numberStyle = null;
-        foreach (var record in records)
+        if (records.Any(r => r.Value is double value && double.IsFinite(value)))
         {
-            Text(sheet.Cell(row, 1), record.Table);
-            Text(sheet.Cell(row, 2), record.Row);
-            Text(sheet.Cell(row, 3), record.Column);
-            Text(sheet.Cell(row, 4), record.Statistic);
-            if (record.Value is double value && double.IsFinite(value))
-            {
-                // One lookup of the cell (ClosedXML finds or makes it by address on every call).
-                var cell = sheet.Cell(row, 5);
-                cell.SetValue(value);
-                if (numberStyle is null)
-                {
-                    // General shows up to 11 significant digits; the cell holds 15.
-                    cell.Style.NumberFormat.Format = "General";
-                    cell.Style.Alignment.Horizontal = XLAlignmentHorizontalValues.Left;
-                    numberStyle = cell.Style;
-                }
-                else
-                {
-                    cell.Style = numberStyle;
-                }
-            }
-            else if (record.Value is double other)
-            {
-                Text(sheet.Cell(row, 5), other.ToString(System.Globalization.CultureInfo.InvariantCulture));
-            }
-            Text(sheet.Cell(row, 6), record.Formatted);
-            Text(sheet.Cell(row, 7), record.RowLabel);
-            Text(sheet.Cell(row, 8), record.ColumnLabel);
-            Text(sheet.Cell(row, 9), record.Method ?? string.Empty);
-            Text(sheet.Cell(row, 10), record.Note ?? string.Empty);
-            row++;
+            var probe = sheet.Cell(2, 5);
+            probe.SetValue(ExcelResultsRows.ProbeValue);
+            // General shows up to 11 significant digits; the cell holds 15.
+            probe.Style.NumberFormat.Format = "General";
+            probe.Style.Alignment.Horizontal = XLAlignmentHorizontalValues.Left;
         }
-        sheet.Range(1, 1, Math.Max(1, row - 1), Columns.Length).SetAutoFilter();
+        sheet.Range(1, 1, records.Count + 1, Columns.Length).SetAutoFilter();
         sheet.SheetView.FreezeRows(1);
         sheet.PageSetup.PageOrientation = XLPageOrientation.Landscape;
         sheet.PageSetup.SetRowsToRepeatAtTop(1, 1);

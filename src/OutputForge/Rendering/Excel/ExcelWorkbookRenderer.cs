@@ -1,4 +1,5 @@
 using ClosedXML.Excel;
+using DocumentFormat.OpenXml.Packaging;
 using OutputForge.Layout;
 
 namespace OutputForge.Rendering.Excel;
@@ -45,11 +46,18 @@ public sealed class ExcelWorkbookRenderer
         workbook.Properties.Title = written.Count == 1
             ? string.Join(" ", new[] { written[0].Heading }.Concat(written[0].Titles))
             : string.Join(", ", written.Select(d => d.Heading));
-        if (results is not null)
-            ExcelResultsSheet.Write(workbook.Worksheets.Add(names.Next(ExcelResultsSheet.Name)), results());
+        var records = results?.Invoke();
+        var resultsSheet = records is null ? null : names.Next(ExcelResultsSheet.Name);
+        if (records is not null)
+            ExcelResultsSheet.WriteFrame(workbook.Worksheets.Add(resultsSheet), records);
         using var package = new MemoryStream();
         workbook.SaveAs(package);
-        ExcelPrintTitles.MakeAbsolute(package);
+        using (var saved = SpreadsheetDocument.Open(package, isEditable: true))
+        {
+            ExcelPrintTitles.MakeAbsolute(saved);
+            if (records is not null)
+                ExcelResultsRows.Fill(saved, resultsSheet!, records);
+        }
         package.Position = 0;
         package.CopyTo(output);
     }
