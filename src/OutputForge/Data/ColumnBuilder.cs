@@ -8,14 +8,18 @@ namespace OutputForge.Data;
 /// invariant-culture number, a date when every non-missing value is an ISO 8601 date (YYYY-MM-DD), and
 /// text otherwise. Values in <see cref="CanonicalText"/> form are stored as numbers only (their text is
 /// rebuilt on request), so large numeric and date columns hold no string per cell; any other value keeps
-/// its text as written.
+/// its text as written. A builder fills one region of a <see cref="ColumnStore"/>: the whole column, or one part of
+/// a file read in parts, whose builders are then joined (<see cref="Join"/>) as if one had read the whole file.
 /// </summary>
 internal sealed class ColumnBuilder
 {
     private readonly string _name;
-    private readonly int _capacity;
-    // Allocated on the first value that needs them: a column that turns out to be text from its first value
-    // never holds numbers, and one whose values are all canonical never holds strings.
+    private readonly ColumnStore _store;
+    /// <summary>The store's row of this builder's first value.</summary>
+    private readonly int _offset;
+    // Taken from the store on the first value that needs them: a column that turns out to be text from its first
+    // value never holds numbers, and one whose values are all canonical never holds strings. Another part of the
+    // file may have made the store's arrays already, so whether this builder stored numbers is kept apart.
     private double[]? _numbers;
     private sbyte[]? _decimals;
     private string?[]? _text;
@@ -28,10 +32,19 @@ internal sealed class ColumnBuilder
     private int _count;
 
     public ColumnBuilder(string name, int capacity)
+        : this(name, new ColumnStore(capacity), 0)
+    {
+    }
+
+    public ColumnBuilder(string name, ColumnStore store, int offset)
     {
         _name = name;
-        _capacity = capacity;
+        _store = store;
+        _offset = offset;
     }
+
+    /// <summary>The values added so far.</summary>
+    public int Count => _count;
 
     /// <summary>Text only: the column is text and no value was stored as a number, so numbers and markers are not kept.</summary>
     private bool TextOnly => !_numeric && !_dates && _decimals is null;
@@ -40,8 +53,8 @@ internal sealed class ColumnBuilder
     {
         if (_decimals is not null)
         {
-            _numbers![_count] = double.NaN;
-            _decimals[_count] = DataColumn.MissingValue;
+            _numbers![_offset + _count] = double.NaN;
+            _decimals[_offset + _count] = DataColumn.MissingValue;
         }
         _count++;
     }
@@ -50,10 +63,10 @@ internal sealed class ColumnBuilder
     private void EnsureNumbers()
     {
         if (_decimals is not null) return;
-        _numbers = new double[_capacity];
-        _decimals = new sbyte[_capacity];
-        _numbers.AsSpan(0, _count).Fill(double.NaN);
-        _decimals.AsSpan(0, _count).Fill(DataColumn.MissingValue);
+        _numbers = _store.Numbers;
+        _decimals = _store.Decimals;
+        _numbers.AsSpan(_offset, _count).Fill(double.NaN);
+        _decimals.AsSpan(_offset, _count).Fill(DataColumn.MissingValue);
     }
 
     /// <summary>Stores a value given in canonical form without making a string; false when the general path must read it.</summary>
@@ -79,8 +92,8 @@ internal sealed class ColumnBuilder
     public void AddText(string value, int line)
     {
         _any = true;
-        _text ??= new string?[_capacity];
-        _text[_count] = value;
+        _text ??= _store.Text;
+        _text[_offset + _count] = value;
         if (TextOnly)
         {
             _count++;
@@ -113,8 +126,8 @@ internal sealed class ColumnBuilder
         if (!TextOnly)
         {
             EnsureNumbers();
-            _numbers![_count] = number;
-            _decimals![_count] = DataColumn.WrittenValue;
+            _numbers![_offset + _count] = number;
+            _decimals![_offset + _count] = DataColumn.WrittenValue;
         }
         _count++;
     }
@@ -123,35 +136,73 @@ internal sealed class ColumnBuilder
     {
         _any = true;
         EnsureNumbers();
-        _numbers![_count] = number;
-        _decimals![_count] = decimals;
+        _numbers![_offset + _count] = number;
+        _decimals![_offset + _count] = decimals;
         _count++;
     }
 
-    public DataColumn Build()
+    public DataColumn Build() => Join([this]);
+
+    /// <summary>
+    /// The column of builders that filled consecutive parts of one file (in file order, sharing one store): typed as
+    /// if one builder had read every value (numeric only when every part is, and so on), its rows moved together.
+    /// Canonical values a part stored as numbers or dates become their text again where the column turns out to be
+    /// text: the same text as written (<see cref="CanonicalText"/>).
+    /// </summary>
+    public static DataColumn Join(IReadOnlyList<ColumnBuilder> parts)
     {
-        if (!_any)
+        var name = parts[0]._name;
+        var store = parts[0]._store;
+        var count = parts.Sum(p => p._count);
+        if (!parts.Any(p => p._any))
         {
-            return new DataColumn(_name, VariableKind.Text, new string?[_count], null, _count);
+            return new DataColumn(name, VariableKind.Text, new string?[count], null, count);
         }
-        if (_numeric)
+        var numeric = parts.All(p => p._numeric);
+        if (numeric || parts.All(p => p._dates))
         {
-            return DataColumn.Compact(_name, VariableKind.Number, _numbers!, _decimals!, _text, _count);
-        }
-        if (_dates)
-        {
-            return DataColumn.Compact(_name, VariableKind.Date, _numbers!, _decimals!, _text, _count);
-        }
-        // A text column: values read before the first text value may have been stored as canonical numbers or dates.
-        var text = _text!;
-        for (var i = 0; _decimals is not null && i < _count; i++)
-        {
-            if (_decimals[i] >= 0)
+            foreach (var part in parts.Where(p => p._decimals is null))
             {
-                text[i] = _canonicalDates ? CanonicalText.FormatDate(_numbers![i]) : CanonicalText.FormatNumber(_numbers![i], _decimals[i]);
+                // This part held missing values only, and another part made the arrays.
+                store.Numbers.AsSpan(part._offset, part._count).Fill(double.NaN);
+                store.Decimals.AsSpan(part._offset, part._count).Fill(DataColumn.MissingValue);
+            }
+            var written = store.HasText ? MoveTogether(parts, store.Text) : null;
+            return DataColumn.Compact(name, numeric ? VariableKind.Number : VariableKind.Date,
+                MoveTogether(parts, store.Numbers), MoveTogether(parts, store.Decimals), written, count);
+        }
+        // A text column: values read before a part's first text value may have been stored as canonical numbers or dates.
+        var text = store.Text;
+        foreach (var part in parts.Where(p => p._decimals is not null))
+        {
+            for (var i = part._offset; i < part._offset + part._count; i++)
+            {
+                var decimals = part._decimals![i];
+                if (decimals >= 0)
+                {
+                    text[i] = part._canonicalDates ? CanonicalText.FormatDate(part._numbers![i]) : CanonicalText.FormatNumber(part._numbers![i], decimals);
+                }
             }
         }
-        return new DataColumn(_name, VariableKind.Text, text, null, _count) { TextEvidence = _evidence };
+        return new DataColumn(name, VariableKind.Text, MoveTogether(parts, text), null, count)
+        {
+            TextEvidence = parts.Select(p => p._evidence).FirstOrDefault(e => e is not null),
+        };
+    }
+
+    /// <summary>Moves each part's rows down to follow the rows of the parts before it (regions may have had room to spare).</summary>
+    public static T[] MoveTogether<T>(IReadOnlyList<ColumnBuilder> parts, T[] values)
+    {
+        var to = 0;
+        foreach (var part in parts)
+        {
+            if (part._offset != to)
+            {
+                Array.Copy(values, part._offset, values, to, part._count);
+            }
+            to += part._count;
+        }
+        return values;
     }
 
     private static string Shorten(string value) => value.Length <= 20 ? value : value[..20] + "...";

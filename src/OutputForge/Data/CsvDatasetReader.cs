@@ -24,25 +24,22 @@ public static class CsvDatasetReader
     /// <summary>Reads with <paramref name="options"/>; <paramref name="warn"/> receives the warnings (e.g. replaced control characters).</summary>
     public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn)
     {
-        byte[] bytes;
-        try
-        {
-            bytes = File.ReadAllBytes(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new DataException(path, null, null, $"cannot read the file ({e.Message})");
-        }
-        // The manifest names the bytes that were parsed: their SHA-256 is computed on another core while they are
-        // parsed, instead of reading the file a second time afterwards.
-        var digest = Task.Run(() => Convert.ToHexStringLower(SHA256.HashData(bytes)));
-        var bodyStart = CheckEncoding(path, bytes);
-        var dataset = Parse(name, path, bytes, bodyStart, options, warn);
-        dataset.ContentSha256 = digest.GetAwaiter().GetResult();
-        return dataset;
+        var file = CsvFileParts.Open(name, path, options);
+        Parallel.For(0, file.Count, file.Read);
+        return file.Finish(warn);
     }
 
-    private static int CheckEncoding(string path, byte[] bytes)
+    /// <summary>
+    /// Reads the whole file on one thread, from the start: every problem is reported, as a <see cref="DataException"/>,
+    /// at its place in the file, the first one first.
+    /// </summary>
+    internal static Dataset ReadWhole(string name, string path, byte[] bytes, DataReadOptions options, Action<string> warn)
+    {
+        var bodyStart = CheckEncoding(path, bytes);
+        return Parse(name, path, bytes, bodyStart, options, warn);
+    }
+
+    internal static int CheckEncoding(string path, byte[] bytes)
     {
         if (bytes.Length == 0)
         {
@@ -84,90 +81,40 @@ public static class CsvDatasetReader
         return line;
     }
 
+    internal static CsvReaderOptions ReaderOptions() => new()
+    {
+        HasHeader = false,
+        Separator = ',',
+        Mode = CsvMode.Rfc4180,
+        AllowLineBreaksInQuotes = true,
+        SkipEmptyLines = false,
+        TrimWhitespace = false,
+        TrackLineNumbers = true,
+        MalformedData = CsvMalformedDataHandling.Throw,
+        FieldCountMismatch = CsvFieldCountHandling.Allow,
+        MissingField = CsvMissingFieldHandling.ReturnEmpty,
+        IncludeValuesInExceptions = false,
+        PoolStrings = true,
+    };
+
     private static Dataset Parse(string name, string path, byte[] bytes, int bodyStart, DataReadOptions options, Action<string> warn)
     {
-        var csvOptions = new CsvReaderOptions
-        {
-            HasHeader = false,
-            Separator = ',',
-            Mode = CsvMode.Rfc4180,
-            AllowLineBreaksInQuotes = true,
-            SkipEmptyLines = false,
-            TrimWhitespace = false,
-            TrackLineNumbers = true,
-            MalformedData = CsvMalformedDataHandling.Throw,
-            FieldCountMismatch = CsvFieldCountHandling.Allow,
-            MissingField = CsvMissingFieldHandling.ReturnEmpty,
-            IncludeValuesInExceptions = false,
-            PoolStrings = true,
-        };
         try
         {
-            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(bytes, bodyStart, bytes.Length - bodyStart), csvOptions);
+            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(bytes, bodyStart, bytes.Length - bodyStart), ReaderOptions());
             if (!reader.Read())
             {
                 throw new DataException(path, 1, null, "the file has no header row");
             }
             var header = Fields(reader);
             CheckHeader(path, header);
-            // Every row ends at a line feed (or the end of the file), so their count bounds the number of rows.
-            var capacity = bytes.AsSpan(bodyStart).Count((byte)'\n') + 1;
+            var capacity = LineBreaks.Bound(bytes.AsSpan(bodyStart));
             var columns = header.Select(h => new ColumnBuilder(h, capacity)).ToArray();
             var lines = new int[capacity];
-            var rows = 0;
-            var replaced = 0;
-            var repeats = new RepeatedText[header.Length];
-            while (reader.Read())
-            {
-                var line = (int)reader.LineNumber;
-                if (reader.FieldCount == 1 && reader.IsEmpty(0) && header.Length > 1)
-                {
-                    continue;
-                }
-                if (reader.FieldCount != header.Length)
-                {
-                    throw new DataException(path, line, null,
-                        $"the row has {reader.FieldCount} fields but the header has {header.Length}");
-                }
-                for (var c = 0; c < header.Length; c++)
-                {
-                    if (reader.IsEmpty(c))
-                    {
-                        columns[c].AddMissing();
-                        continue;
-                    }
-                    var utf8 = reader.GetSpan(c);
-                    if (columns[c].TryAddCanonical(utf8))
-                    {
-                        continue;
-                    }
-                    if (repeats[c].Matches(utf8) is { } repeated)
-                    {
-                        columns[c].AddText(repeated, line);
-                        continue;
-                    }
-                    var value = reader.GetString(c);
-                    if (value.Length > MaxFieldLength)
-                    {
-                        throw new DataException(path, line, header[c],
-                            FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
-                    }
-                    // Control characters are single bytes below 0x20 in UTF-8: look for them only when such a byte is present.
-                    if (utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 && ControlCharacters.IndexIn(value) >= 0)
-                    {
-                        value = HandleControlCharacter(path, line, header[c], value, options, warn, ref replaced);
-                    }
-                    else
-                    {
-                        repeats[c].Remember(utf8, value);
-                    }
-                    columns[c].AddText(value, line);
-                }
-                lines[rows++] = line;
-            }
+            var (rows, replaced) = ReadRecords(reader, path, header, columns, lines, 0, 0, options);
             if (replaced > 0)
             {
-                warn($"{path}: {replaced} value{(replaced == 1 ? "" : "s")} held control characters, replaced by U+FFFD");
+                warn(ReplacedWarning(path, replaced));
             }
             return new Dataset(name, path, rows, columns.Select(c => c.Build()).ToList(), new ArraySegment<int>(lines, 0, rows));
         }
@@ -177,8 +124,74 @@ public static class CsvDatasetReader
         }
     }
 
+    internal static string ReplacedWarning(string path, int replaced) =>
+        $"{path}: {replaced} value{(replaced == 1 ? "" : "s")} held control characters, replaced by U+FFFD";
+
+    /// <summary>
+    /// Reads the records after the header into <paramref name="columns"/> (one builder per header variable) and their
+    /// lines into <paramref name="lines"/> from <paramref name="rowOffset"/>; the reader's line numbers are counted from
+    /// the start of its bytes, <paramref name="lineOffset"/> lines into the file. Returns the rows read and the number of
+    /// values whose control characters were replaced.
+    /// </summary>
+    internal static (int Rows, int Replaced) ReadRecords(CsvReader reader, string path, string[] header, ColumnBuilder[] columns,
+        int[] lines, int rowOffset, int lineOffset, DataReadOptions options)
+    {
+        var rows = 0;
+        var replaced = 0;
+        var repeats = new RepeatedText[header.Length];
+        while (reader.Read())
+        {
+            var line = (int)reader.LineNumber + lineOffset;
+            if (reader.FieldCount == 1 && reader.IsEmpty(0) && header.Length > 1)
+            {
+                continue;
+            }
+            if (reader.FieldCount != header.Length)
+            {
+                throw new DataException(path, line, null,
+                    $"the row has {reader.FieldCount} fields but the header has {header.Length}");
+            }
+            for (var c = 0; c < header.Length; c++)
+            {
+                if (reader.IsEmpty(c))
+                {
+                    columns[c].AddMissing();
+                    continue;
+                }
+                var utf8 = reader.GetSpan(c);
+                if (columns[c].TryAddCanonical(utf8))
+                {
+                    continue;
+                }
+                if (repeats[c].Matches(utf8) is { } repeated)
+                {
+                    columns[c].AddText(repeated, line);
+                    continue;
+                }
+                var value = reader.GetString(c);
+                if (value.Length > MaxFieldLength)
+                {
+                    throw new DataException(path, line, header[c],
+                        FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
+                }
+                // Control characters are single bytes below 0x20 in UTF-8: look for them only when such a byte is present.
+                if (utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 && ControlCharacters.IndexIn(value) >= 0)
+                {
+                    value = HandleControlCharacter(path, line, header[c], value, options, ref replaced);
+                }
+                else
+                {
+                    repeats[c].Remember(utf8, value);
+                }
+                columns[c].AddText(value, line);
+            }
+            lines[rowOffset + rows++] = line;
+        }
+        return (rows, replaced);
+    }
+
     private static string HandleControlCharacter(string path, int line, string variable, string value,
-        DataReadOptions options, Action<string> warn, ref int replaced)
+        DataReadOptions options, ref int replaced)
     {
         if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
         {
@@ -190,7 +203,7 @@ public static class CsvDatasetReader
         return ControlCharacters.Replace(value);
     }
 
-    private static string[] Fields(CsvReader reader)
+    internal static string[] Fields(CsvReader reader)
     {
         var fields = new string[reader.FieldCount];
         for (var c = 0; c < fields.Length; c++)
@@ -208,7 +221,7 @@ public static class CsvDatasetReader
         return $"malformed CSV: {text} (RFC 4180 quoting expected)";
     }
 
-    private static void CheckHeader(string path, string[] header)
+    internal static void CheckHeader(string path, string[] header)
     {
         var seen = new Dictionary<string, int>(StringComparer.OrdinalIgnoreCase);
         for (var c = 0; c < header.Length; c++)

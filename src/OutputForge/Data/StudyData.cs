@@ -74,13 +74,14 @@ public sealed class StudyData
             throw new DataException(folder, null, null, "no such data folder");
         }
         var files = study.Data.Datasets.OrderBy(d => d.Key == "adsl" ? 0 : 1).ThenBy(d => d.Key, StringComparer.Ordinal).ToList();
-        // The files are read on all cores (one large BDS file would otherwise keep the others waiting); each keeps its
-        // warnings and error, replayed below in the listed order, so messages do not depend on thread timing.
+        // The files are read on all cores, a large BDS file in parts (CsvFileParts), the largest parts first, so that
+        // no core waits for one file; each file keeps its warnings and error, replayed below in the listed order, so
+        // messages do not depend on thread timing.
         var outcomes = new (Dataset? Dataset, List<string> Warnings, Exception? Error)[files.Count];
+        var opened = new CsvFileParts?[files.Count];
         Parallel.For(0, files.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
         {
             var (name, fileName) = files[i];
-            var warnings = new List<string>();
             try
             {
                 var path = Path.Combine(folder, fileName);
@@ -89,7 +90,28 @@ public sealed class StudyData
                     throw new DataException(path, null, null,
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
-                outcomes[i] = (CsvDatasetReader.Read(name, path, options, warnings.Add), warnings, null);
+                opened[i] = CsvFileParts.Open(name, path, options);
+            }
+            catch (Exception e)
+            {
+                outcomes[i] = (null, [], e);
+            }
+        });
+        var parts = opened.SelectMany((file, i) => file is null ? [] : Enumerable.Range(0, file.Count).Select(p => (File: i, Part: p)))
+            .OrderByDescending(w => opened[w.File]!.BytesOf(w.Part))
+            .ToList();
+        // Each core takes the next largest part when it is free.
+        Pipeline.InOrderParallel.For(parts.Count, w => opened[parts[w].File]!.Read(parts[w].Part));
+        Parallel.For(0, files.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
+        {
+            if (opened[i] is not { } file)
+            {
+                return;
+            }
+            var warnings = new List<string>();
+            try
+            {
+                outcomes[i] = (file.Finish(warnings.Add), warnings, null);
             }
             catch (Exception e)
             {
