@@ -1,4 +1,6 @@
 using System.Text;
+using FsCheck;
+using FsCheck.Xunit;
 using OutputForge.Data;
 using OutputForge.Tests.Support;
 
@@ -203,6 +205,26 @@ public sealed class CsvFilePartsTests : IDisposable
                 text.Append('\n');
             }
             SameInPartsAsWhole(text.ToString(), expectParts: false);
+        }
+    }
+
+    private static readonly char[] Alphabet = "ab,\"\n\r; x\u00E91-.\u0007".ToCharArray();
+
+    /// <summary>Any text of CSV punctuation, cut into parts of any size: the same dataset, warnings or error as read whole.</summary>
+    [Property(MaxTest = 300)]
+    public void Any_text_reads_the_same_in_parts_of_any_size(NonNegativeInt seed, PositiveInt partBytes)
+    {
+        var random = new Random(seed.Get);
+        var text = new string(Enumerable.Range(0, random.Next(0, 80)).Select(_ => Alphabet[random.Next(Alphabet.Length)]).ToArray());
+        var path = _folder.Write($"p{Guid.NewGuid():N}.csv", "A,B\n" + text);
+        var options = new DataReadOptions(random.Next(2) == 0 ? ControlCharacterPolicy.Refuse : ControlCharacterPolicy.Replace);
+        var whole = Whole(path, options);
+        var parts = InParts(path, 1 + partBytes.Get % 24, options);
+        Assert.Equal(whole.Error, parts.Error);
+        Assert.Equal(whole.Warnings, parts.Warnings);
+        if (whole.Data is not null)
+        {
+            AssertSame(whole.Data, parts.Data!);
         }
     }
 
