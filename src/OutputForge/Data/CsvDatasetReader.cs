@@ -1,8 +1,5 @@
-using System.Globalization;
-using System.Security.Cryptography;
 using System.Text;
 using CsvHelper;
-using OutputForge.Expressions;
 
 namespace OutputForge.Data;
 
