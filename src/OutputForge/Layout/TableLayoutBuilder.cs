@@ -37,7 +37,8 @@ public static class TableLayoutBuilder
         foreach (var column in table.Columns.Where(c => c.SubjectCount is not null && !shell))
         {
             records.Add(new ResultRecord(table.TableId, "header", column.Key, StatisticNames.Denominator, column.SubjectCount,
-                column.SubjectCount!.Value.ToString(CultureInfo.InvariantCulture), "(N=xx)", column.Label, null, null));
+                column.SubjectCount!.Value.ToString(CultureInfo.InvariantCulture),
+                string.Create(CultureInfo.InvariantCulture, $"(N={column.SubjectCount})"), column.Label, null, null));
         }
         foreach (var row in table.Rows)
         {
