@@ -19,12 +19,15 @@ internal static class SpecFileReader
         AllowTrailingCommas = true,
     };
 
+    /// <summary>The largest spec file read: specs are a few kilobytes; 16 MB is far beyond any real one.</summary>
+    public const long MaxSpecBytes = 16 << 20;
+
     public static T Read<T>(string file, string schemaName, Action<T, SpecSource> attach)
     {
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(file);
+            bytes = Files.RegularFile.ReadAllBytes(file, MaxSpecBytes, "a spec file may hold", problem => new SpecException(new SpecProblem(file, null, null, "$", problem)));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
