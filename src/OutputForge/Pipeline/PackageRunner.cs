@@ -206,6 +206,11 @@ public static class PackageRunner
         var laidOut = TableLayOut.Build(study, table, result, studyLine, run, page, NumberDisplay.Values, context.Templates,
             document => TemplateValues.For(study, table, result, document, run));
         times.Lap("layout");
+        if (DocumentText.FirstProblem(laidOut.Document) is { } problem)
+        {
+            // Each source is checked where it is read; this catches text assembled from several pieces.
+            throw new SpecException(table.Source.Problem(string.Empty, $"the laid-out table cannot be written: {problem}"));
+        }
         var files = new List<(string, byte[])>();
         foreach (var renderer in request.Renderers)
         {

@@ -56,7 +56,7 @@ internal static class SpecFileReader
         using (document)
         {
             var source = new SpecSource(file, JsonPositionMap.Build(bytes));
-            var problems = Validate(document.RootElement, schemaName, source);
+            var problems = SpecText.Problems(document.RootElement, source) is { Count: > 0 } text ? text : Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
                 throw new SpecException(problems);

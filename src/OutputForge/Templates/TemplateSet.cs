@@ -93,7 +93,15 @@ public sealed class TemplateSet : ITemplateLoader
         context.PushGlobal(values);
         try
         {
-            return template.Render(context);
+            var output = template.Render(context);
+            foreach (var line in output.Split('\n'))
+            {
+                if (Layout.DocumentText.Problem(line) is { } problem)
+                {
+                    throw new TemplateException($"{SourceOf(name)}: template error: a line of the template's output cannot go into a table: {problem}");
+                }
+            }
+            return output;
         }
         catch (ScriptRuntimeException e) when (e.InnerException is TemplateException refused)
         {
