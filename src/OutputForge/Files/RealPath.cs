@@ -14,7 +14,8 @@ public static class RealPath
 
     public static string Of(string path)
     {
-        var full = Path.GetFullPath(path);
+        // Not Path.GetFullPath: it removes "x/.." before x is resolved, which is wrong when x is a link.
+        var full = Path.IsPathFullyQualified(path) ? path : Path.Combine(Directory.GetCurrentDirectory(), path);
         var root = Path.GetPathRoot(full) ?? string.Empty;
         var pending = new Stack<string>(Parts(full[root.Length..]).Reverse());
         var current = root;

@@ -48,6 +48,7 @@ public sealed class BadInputTests
         }
         Assert.Equal(before, Snapshot(study.OutputFolder));
         // No staging or set-aside folder is left, nor the lock file (kept only where /proc cannot tell it is safe to remove).
-        Assert.Empty(Directory.GetFileSystemEntries(study.Folder, ".out.*").Where(e => OperatingSystem.IsLinux() || !e.EndsWith(".lock", StringComparison.Ordinal)));
+        var leftovers = Directory.GetFileSystemEntries(study.Folder, ".out.*").Where(e => OperatingSystem.IsLinux() || !e.EndsWith(".lock", StringComparison.Ordinal)).ToList();
+        Assert.Empty(leftovers);
     }
 }
