@@ -31,7 +31,7 @@ public static class SpecDataChecks
             }
             try
             {
-                var result = TableAnalyses.For(table).Analyze(study, table, data);
+                var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, data);
                 foreach (var warning in result.Warnings)
                 {
                     report.Add(new CheckProblem(CheckSeverity.Warning, table.Source.File, "", $"table {table.Id}: {warning}",
