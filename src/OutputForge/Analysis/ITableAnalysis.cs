@@ -8,4 +8,10 @@ namespace OutputForge.Analysis;
 public interface ITableAnalysis
 {
     TableResult Analyze(StudySpec study, TableSpec table, StudyData data);
+
+    /// <summary>
+    /// The variables <see cref="Analyze"/> reads, by dataset, from the specs alone: every variable it looks up, so that a
+    /// shell stand-in can provide them and a run can read only them (a test holds the two to each other).
+    /// </summary>
+    VariableReads Reads(StudySpec study, TableSpec table);
 }

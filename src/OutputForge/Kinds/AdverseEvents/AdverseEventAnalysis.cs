@@ -21,6 +21,15 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
 {
     public const string AnyKey = "any";
 
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var settings = table.Settings<AdverseEventsSettings>();
+        return PopulationSelection.Reads(study, table, new VariableReads())
+            .Add(settings.Dataset, [AdamConformance.SubjectVariable, settings.SocVariable, settings.TermVariable])
+            .AddCondition(settings.Dataset, settings.Where)
+            .Add(settings.Dataset, settings.Severity?.Variable);
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var settings = table.Settings<AdverseEventsSettings>();

@@ -18,6 +18,24 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
 
     public static string PValueKey(TreatmentArm arm) => $"p-value-{arm.Key}";
 
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var settings = table.Settings<CategoricalByVisitSettings>();
+        var endpoint = table.Endpoint!;
+        var reads = PopulationSelection.Reads(study, table, new VariableReads())
+            .Add(endpoint.Dataset, [AdamConformance.SubjectVariable, "AVISIT", settings.Variable])
+            .Add(endpoint.Dataset, endpoint.Parameter is null ? null : "PARAMCD")
+            .Add(endpoint.Dataset, settings.Visits is null ? "AVISITN" : null)
+            .AddCondition(endpoint.Dataset, endpoint.Where);
+        // Without an imputation type the records are the observed ones where the dataset marks derived records.
+        reads = settings.Imputation is null ? reads.AddOptional(endpoint.Dataset, "DTYPE") : reads.Add(endpoint.Dataset, "DTYPE");
+        foreach (var stratum in settings.Strata)
+        {
+            reads.AddRecordOrSubjectLevel(endpoint.Dataset, stratum);
+        }
+        return reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var endpoint = table.Endpoint!;

@@ -18,6 +18,23 @@ public sealed class ContinuousAnalysis : ITableAnalysis
 {
     private const string CellTextNotEstimable = Layout.CellText.NotEstimable;
 
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var settings = table.Settings<ContinuousSettings>();
+        var endpoint = table.Endpoint!;
+        var reads = PopulationSelection.Reads(study, table, new VariableReads())
+            .Add(endpoint.Dataset, [AdamConformance.SubjectVariable, "AVISIT"])
+            .Add(endpoint.Dataset, endpoint.Parameter is null ? null : "PARAMCD")
+            .AddCondition(endpoint.Dataset, endpoint.Where);
+        var model = settings.Model;
+        IEnumerable<string?> variables = [settings.Value, settings.Baseline, settings.Change, .. model?.Covariates ?? [], .. model?.Factors ?? [], model?.DoseVariable];
+        foreach (var variable in variables.OfType<string>())
+        {
+            reads.AddRecordOrSubjectLevel(endpoint.Dataset, variable);
+        }
+        return reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var endpoint = table.Endpoint!;

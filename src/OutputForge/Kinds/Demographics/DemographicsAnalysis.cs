@@ -28,6 +28,16 @@ public sealed class DemographicsAnalysis : ITableAnalysis
             : TestResult.NotEstimable(AnovaResult.MethodName, anova.NotEstimableReason!) with { Notes = anova.Notes };
     }
 
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var reads = PopulationSelection.Reads(study, table, new VariableReads());
+        foreach (var variable in table.Settings<DemographicsSettings>().Variables)
+        {
+            reads.Add(VariableReads.SubjectLevel, variable.Variable).Add(VariableReads.SubjectLevel, variable.OrderBy);
+        }
+        return reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var settings = table.Settings<DemographicsSettings>();

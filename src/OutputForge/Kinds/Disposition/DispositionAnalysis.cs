@@ -18,6 +18,18 @@ public sealed class DispositionAnalysis : ITableAnalysis
 {
     public const string PValueColumn = "p-value";
 
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var reads = PopulationSelection.Reads(study, table, new VariableReads());
+        foreach (var block in table.Settings<DispositionSettings>().Blocks)
+        {
+            reads.Add(VariableReads.SubjectLevel, block.Variable)
+                .AddCondition(VariableReads.SubjectLevel, block.Where)
+                .Add(VariableReads.SubjectLevel, block.OrderBy);
+        }
+        return reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var settings = table.Settings<DispositionSettings>();

@@ -14,6 +14,17 @@ namespace OutputForge.Kinds.Populations;
 /// </summary>
 public sealed class PopulationsAnalysis : ITableAnalysis
 {
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var reads = PopulationSelection.Reads(study, table, new VariableReads());
+        foreach (var row in table.Settings<PopulationsSettings>().Rows)
+        {
+            var where = row.Population is { } name ? study.Populations.GetValueOrDefault(name)?.Where : row.Where;
+            reads.AddCondition(VariableReads.SubjectLevel, where);
+        }
+        return reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var settings = table.Settings<PopulationsSettings>();

@@ -14,6 +14,16 @@ namespace OutputForge.Kinds.Responders;
 /// </summary>
 public sealed class ResponderAnalysis : ITableAnalysis
 {
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var endpoint = table.Endpoint!;
+        var reads = EndpointRecords.Reads(table, PopulationSelection.Reads(study, table, new VariableReads()))
+            .AddCondition(endpoint.Dataset, endpoint.Response)
+            .Add(VariableReads.SubjectLevel, table.Settings<ResponderSettings>().Stratified?.Strata ?? []);
+        // Observed cases count the records the dataset derived, where it marks them.
+        return endpoint.Missing == "observed" ? reads.AddOptional(endpoint.Dataset, ObservedCases.DerivationVariable) : reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var endpoint = table.Endpoint!;

@@ -17,6 +17,23 @@ namespace OutputForge.Kinds.Subgroups;
 /// </summary>
 public sealed class SubgroupAnalysis : ITableAnalysis
 {
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var endpoint = table.Endpoint!;
+        var reads = EndpointRecords.Reads(table, PopulationSelection.Reads(study, table, new VariableReads()))
+            .AddCondition(endpoint.Dataset, endpoint.Response);
+        foreach (var variable in table.Settings<SubgroupSettings>().Variables)
+        {
+            reads.Add(VariableReads.SubjectLevel, variable.Variable);
+            if (variable.Levels is null)
+            {
+                // Unlisted levels follow the variable's numeric companion (e.g. AGEGR1N) where ADSL has one.
+                reads.AddOptional(VariableReads.SubjectLevel, variable.Variable + SubgroupVariable.OrderSuffix);
+            }
+        }
+        return reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var endpoint = table.Endpoint!;

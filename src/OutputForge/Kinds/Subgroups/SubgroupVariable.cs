@@ -24,6 +24,9 @@ internal sealed record SubgroupVariable(
     int WithUnlistedValue,
     string OrderNote)
 {
+    /// <summary>The suffix of a variable's numeric companion, which orders its levels (ADaM: AGEGR1 -> AGEGR1N).</summary>
+    public const string OrderSuffix = "N";
+
     public static SubgroupVariable Resolve(SubgroupVariableSpec spec, int index, Dataset adsl, IEnumerable<string> subjects, SpecSource source)
     {
         var pointer = $"/subgroups/variables/{index}";
@@ -58,7 +61,7 @@ internal sealed record SubgroupVariable(
             levels = listed.Select(l => new SubgroupLevel(l.Value, l.Label ?? l.Value)).ToList();
             orderNote = "levels in the order of the spec";
         }
-        else if (adsl.Find(column.Name + "N") is { Kind: VariableKind.Number } companion)
+        else if (adsl.Find(column.Name + OrderSuffix) is { Kind: VariableKind.Number } companion)
         {
             var rank = new Dictionary<string, double>(StringComparer.Ordinal);
             for (var row = 0; row < adsl.RowCount; row++)

@@ -16,6 +16,18 @@ namespace OutputForge.Kinds.TimeToEvent;
 /// </summary>
 public sealed class TimeToEventAnalysis : ITableAnalysis
 {
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var settings = table.Settings<TimeToEventSettings>();
+        var dataset = table.Endpoint!.Dataset;
+        var reads = EndpointRecords.Reads(table, PopulationSelection.Reads(study, table, new VariableReads()));
+        foreach (var variable in settings.Strata.Prepend(settings.Censor).Prepend(settings.Time))
+        {
+            reads.AddRecordOrSubjectLevel(dataset, variable);
+        }
+        return reads;
+    }
+
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
     {
         var endpoint = table.Endpoint!;
