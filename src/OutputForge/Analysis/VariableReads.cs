@@ -1,4 +1,3 @@
-using OutputForge.Data;
 using OutputForge.Expressions;
 
 namespace OutputForge.Analysis;

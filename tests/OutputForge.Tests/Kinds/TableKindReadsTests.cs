@@ -4,6 +4,7 @@ using OutputForge.Data;
 using OutputForge.Kinds;
 using OutputForge.Spec;
 using OutputForge.Tests.Support;
+using OutputForge.Tests.Validation;
 using OutputForge.Workflow.Shells;
 
 namespace OutputForge.Tests.Kinds;
@@ -40,6 +41,17 @@ public sealed class TableKindReadsTests(DemoStudyData demo) : IClassFixture<Demo
         var declared = TableKinds.For(table).Analysis.Reads(demo.Package.Study, table);
         var standIn = ShellData.For(demo.Package.Study, table).ToStudyData();
         Assert.Equal(string.Empty, string.Join(", ", Missing(declared, standIn)));
+    }
+
+    [CdiscPilotDataFact]
+    public void On_the_CDISC_pilot_validation_tables_the_analyses_look_up_only_declared_variables()
+    {
+        foreach (var studyFile in new[] { "study.json", "cibic-study.json" })
+        {
+            var package = SpecLoader.Load(Path.Combine(CdiscPilotFiles.Specs, studyFile));
+            var data = StudyData.Load(package.Study, CdiscPilotFiles.DataFolder!);
+            Assert.All(package.Tables, table => Assert.Equal($"{table.Id}: ", $"{table.Id}: " + string.Join(", ", Undeclared(package.Study, table, data))));
+        }
     }
 
     [Fact]

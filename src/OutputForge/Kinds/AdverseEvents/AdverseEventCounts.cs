@@ -1,7 +1,6 @@
 using System.Runtime.InteropServices;
 using OutputForge.Analysis;
 using OutputForge.Analysis.Summaries;
-using OutputForge.Spec;
 
 namespace OutputForge.Kinds.AdverseEvents;
 

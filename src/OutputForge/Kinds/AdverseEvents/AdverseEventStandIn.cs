@@ -1,5 +1,4 @@
 using OutputForge.Expressions;
-using OutputForge.Spec;
 using OutputForge.Workflow.Shells;
 
 namespace OutputForge.Kinds.AdverseEvents;

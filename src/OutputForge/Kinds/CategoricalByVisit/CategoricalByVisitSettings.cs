@@ -1,5 +1,4 @@
 using System.Text.Json;
-using OutputForge.Spec;
 
 namespace OutputForge.Kinds.CategoricalByVisit;
 

@@ -1,7 +1,6 @@
 using System.Globalization;
 using System.Text.Json;
 using OutputForge.Expressions;
-using OutputForge.Spec;
 using OutputForge.Workflow.Shells;
 
 namespace OutputForge.Kinds.CategoricalByVisit;

@@ -1,6 +1,4 @@
-using System.Globalization;
 using OutputForge.Expressions;
-using OutputForge.Spec;
 using OutputForge.Workflow.Shells;
 
 namespace OutputForge.Kinds.Continuous;

@@ -1,8 +1,6 @@
 using System.Globalization;
-using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Results;
-using OutputForge.Spec;
 
 namespace OutputForge.Kinds.Demographics;
 

@@ -1,5 +1,4 @@
 using System.Text.RegularExpressions;
-using OutputForge.Analysis;
 using OutputForge.Results;
 using OutputForge.Spec;
 

@@ -3,7 +3,6 @@ using OutputForge.Analysis.Summaries;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;
-using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Disposition;
 

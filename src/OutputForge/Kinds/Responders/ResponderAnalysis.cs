@@ -127,7 +127,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         EndpointRecords records, Expressions.Condition response, bool missingAreNonResponders,
         IReadOnlyDictionary<TreatmentArm, ResponderCounts> counts, IReadOnlyList<ResultColumn> columns, double level, int decimals)
     {
-        if (table.Settings<ResponderSettings>() is not { } settings || (settings.Stratified is null && settings.Ratios.Count == 0))
+        var settings = table.Settings<ResponderSettings>();
+        if (settings.Stratified is null && settings.Ratios.Count == 0)
         {
             return null;
         }

@@ -1,5 +1,3 @@
-using OutputForge.Spec;
-
 namespace OutputForge.Kinds.Responders;
 
 /// <summary>

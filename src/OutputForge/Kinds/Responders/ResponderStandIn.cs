@@ -1,4 +1,3 @@
-using OutputForge.Spec;
 using OutputForge.Workflow.Shells;
 
 namespace OutputForge.Kinds.Responders;

@@ -1,6 +1,5 @@
 using OutputForge.Analysis;
 using OutputForge.Results;
-using OutputForge.Spec;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Responders;

@@ -1,6 +1,5 @@
 using System.Text.RegularExpressions;
 using OutputForge.Analysis;
-using OutputForge.Spec;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Responders;

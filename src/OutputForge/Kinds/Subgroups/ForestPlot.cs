@@ -1,4 +1,3 @@
-using OutputForge.Analysis;
 using OutputForge.Spec;
 
 namespace OutputForge.Kinds.Subgroups;

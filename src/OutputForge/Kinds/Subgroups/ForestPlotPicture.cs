@@ -1,7 +1,5 @@
 using System.Globalization;
-using OutputForge.Analysis;
 using OutputForge.Results;
-using OutputForge.Spec;
 using ScottPlot;
 
 namespace OutputForge.Kinds.Subgroups;

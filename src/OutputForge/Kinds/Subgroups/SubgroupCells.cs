@@ -1,7 +1,5 @@
-using OutputForge.Analysis;
 using OutputForge.Kinds.Responders;
 using OutputForge.Results;
-using OutputForge.Spec;
 using OutputForge.Stats;
 using static OutputForge.Results.StatisticNames;
 

@@ -1,6 +1,4 @@
-using OutputForge.Analysis;
 using OutputForge.Kinds.Responders;
-using OutputForge.Spec;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Subgroups;

@@ -1,5 +1,4 @@
 using System.Globalization;
-using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Expressions;
 using OutputForge.Naming;

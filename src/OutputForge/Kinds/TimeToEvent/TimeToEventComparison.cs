@@ -1,5 +1,4 @@
 using OutputForge.Analysis;
-using OutputForge.Spec;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.TimeToEvent;

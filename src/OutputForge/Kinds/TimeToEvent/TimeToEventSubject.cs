@@ -1,5 +1,4 @@
 using OutputForge.Analysis;
-using OutputForge.Spec;
 
 namespace OutputForge.Kinds.TimeToEvent;
 

@@ -1,4 +1,3 @@
-using OutputForge.Analysis;
 using OutputForge.Layout;
 using OutputForge.Spec;
 using OutputForge.Templates;
