@@ -18,7 +18,9 @@ public static class CoxProportionalHazards
     private const double StepTolerance = 1e-10;
     private const int MaxHalvings = 30;
 
+    /// <param name="data">The observations' times and event flags.</param>
     /// <param name="covariates">One row per observation, one column per covariate.</param>
+    /// <param name="ties">How tied event times enter the partial likelihood.</param>
     /// <param name="stratum">Stratum index of each observation, or null.</param>
     public static CoxModelFit Fit(SurvivalData data, double[,] covariates, CoxTies ties = CoxTies.Efron, IReadOnlyList<int>? stratum = null)
     {

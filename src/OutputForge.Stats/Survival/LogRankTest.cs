@@ -13,6 +13,7 @@ public static class LogRankTest
     public const string Method = "log-rank test";
     public const string StratifiedMethod = "stratified log-rank test";
 
+    /// <param name="data">The observations' times and event flags.</param>
     /// <param name="group">Group index (0..k-1) of each observation.</param>
     /// <param name="stratum">Stratum index of each observation, or null for an unstratified test.</param>
     public static TestResult Compute(SurvivalData data, IReadOnlyList<int> group, IReadOnlyList<int>? stratum = null)
