@@ -10,10 +10,10 @@ namespace OutputForge.Stats.Descriptive;
 /// two-pass algorithm), so data with many constant leading digits keep their precision.</item>
 /// <item>The median is the middle value, or the average of the two middle values.</item>
 /// <item>Q1 and Q3 use a selectable MathNet <see cref="QuantileDefinition"/>. The default is
-/// <see cref="QuantileDefinition.R2"/> (alias SAS5): the empirical distribution function with
-/// averaging at discontinuities (Hyndman and Fan 1996, Am Stat 50:361-365, definition 2), which is
-/// the default of SAS PROC MEANS / UNIVARIATE (QNTLDEF = 5) and so what a second programmer in
-/// SAS reproduces. R's default is R7.</item>
+/// <see cref="QuantileDefinition.R2"/>: the empirical distribution function with averaging at
+/// discontinuities (Hyndman and Fan 1996, Am Stat 50:361-365, definition 2), the definition that
+/// clinical trial summaries usually use and so what an independent second programmer reproduces
+/// (common practice). R's default is R7 (definition 7).</item>
 /// <item>Geometric mean exp(mean(ln x)) only when every value is positive; otherwise null with a note.</item>
 /// <item>CV% is null with a note when the mean is zero or the SD is unavailable.</item>
 /// </list>

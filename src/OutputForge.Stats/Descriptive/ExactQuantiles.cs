@@ -7,7 +7,7 @@ namespace OutputForge.Stats.Descriptive;
 /// read as its shortest round-trip decimal), so that an average of two values lands exactly on the
 /// decimal midpoint: the median of 0.6 and 0.7 is 0.65, whereas (0.6 + 0.7) / 2 in binary is
 /// 0.6499999999999999 and would then display as 0.6 instead of 0.7 under half-away-from-zero
-/// rounding. Definitions 2 (averaging at discontinuities, SAS QNTLDEF=5) and 7 (linear, R's default)
+/// rounding. Definitions 2 (averaging at discontinuities) and 7 (linear, R's default)
 /// of Hyndman and Fan (1996), Am Stat 50:361-365; other definitions, and values outside the decimal
 /// range, are left to MathNet.
 /// </summary>

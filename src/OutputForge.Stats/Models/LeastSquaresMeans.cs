@@ -6,8 +6,8 @@ namespace OutputForge.Stats.Models;
 /// Least squares means of one class covariate (e.g. treatment) of a fitted linear model, and their
 /// differences. Convention (documented in docs/statistics-models.md): each numeric covariate is set
 /// to its observed mean over the observations in the fit, and every other class covariate is averaged
-/// with equal weight 1/k over its k levels (the "balanced" LS mean of Searle, Speed and Milliken,
-/// The American Statistician 34, 1980, the default of SAS LSMEANS and of R emmeans).
+/// with equal weight 1/k over its k levels (the "balanced" LS mean, or population marginal mean, of
+/// Searle, Speed and Milliken, The American Statistician 34, 1980; the default of R emmeans).
 /// </summary>
 public static class LeastSquaresMeans
 {

@@ -6,8 +6,7 @@ namespace OutputForge.Stats.Stratified;
 
 /// <summary>
 /// Generalized Cochran-Mantel-Haenszel statistics for K strata of I x J tables (Landis, Heyman and
-/// Koch 1978, Int Stat Rev 46:237-254; Agresti 2013, Categorical Data Analysis 3rd ed., section 8.4;
-/// the formulation of the SAS/STAT PROC FREQ documentation, "Cochran-Mantel-Haenszel Statistics").
+/// Koch 1978, Int Stat Rev 46:237-254; Agresti 2013, Categorical Data Analysis 3rd ed., section 8.4).
 /// With n_h the cells of stratum h in row-major order, under conditional independence
 /// m_h = n_h (p_rows ⊗ p_columns) and
 /// V_h = n_h^2 / (n_h - 1) ((D_rows - p_rows p_rows') ⊗ (D_columns - p_columns p_columns')).
@@ -41,8 +40,9 @@ public static class GeneralizedCochranMantelHaenszel
 
     /// <summary>
     /// The same statistics with column scores computed from each stratum's own table, e.g.
-    /// <see cref="ModifiedRiditScores.Of"/>: the contrast of stratum h uses a_h (the SAS/STAT PROC FREQ
-    /// documentation computes rank-based scores within each stratum for these statistics).
+    /// <see cref="ModifiedRiditScores.Of"/>: the contrast of stratum h uses a_h. Rank-based scores are
+    /// computed within each stratum, which makes the row mean scores statistic a stratified rank test
+    /// of the van Elteren (1960) type (common practice).
     /// </summary>
     public static GeneralizedCmhResult Compute(IReadOnlyList<int[,]> strata, IReadOnlyList<double>? rowScores, Func<int[,], IReadOnlyList<double>> columnScoresOfStratum)
     {

@@ -5,8 +5,10 @@ namespace OutputForge.Stats.Stratified;
 /// <summary>
 /// Modified ridit (standardized midrank) column scores of one table: a_j = (2 C_j - n_j + 1) / (2 (N + 1)),
 /// with n_j the column total, C_j the cumulative total up to and including column j and N the table total,
-/// i.e. the column's midrank divided by N + 1 (SAS/STAT PROC FREQ documentation, "Modified Ridit Scores";
-/// the "midrank" scores of the R package vcdExtra's CMHtest). An empty column gets the score of the
+/// i.e. the column's midrank divided by N + 1: ridits (Bross 1958, Biometrics 14:18-38) standardized for
+/// the CMH mean score statistics of Landis, Heyman and Koch (1978, Int Stat Rev 46:237-254), recalled from
+/// memory; the same as the "midrank" scores of the R package vcdExtra's CMHtest, which the tests check
+/// against. An empty column gets the score of the
 /// boundary between its neighbours.
 /// </summary>
 public static class ModifiedRiditScores
