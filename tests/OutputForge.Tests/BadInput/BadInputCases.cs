@@ -122,7 +122,9 @@ public static class BadInputCases
         yield return T("list without parentheses", "ANL01FL = 'Y'", "ANL01FL in 'Y'", "$.endpoint.where", "expected '(' to start the list");
         yield return T("unknown operator", "AVALC = 'Y'", "AVALC # 'Y'", "$.endpoint.response", "unexpected character '#'");
         yield return T("empty condition", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"\",", "$.subset", "the condition is empty");
-        yield return T("is without missing", "ANL01FL = 'Y'", "ANL01FL is 'Y'", "$.endpoint.where", "expected 'missing' after 'is'");
+        yield return T("is without null", "ANL01FL = 'Y'", "ANL01FL is 'Y'", "$.endpoint.where", "expected 'null' or 'not null' after 'is'");
+        yield return T("the old missing-value test", "ANL01FL = 'Y'", "ANL01FL is not missing", "$.endpoint.where",
+            "the missing-value test is written 'is not null', not 'is not missing'", "character 16", "t1.json:10:");
         yield return T("date compared without ISO format", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"AGE = 1 or STUDYID = 1\",", "$.subset", "STUDYID holds text");
 
         // meaning
