@@ -164,7 +164,7 @@ public static class BadInputCases
 
         // ADaM conventions
         yield return A("no USUBJID", "STUDYID,SUBJID,TRT01P,TRT01PN,ITTFL,AGE\nT1,1,Placebo,0,Y,4\n", "ADSL has no USUBJID");
-        yield return A("empty USUBJID", AdslHeader + "T1,,Placebo,0,Y,40\n", "line 2", "USUBJID is missing");
+        yield return A("empty USUBJID", AdslHeader + "T1,,Placebo,0,Y,40\n", "line 2", "USUBJID is empty");
         yield return A("duplicate subject", Adsl + "T1,T1-001,Placebo,0,Y,40\n", "line 7", "subject T1-001 has a second ADSL row (first on line 2)");
         yield return A("flag in lower case", Adsl.Replace("T1,T1-003,Active,1,Y,38", "T1,T1-003,Active,1,y,38"), "line 4", "variable ITTFL", "flag value 'y'");
         yield return A("flag as 1", Adsl.Replace("T1,T1-003,Active,1,Y,38", "T1,T1-003,Active,1,1,38"), "line 4", "flag value '1'");
