@@ -13,8 +13,8 @@ namespace OutputForge.Expressions;
 /// literal    := 'text' | "text" | number
 /// </code>
 /// "and" binds tighter than "or"; keywords are case-insensitive. The missing-value test takes ISO
-/// SQL's words (ISO/IEC 9075-2, null predicate); the earlier word "missing" in place of "null" gets an error
-/// that names the new form, so that old specs are quick to fix.
+/// SQL's words (ISO/IEC 9075-2, null predicate); the earlier word "missing" in place of "null"
+/// gets an error that names the new form, so that old specs are quick to fix.
 /// </summary>
 public sealed class ConditionParser
 {
