@@ -22,7 +22,7 @@ public static class OneWayAnova
         var used = new List<IReadOnlyList<double>>();
         for (int g = 0; g < groups.Count; g++)
         {
-            var values = groups[g] ?? throw new ArgumentException($"Group {g + 1} is missing.", nameof(groups));
+            var values = groups[g] ?? throw new ArgumentException($"Group {g + 1} is null.", nameof(groups));
             if (values.Any(v => double.IsNaN(v) || double.IsInfinity(v)))
             {
                 throw new ArgumentException($"Group {g + 1} contains a value that is not a finite number.", nameof(groups));

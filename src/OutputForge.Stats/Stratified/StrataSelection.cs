@@ -14,7 +14,7 @@ internal static class StrataSelection
         var notes = new List<string>();
         for (int k = 0; k < strata.Count; k++)
         {
-            var s = strata[k] ?? throw new ArgumentException($"Stratum {k + 1} is missing.", nameof(strata));
+            var s = strata[k] ?? throw new ArgumentException($"Stratum {k + 1} is null.", nameof(strata));
             TwoGroupCounts.Validate(s.Events1, s.Total1, s.Events2, s.Total2);
             if (s.N == 0)
             {
