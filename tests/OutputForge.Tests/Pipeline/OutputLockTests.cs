@@ -75,6 +75,18 @@ public sealed class OutputLockTests
     }
 
     [Fact]
+    public void A_folder_without_write_permission_or_on_a_read_only_disk_is_named_as_such()
+    {
+        // Run as an administrator, a test cannot take a folder's write permission away: the messages are checked on the
+        // errors the runtime raises for those cases (EACCES as UnauthorizedAccessException, EROFS as an IOException).
+        using var folder = new TempFolder();
+        var denied = OutputPlace.CannotWrite("tables", folder.Path, new UnauthorizedAccessException("Access to the path is denied."));
+        Assert.Equal($"tables: no permission to write in {folder.Path} (Access to the path is denied.)", denied.Message);
+        var readOnly = OutputPlace.CannotWrite("tables", folder.Path, new IOException("Read-only file system"));
+        Assert.Equal($"tables: cannot write in {folder.Path} (Read-only file system)", readOnly.Message);
+    }
+
+    [Fact]
     public void An_output_folder_inside_the_data_folder_is_a_usage_error_naming_both()
     {
         using var study = new MiniStudy();
