@@ -55,6 +55,20 @@ public sealed class DocumentTextTests
     }
 
     [Fact]
+    public void A_title_at_the_limit_is_written_whole_in_every_format()
+    {
+        var title = new string('M', DocumentText.MaxLength);
+        using var study = new MiniStudy(table: MiniStudy.TableJson.Replace("[\"Responders\"]", $"[\"{title}\"]"));
+        var error = new StringWriter();
+        var code = OutputForge.Cli.Program.Run(["run", "--spec", study.Folder, "--out", study.OutputFolder, "--format", "docx,xlsx,txt", "--quiet"], error);
+        Assert.True(code == 0, error.ToString());
+        Assert.Contains(title, File.ReadAllText(Path.Combine(study.OutputFolder, "table-1.txt")));
+        Assert.Contains(title, string.Join("\n", DocumentReader.WordParagraphs(Path.Combine(study.OutputFolder, "table-1.docx"))));
+        using var workbook = new ClosedXML.Excel.XLWorkbook(Path.Combine(study.OutputFolder, "table-1.xlsx"));
+        Assert.Contains(workbook.Worksheet(1).CellsUsed(), c => c.GetString() == title);
+    }
+
+    [Fact]
     public void A_noncharacter_in_the_data_is_replaced_and_warned_about_when_asked_and_every_format_is_written()
     {
         var adsl = MiniStudy.Adsl.Replace(",Active,", ",Act\uFFFEive,");
