@@ -77,6 +77,9 @@ public static class BadInputCases
         yield return T("1,100 tests joined by and", "ANL01FL = 'Y'", string.Join(" and ", Enumerable.Repeat("ANL01FL = 'Y'", 1_100)),
             "$.endpoint.where", "joins more than 1000 tests");
 
+        yield return T("JSON nested 100 levels deep", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"x\": " + new string('[', 100) + new string(']', 100) + ",",
+            "invalid JSON", "64");
+
         // text a document cannot hold: one rule for spec text, data values and template output, in every format
         yield return T("title of 40,000 characters", "[\"Responders\"]", $"[\"{new string('L', 40_000)}\"]", "$.title[0]", "40,000 characters long, more than the 32,767");
         yield return new BadInputCase("title of 40,000 characters as text", ["t1.json", "$.title[0]", "more than the 32,767"])
