@@ -1,5 +1,6 @@
 using System.Text;
 using CsvHelper;
+using OutputForge.Common;
 
 namespace OutputForge.Data;
 
@@ -172,9 +173,9 @@ public static class CsvDatasetReader
                     throw new DataException(path, line, header[c],
                         FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
                 }
-                if (value.Length > Layout.DocumentText.MaxLength)
+                if (value.Length > DocumentText.MaxLength)
                 {
-                    throw new DataException(path, line, header[c], Layout.DocumentText.TooLong(value.Length));
+                    throw new DataException(path, line, header[c], DocumentText.TooLong(value.Length));
                 }
                 // Control characters are single bytes below 0x20 in UTF-8, noncharacters start with a byte from 0xEF to
                 // 0xF4: look for them only when such a byte is present.

@@ -6,8 +6,9 @@ using OutputForge.Rendering;
 using OutputForge.Rendering.Excel;
 using OutputForge.Spec;
 using OutputForge.Templates;
-using OutputForge.Workflow;
-using OutputForge.Workflow.Manifest;
+using OutputForge.Pipeline.Manifest;
+using OutputForge.Common;
+using OutputForge.Pipeline.Manifest;
 
 namespace OutputForge.Pipeline;
 
@@ -206,7 +207,7 @@ public static class PackageRunner
         var laidOut = TableLayOut.Build(study, table, result, studyLine, run, page, NumberDisplay.Values, context.Templates,
             document => TemplateValues.For(study, table, result, document, run));
         times.Lap("layout");
-        if (DocumentText.FirstProblem(laidOut.Document) is { } problem)
+        if (TableDocumentText.FirstProblem(laidOut.Document) is { } problem)
         {
             // Each source is checked where it is read; this catches text assembled from several pieces.
             throw new SpecException(table.Source.Problem(string.Empty, $"the laid-out table cannot be written: {problem}"));

@@ -1,4 +1,4 @@
-using OutputForge.Workflow.Manifest;
+using OutputForge.Pipeline.Manifest;
 
 namespace OutputForge.Workflow.Changes;
 

@@ -3,7 +3,7 @@ using System.Text.Json.Serialization;
 using OutputForge.Data;
 using OutputForge.Pipeline;
 
-namespace OutputForge.Workflow.Manifest;
+namespace OutputForge.Pipeline.Manifest;
 
 /// <summary>Reads and writes manifest.json (camelCase, indented, fixed property order).</summary>
 public static class ManifestJson

@@ -1,7 +1,6 @@
 using System.Text.Json;
-using OutputForge.Pipeline;
 
-namespace OutputForge.Workflow;
+namespace OutputForge.Pipeline;
 
 /// <summary>
 /// The entries of an existing results.json that a run of only some tables keeps: each table's

@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace OutputForge.Data;
+namespace OutputForge.Common;
 
 /// <summary>
 /// The characters a table document cannot hold: those XML 1.0 forbids in text (U+0000-U+001F except tab, line feed

@@ -1,7 +1,7 @@
 using System.Text.RegularExpressions;
 using OutputForge.Spec;
 
-namespace OutputForge.Workflow;
+namespace OutputForge.Pipeline;
 
 /// <summary>
 /// Which tables a run produces: all, or those whose id equals one of the given ids or matches one

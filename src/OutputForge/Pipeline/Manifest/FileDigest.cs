@@ -1,6 +1,6 @@
 using System.Security.Cryptography;
 
-namespace OutputForge.Workflow.Manifest;
+namespace OutputForge.Pipeline.Manifest;
 
 /// <summary>
 /// SHA-256 digests of files (FIPS 180-4), in lower-case hex, and the short form printed in

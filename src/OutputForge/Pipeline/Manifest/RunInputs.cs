@@ -2,7 +2,7 @@ using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Spec;
 
-namespace OutputForge.Workflow.Manifest;
+namespace OutputForge.Pipeline.Manifest;
 
 /// <summary>
 /// The spec and data files of a run with their SHA-256 digests, taken before any table is produced

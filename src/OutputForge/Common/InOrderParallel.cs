@@ -1,6 +1,6 @@
 using System.Runtime.ExceptionServices;
 
-namespace OutputForge.Pipeline;
+namespace OutputForge.Common;
 
 /// <summary>
 /// Runs independent pieces of work on all cores and, when some fail, rethrows the error of the first failing

@@ -1,7 +1,7 @@
 using System.Globalization;
 using OutputForge.Pipeline;
 
-namespace OutputForge.Workflow.Manifest;
+namespace OutputForge.Pipeline.Manifest;
 
 /// <summary>
 /// Writes manifest.json into a run's staging folder, last, after every other output, so that it

@@ -1,4 +1,4 @@
-namespace OutputForge.Workflow.Manifest;
+namespace OutputForge.Pipeline.Manifest;
 
 /// <summary>
 /// What one run read and wrote (manifest.json): the tool, the command line, when, every spec and

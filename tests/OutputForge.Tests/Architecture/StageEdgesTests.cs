@@ -1,0 +1,83 @@
+using System.Reflection;
+using OutputForge.Pipeline;
+
+namespace OutputForge.Tests.Architecture;
+
+/// <summary>
+/// The stages of the core assembly use each other in one direction only (docs/architecture.md, "Stage edges"): each stage
+/// may name the types of the stages listed for it and no others, so a cycle such as Pipeline ↔ Workflow cannot come back
+/// unnoticed. A stage is a folder and namespace under OutputForge (OutputForge.Kinds.Subgroups is the Kinds stage).
+/// </summary>
+public class StageEdgesTests
+{
+    private static readonly Assembly Core = typeof(PackageRunner).Assembly;
+
+    /// <summary>What each stage may use besides itself, the Stats assembly and outside libraries.</summary>
+    public static readonly Dictionary<string, string[]> Allowed = new(StringComparer.Ordinal)
+    {
+        ["Common"] = [],
+        ["Naming"] = [],
+        ["Files"] = [],
+        ["Expressions"] = ["Naming"],
+        ["Spec"] = ["Common", "Naming", "Files", "Expressions"],
+        ["Data"] = ["Naming", "Files", "Common", "Expressions", "Spec"],
+        ["Results"] = [],
+        ["Analysis"] = ["Naming", "Expressions", "Spec", "Data", "Results"],
+        ["Kinds"] = ["Naming", "Expressions", "Spec", "Data", "Results", "Analysis"],
+        ["Layout"] = ["Common", "Naming", "Spec", "Results"],
+        ["Templates"] = ["Common", "Naming", "Files", "Spec", "Results", "Layout"],
+        ["Rendering"] = ["Results", "Layout"],
+        ["Pipeline"] = ["Naming", "Files", "Common", "Expressions", "Spec", "Data", "Results", "Analysis", "Kinds", "Layout", "Templates", "Rendering"],
+        ["Workflow"] = ["Naming", "Files", "Common", "Expressions", "Spec", "Data", "Results", "Analysis", "Kinds", "Layout", "Templates", "Rendering", "Pipeline"],
+        ["Demo"] = ["Naming", "Files", "Spec", "Kinds"],
+    };
+
+    [Fact]
+    public void Every_stage_uses_only_the_stages_below_it()
+    {
+        var crossings = Core.GetTypes()
+            .Where(t => !t.IsNested && StageOf(t) is not null)
+            .SelectMany(t => TypeReferences.Of(t).Select(u => (From: t, u.Used, u.Where)))
+            .Where(r => r.Used.Assembly == Core && StageOf(r.Used) is { } to && to != StageOf(r.From) && !Allowed[StageOf(r.From)!].Contains(to))
+            .Select(r => $"{StageOf(r.From)} -> {StageOf(r.Used)}: {r.From.FullName} ({r.Where}) uses {r.Used.FullName}")
+            .Distinct()
+            .Order(StringComparer.Ordinal)
+            .ToList();
+        Assert.True(crossings.Count == 0, "stage edges crossed:\n" + string.Join("\n", crossings));
+    }
+
+    [Fact]
+    public void Every_stage_of_the_core_assembly_is_ranked()
+    {
+        var unranked = Core.GetTypes().Select(StageOf).OfType<string>().Distinct().Where(s => !Allowed.ContainsKey(s)).ToList();
+        Assert.Empty(unranked);
+    }
+
+    [Fact]
+    public void The_allowed_edges_have_no_cycle()
+    {
+        // Each stage's allowed stages are ranked before it, so following the edges can never come back.
+        var ranked = new List<string>();
+        foreach (var (stage, uses) in Allowed)
+        {
+            Assert.All(uses, u => Assert.Contains(u, ranked));
+            ranked.Add(stage);
+        }
+    }
+
+    [Fact]
+    public void The_scan_finds_a_reference_written_with_a_partial_namespace()
+    {
+        // Proof that the scan reads method bodies: the run calls the kind registry as "Kinds.TableKinds.For" inside
+        // namespace OutputForge.Pipeline, with no using directive.
+        var used = Core.GetTypes().Where(t => StageOf(t) == "Pipeline").SelectMany(TypeReferences.Of).Select(u => u.Used);
+        Assert.Contains(typeof(OutputForge.Kinds.TableKinds), used);
+    }
+
+    /// <summary>The stage of a type of the core assembly: the namespace part after "OutputForge"; null for compiler-made types outside it.</summary>
+    private static string? StageOf(Type type)
+    {
+        var parts = (type.Namespace ?? string.Empty).Split('.');
+        return parts.Length >= 2 && parts[0] == "OutputForge" ? parts[1] : null;
+    }
+}
