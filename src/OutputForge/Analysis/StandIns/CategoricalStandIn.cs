@@ -1,7 +1,7 @@
 using OutputForge.Expressions;
 using OutputForge.Spec;
 
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>
 /// An ADSL variable summarized by level (demographics, disposition): its levels are the spec's list,

@@ -1,4 +1,4 @@
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>
 /// One invented subject of a mock shell: its USUBJID, its arm (index into the study spec's

@@ -1,4 +1,4 @@
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>
 /// What one table kind adds to the stand-in study of its mock shell: the variables its analysis
@@ -9,12 +9,12 @@ namespace OutputForge.Workflow.Shells;
 /// statistic that is not estimable may change its cell's shape), and are never shown.
 /// </summary>
 /// <remarks>
-/// Every table kind has one, in its folder, named in its line of <see cref="Kinds.TableKinds"/>.
+/// Every table kind has one, in its folder, named in its line of the kind registry, <c>Kinds/TableKinds</c>.
 /// </remarks>
 public interface IShellStandIn
 {
-    /// <summary>How many stand-in subjects each arm needs; most kinds do with <see cref="ShellData.SubjectsPerArm"/>.</summary>
-    int SubjectsPerArm(Spec.TableSpec table) => ShellData.SubjectsPerArm;
+    /// <summary>How many stand-in subjects each arm needs; most kinds do with <see cref="ShellRecords.SubjectsPerArm"/>.</summary>
+    int SubjectsPerArm(Spec.TableSpec table) => ShellRecords.SubjectsPerArm;
 
     void Add(ShellRecords records);
 }

@@ -2,7 +2,7 @@ using OutputForge.Data;
 using OutputForge.Expressions;
 using OutputForge.Spec;
 
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>
 /// The values an endpoint record needs to be selected: PARAMCD the endpoint's parameter, AVISIT its

@@ -2,7 +2,7 @@ using System.Globalization;
 using OutputForge.Data;
 using OutputForge.Expressions;
 
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>A column of stand-in records, typed as the dataset reader would type the same text.</summary>
 public static class StandInColumn

@@ -3,7 +3,7 @@ using OutputForge.Data;
 using OutputForge.Expressions;
 using OutputForge.Spec;
 
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>
 /// The stand-in study a mock shell is laid out from, while it is being made: the invented subjects
@@ -18,6 +18,9 @@ public sealed class ShellRecords
     public const string PlaceholderLevel = "xxxxxxxx";
 
     public const string SubjectLevel = "adsl";
+
+    /// <summary>Ten per arm: no expected count is below 5 when split five and five, and no statistic is inestimable.</summary>
+    public const int SubjectsPerArm = 10;
 
     private readonly Dictionary<string, List<Dictionary<string, string?>>> _records = new(StringComparer.Ordinal);
     private readonly Dictionary<string, Dictionary<string, VariableKind>> _kinds = new(StringComparer.Ordinal);

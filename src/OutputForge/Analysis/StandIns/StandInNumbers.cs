@@ -1,4 +1,4 @@
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>
 /// Varied, repeatable stand-in numbers: a fixed integer hash of (subject, variable) mapped to [0, 1).

@@ -2,7 +2,7 @@ using System.Globalization;
 using OutputForge.Data;
 using OutputForge.Expressions;
 
-namespace OutputForge.Workflow.Shells;
+namespace OutputForge.Analysis.StandIns;
 
 /// <summary>
 /// Finds values of a condition's variables that make it true (or false), by trying the literals
