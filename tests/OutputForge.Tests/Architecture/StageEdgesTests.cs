@@ -58,6 +58,23 @@ public class StageEdgesTests
         Assert.True(crossings.Count == 0, "stage edges crossed:\n" + string.Join("\n", crossings));
     }
 
+    /// <summary>The libraries that draw pictures and write documents; only Rendering may use them.</summary>
+    private static readonly string[] DrawingLibraries = ["ScottPlot", "ClosedXML", "DocumentFormat.OpenXml", "SkiaSharp"];
+
+    [Fact]
+    public void Only_rendering_draws_pictures_and_writes_documents()
+    {
+        var uses = Core.GetTypes()
+            .Where(t => !t.IsNested && StageOf(t) is { } stage && stage != "Rendering")
+            .SelectMany(t => TypeReferences.Of(t).Select(u => (From: t, u.Used, u.Where)))
+            .Where(r => DrawingLibraries.Contains(r.Used.Assembly.GetName().Name))
+            .Select(r => $"{StageOf(r.From)}: {r.From.FullName} ({r.Where}) uses {r.Used.FullName}")
+            .Distinct()
+            .Order(StringComparer.Ordinal)
+            .ToList();
+        Assert.True(uses.Count == 0, "drawing or document library used outside Rendering:\n" + string.Join("\n", uses));
+    }
+
     [Fact]
     public void Every_stage_of_the_core_assembly_is_ranked()
     {

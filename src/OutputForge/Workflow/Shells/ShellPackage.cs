@@ -20,7 +20,7 @@ public static class ShellPackage
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder, package.Folders);
         var run = new RunFacts(DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
-        var page = PackageRunner.PageFrom(study.Page);
+        var page = PageSetup.From(study.Page);
         var selected = TableSelection.Select(study, package.Tables, tables);
         foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
         {
@@ -29,7 +29,7 @@ public static class ShellPackage
         var shells = new List<LaidOutTable>();
         foreach (var table in selected.Where(t => ShellData.Supports(t.Kind)))
         {
-            var (shell, assumptions) = ShellBuilder.Build(study, table, PackageRunner.StudyLine(study), run, page, templates);
+            var (shell, assumptions) = ShellBuilder.Build(study, table, StudyLine.Of(study), run, page, templates);
             foreach (var assumption in assumptions)
             {
                 log.Warning($"table {table.Id}: {assumption}");

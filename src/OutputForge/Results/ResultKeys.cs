@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace OutputForge.Analysis;
+namespace OutputForge.Results;
 
 /// <summary>
 /// Builds the stable keys of results.json: lower case, runs of anything but letters and digits

@@ -1,0 +1,57 @@
+using OutputForge.Data;
+using OutputForge.Layout;
+using OutputForge.Pipeline.Manifest;
+using OutputForge.Spec;
+using OutputForge.Templates;
+
+namespace OutputForge.Pipeline;
+
+/// <summary>
+/// The first part of a run, in the order its errors are reported: specs, templates, the data folder (kept apart from the
+/// output folder), the datasets, the digests of every input, the selected tables and the run's facts.
+/// </summary>
+internal static class RunPreparation
+{
+    public static PreparedRun Prepare(RunRequest request, string lockedOutputFolder, RunClock clock, IRunLog log)
+    {
+        var package = SpecLoader.Load(request.SpecPath, request.AllowedFolders);
+        var study = package.Study;
+        var templates = TemplateSet.Load(study.Folder, package.Folders);
+        log.Detail($"specs: {package.Tables.Count} table specs read in {clock.ElapsedMilliseconds:0} ms");
+        var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
+        OutputPlace.CheckApart(request.OutputFolder, lockedOutputFolder, dataFolder, study.Folder);
+        var dataWarnings = new List<string>();
+        clock.StartStep();
+        var data = StudyData.Load(study, dataFolder, request.DataOptions with { ReadableFolders = package.Folders.Folders }, dataWarnings.Add);
+        log.Detail($"data: {data.Datasets.Count} datasets, {data.Datasets.Sum(d => File.Exists(d.File) ? new FileInfo(d.File).Length : 0) / 1e6:0.0} MB read in {clock.StepMilliseconds:0} ms");
+        log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
+                 string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
+
+        clock.StartStep();
+        var inputs = RunInputs.Read(package, data);
+        log.Detail($"inputs: SHA-256 digests of the spec and data files in {clock.StepMilliseconds:0} ms");
+        var selected = TableSelection.Select(study, package.Tables, request.Tables);
+        var facts = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
+        {
+            DataDigests = inputs.Data.Where(d => d.Dataset is not null)
+                .ToDictionary(d => d.Dataset!, d => FileDigest.Short(d.Sha256), StringComparer.Ordinal),
+        };
+        return new PreparedRun(package, templates, dataFolder, data, dataWarnings, inputs, selected, facts);
+    }
+
+    private static string DefaultDataFolder(SpecPackage package)
+    {
+        var study = package.Study;
+        if (study.Data.Folder is null)
+        {
+            throw new SpecException(study.Source.Problem("/data",
+                "no data folder: give --data on the command line or data.folder in the study spec"));
+        }
+        var folder = Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
+        if (!package.Folders.Allows(folder))
+        {
+            throw new SpecException(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder) + ", or give --data"));
+        }
+        return folder;
+    }
+}
