@@ -49,6 +49,9 @@ public sealed class DataColumn : IVariable
     public VariableKind Kind { get; }
     public int Length => _length;
 
+    /// <summary>The variable's label as the file gives it (XPT and Dataset-JSON files carry one; CSV has none).</summary>
+    public string? Label { get; internal set; }
+
     /// <summary>For a text column whose first values were numbers: the first value that is not (for messages).</summary>
     public string? TextEvidence { get; init; }
 
