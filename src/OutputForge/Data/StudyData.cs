@@ -90,7 +90,16 @@ public sealed class StudyData
                     throw new DataException(path, null, null,
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
-                opened[i] = CsvFileParts.Open(name, path, options);
+                if (DatasetFiles.IsCsv(fileName))
+                {
+                    opened[i] = CsvFileParts.Open(name, path, options);
+                }
+                else
+                {
+                    // XPT and Dataset-JSON files are read whole here, streamed, on this file's core.
+                    var warnings = new List<string>();
+                    outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add), warnings, null);
+                }
             }
             catch (Exception e)
             {
