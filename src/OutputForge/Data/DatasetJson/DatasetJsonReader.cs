@@ -76,6 +76,7 @@ public static class DatasetJsonReader
                 $"invalid JSON at line {e.LineNumber + 1}, byte {e.BytePositionInLine + 1} ({parser.Where}): {Reason(e.Message)}");
         }
         var dataset = parser.Finish();
+        parser.Warnings.ForEach(warn);
         if (parser.Replaced > 0)
         {
             warn(CsvDatasetReader.ReplacedWarning(path, parser.Replaced));
@@ -119,6 +120,10 @@ public static class DatasetJsonReader
         private readonly int _rowDepth = ndjson ? 0 : 2;
 
         public int Replaced { get; private set; }
+
+        public List<string> Warnings { get; } = [];
+
+        private readonly HashSet<string> _fractionalIntegers = new(StringComparer.Ordinal);
 
         /// <summary>Where the reader is, for messages.</summary>
         public string Where => _cell >= 0 ? $"row {_rows + 1}" : _rows > 0 ? $"after row {_rows}" : _columnsSeen ? "before the first row" : "in the metadata";
@@ -352,9 +357,10 @@ public static class DatasetJsonReader
                     {
                         throw RowError($"the number {Encoding.UTF8.GetString(raw)} is outside the range of a double");
                     }
-                    if (column.DataType == "integer" && number != Math.Floor(number))
+                    if (column.DataType == "integer" && number != Math.Floor(number) && _fractionalIntegers.Add(column.Name!))
                     {
-                        throw RowError($"expected an integer (dataType integer), found {Encoding.UTF8.GetString(raw)}");
+                        // Published files do this (a percent change declared integer): the number is kept, and said.
+                        Warnings.Add($"{path}: column {column.Name} is declared integer but holds numbers with a fraction (first in row {_rows + 1}: {Encoding.UTF8.GetString(raw)}); they are read as they are written");
                     }
                     builder.AddNumber(number, raw);
                     break;
