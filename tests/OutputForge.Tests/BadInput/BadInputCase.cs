@@ -16,6 +16,8 @@ public sealed record BadInputCase(string Name, string[] Expect)
     public byte[]? Adsl { get; init; }
     public byte[]? Adeff { get; init; }
     public string[] ExtraArguments { get; init; } = [];
+    /// <summary>Any other spoiling of the study, e.g. writing a damaged XPT or Dataset-JSON file into its data folder.</summary>
+    public Action<MiniStudy>? Spoil { get; init; }
 
     public override string ToString() => Name;
 
@@ -40,6 +42,7 @@ public sealed record BadInputCase(string Name, string[] Expect)
         {
             File.WriteAllBytes(Path.Combine(study.DataFolder, "adeff.csv"), Adeff);
         }
+        Spoil?.Invoke(study);
     }
 
     private string Replace(string text, (string From, string To)[] edits, string file)

@@ -25,6 +25,11 @@ public static class BadInputCases
 
     public static IEnumerable<BadInputCase> All()
     {
+        foreach (var item in DataFormatBadInputCases.All())
+        {
+            yield return item;
+        }
+
         // JSON syntax
         yield return T("table: missing closing brace", "  }\n}", "  }\n", "invalid JSON");
         yield return T("table: text after the end", "  }\n}", "  }\n}\nmore", "invalid JSON");

@@ -94,6 +94,7 @@ public static class DatasetJsonReader
         var at = message.IndexOf(" LineNumber:", StringComparison.Ordinal);
         var text = (at >= 0 ? message[..at] : message).Trim().TrimEnd('.');
         return text.Contains("depth to be zero", StringComparison.Ordinal) || text.Contains("does not contain any JSON tokens", StringComparison.Ordinal)
+            || text.Contains("reached end of data", StringComparison.Ordinal)
             ? "the file ends before the JSON is complete (unterminated)"
             : text;
     }

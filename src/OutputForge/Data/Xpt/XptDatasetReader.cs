@@ -127,7 +127,7 @@ public static class XptDatasetReader
                 throw new DataException(path, null, null, $"record {at}: the namestr header announces {count} variables, but only {v} namestr records come before the next header record");
             }
             variables[v] = XptVariable.Parse(record, out var problem)
-                ?? throw new DataException(path, null, null, $"record {at}: namestr {v + 1} of {count} is not a variable ({problem}); does the namestr count ({count}) agree with the variables?");
+                ?? throw new DataException(path, null, null, $"record {at}: namestr {v + 1} of {count} is not a variable ({problem}); the namestr count ({count}) disagrees with the variables");
             if (!names.TryAdd(variables[v].Name, v))
             {
                 throw new DataException(path, null, variables[v].Name, $"record {at}: the variable name appears twice (variables {names[variables[v].Name] + 1} and {v + 1})");
