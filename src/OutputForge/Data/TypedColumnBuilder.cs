@@ -23,6 +23,7 @@ internal sealed class TypedColumnBuilder
     private string?[]? _text;
     private int _count;
     private RepeatedText _repeat;
+    private TextPool? _pool;
 
     public TypedColumnBuilder(string name, VariableKind kind, int capacity)
     {
@@ -107,6 +108,14 @@ internal sealed class TypedColumnBuilder
         AddWritten(value, System.Text.Encoding.UTF8.GetString(written));
     }
 
+    /// <summary>A number written as text in canonical form (<see cref="CanonicalText"/>), already parsed: no string is kept.</summary>
+    public void AddCanonical(double value, int decimals)
+    {
+        if (Full) Grow();
+        _numbers[_count] = value;
+        _decimals[_count++] = (sbyte)decimals;
+    }
+
     private void AddWritten(double value, string text)
     {
         _text ??= new string?[_numbers.Length];
@@ -162,7 +171,7 @@ internal sealed class TypedColumnBuilder
 
     public delegate string Decoder(ReadOnlySpan<byte> bytes);
 
-    /// <summary>Text given as bytes; a value repeating the one above is the same string, decoded once.</summary>
+    /// <summary>Text given as bytes; a value repeating the one above, or one of the column's short values seen before, is the same string, decoded once.</summary>
     public void AddText(ReadOnlySpan<byte> utf8, Decoder decode)
     {
         if (Full) Grow();
@@ -171,7 +180,8 @@ internal sealed class TypedColumnBuilder
             _text![_count++] = repeated;
             return;
         }
-        var value = decode(utf8);
+        _pool ??= new TextPool();
+        var value = _pool.Get(utf8, decode);
         _repeat.Remember(utf8, value);
         _text![_count++] = value;
     }

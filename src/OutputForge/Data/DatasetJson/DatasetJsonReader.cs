@@ -354,18 +354,24 @@ public static class DatasetJsonReader
                     break;
                 case JsonTokenType.Number when column.IsNumber:
                     var raw = reader.ValueSpan;
+                    if (CanonicalText.TryParseNumber(raw, out var canonical, out var decimals)
+                        && (decimals == 0 || column.Type != ColumnType.Integer))
+                    {
+                        builder.AddCanonical(canonical, decimals);
+                        break;
+                    }
                     if (!reader.TryGetDouble(out var number) || !double.IsFinite(number))
                     {
                         throw RowError($"the number {Encoding.UTF8.GetString(raw)} is outside the range of a double");
                     }
-                    if (column.DataType == "integer" && number != Math.Floor(number) && _fractionalIntegers.Add(column.Name!))
+                    if (column.Type == ColumnType.Integer && number != Math.Floor(number) && _fractionalIntegers.Add(column.Name!))
                     {
                         // Published files do this (a percent change declared integer): the number is kept, and said.
                         Warnings.Add($"{path}: column {column.Name} is declared integer but holds numbers with a fraction (first in row {_rows + 1}: {Encoding.UTF8.GetString(raw)}); they are read as they are written");
                     }
                     builder.AddNumber(number, raw);
                     break;
-                case JsonTokenType.True or JsonTokenType.False when column.DataType == "boolean":
+                case JsonTokenType.True or JsonTokenType.False when column.Type == ColumnType.Boolean:
                     builder.AddText(token == JsonTokenType.True ? "true" : "false");
                     break;
                 default:
@@ -381,7 +387,18 @@ public static class DatasetJsonReader
                 builder.AddMissing();
                 return;
             }
-            if (column.DataType == "decimal")
+            if (column.Type == ColumnType.Decimal && !reader.ValueIsEscaped && CanonicalText.TryParseNumber(reader.ValueSpan, out var canonical, out var decimals))
+            {
+                builder.AddCanonical(canonical, decimals);
+                return;
+            }
+            if (column.Type == ColumnType.Date && !reader.ValueIsEscaped && builder.Kind == VariableKind.Date
+                && CanonicalText.TryParseDate(reader.ValueSpan, out var day))
+            {
+                builder.AddDay(day);
+                return;
+            }
+            if (column.Type == ColumnType.Decimal)
             {
                 // Dataset-JSON 1.1 writes decimals as strings so that their digits are kept exactly.
                 var digits = reader.ValueIsEscaped ? Encoding.UTF8.GetBytes(reader.GetString()!) : reader.ValueSpan.ToArray();
@@ -392,11 +409,11 @@ public static class DatasetJsonReader
                 builder.AddNumber(value, digits);
                 return;
             }
-            if (column.IsNumber || column.DataType == "boolean")
+            if (column.IsNumber || column.Type == ColumnType.Boolean)
             {
                 throw RowError($"expected {Expected(column)} (dataType {column.DataType}), found the string \"{Shorten(reader.GetString()!)}\"");
             }
-            if (column.DataType == "date")
+            if (column.Type == ColumnType.Date)
             {
                 builder.AddDateText(reader.GetString()!);
                 return;
