@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
 using OutputForge.Expressions;
@@ -27,7 +26,7 @@ public static class DatasetJsonReader
     {
         var ndjson = path.EndsWith(".ndjson", StringComparison.OrdinalIgnoreCase);
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
-        using var hash = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
+        var digest = StreamedFileDigest.Start(path);
         var parser = new Parser(path, ndjson, options, stream.Length);
         var buffer = new byte[BlockBytes];
         var length = 0;
@@ -41,7 +40,6 @@ public static class DatasetJsonReader
                 if (!final)
                 {
                     var read = stream.Read(buffer, length, buffer.Length - length);
-                    hash.AppendData(buffer, length, read);
                     final = read == 0;
                     length += read;
                 }
@@ -84,7 +82,7 @@ public static class DatasetJsonReader
         return new Dataset(name, path, dataset.Rows, dataset.Columns, new RowNumbers(dataset.Rows, ndjson ? 1 : 0))
         {
             Label = dataset.Label,
-            ContentSha256 = Convert.ToHexStringLower(hash.GetHashAndReset()),
+            ContentSha256 = digest.GetAwaiter().GetResult(),
         };
     }
 

@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Security.Cryptography;
 using System.Text;
 using OutputForge.Expressions;
 
@@ -39,8 +38,8 @@ public static class XptDatasetReader
     public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
-        using var hash = IncrementalHash.CreateHash(HashAlgorithmName.SHA256);
-        var input = new RecordInput(stream, hash, path);
+        var digest = StreamedFileDigest.Start(path);
+        var input = new RecordInput(stream, path);
         var header = ReadHeaders(input, out var datasetLabel);
         var (variables, rowLength) = header;
         var dataStart = input.Position;
@@ -65,7 +64,7 @@ public static class XptDatasetReader
         return new Dataset(name, path, (int)rows, columns, new RowNumbers((int)rows))
         {
             Label = datasetLabel,
-            ContentSha256 = Convert.ToHexStringLower(hash.GetHashAndReset()),
+            ContentSha256 = digest.GetAwaiter().GetResult(),
         };
     }
 
@@ -366,8 +365,8 @@ public static class XptDatasetReader
         return text.ToString().TrimEnd() + (record.Length > 48 ? "..." : "");
     }
 
-    /// <summary>The file as consecutive 80-byte records, hashed as they are read.</summary>
-    private sealed class RecordInput(FileStream stream, IncrementalHash hash, string path)
+    /// <summary>The file as consecutive 80-byte records.</summary>
+    private sealed class RecordInput(FileStream stream, string path)
     {
         private readonly byte[] _record = new byte[RecordLength];
 
@@ -390,14 +389,12 @@ public static class XptDatasetReader
                     ? $"record {Record}: the file ends where {what} should be; is it truncated, or not an XPT transport file?"
                     : $"record {Record}: the file ends inside {what} ({read} of 80 bytes); is it truncated?");
             }
-            hash.AppendData(_record);
             return _record;
         }
 
         public void Fill(Span<byte> buffer)
         {
             stream.ReadExactly(buffer);
-            hash.AppendData(buffer);
             Record += buffer.Length / RecordLength;
         }
     }
