@@ -186,6 +186,36 @@ internal sealed class TypedColumnBuilder
         _text![_count++] = value;
     }
 
+    /// <summary>
+    /// The builders of consecutive parts of one column (read at the same time on several cores) joined into one, as if
+    /// one builder had read every value: a date column that is text in any part (a partial date) is text throughout.
+    /// </summary>
+    public static TypedColumnBuilder Join(IReadOnlyList<TypedColumnBuilder> parts)
+    {
+        if (parts.Any(p => p._kind == VariableKind.Text))
+        {
+            foreach (var part in parts.Where(p => p._kind == VariableKind.Date)) part.BecomeText();
+        }
+        var first = parts[0];
+        var total = parts.Sum(p => p._count);
+        var joined = new TypedColumnBuilder(first._name, first._kind, total) { Label = first.Label };
+        var text = parts.Any(p => p._text is not null);
+        if (text && joined._text is null) joined._text = new string?[Math.Max(16, total)];
+        var at = 0;
+        foreach (var part in parts)
+        {
+            if (joined._kind != VariableKind.Text)
+            {
+                Array.Copy(part._numbers, 0, joined._numbers, at, part._count);
+                Array.Copy(part._decimals, 0, joined._decimals, at, part._count);
+            }
+            if (part._text is not null) Array.Copy(part._text, 0, joined._text!, at, part._count);
+            at += part._count;
+        }
+        joined._count = total;
+        return joined;
+    }
+
     public DataColumn Build()
     {
         if (_kind == VariableKind.Text)

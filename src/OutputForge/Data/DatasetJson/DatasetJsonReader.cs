@@ -16,7 +16,7 @@ namespace OutputForge.Data.DatasetJson;
 /// string, datetime, time, URI and boolean ("true"/"false") columns are text; null and "" are missing.
 /// Every problem is a <see cref="DataException"/> naming the file and the row.
 /// </summary>
-public static class DatasetJsonReader
+public static partial class DatasetJsonReader
 {
     private const int BlockBytes = 1 << 20;
 
@@ -25,14 +25,44 @@ public static class DatasetJsonReader
     public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn)
     {
         var ndjson = path.EndsWith(".ndjson", StringComparison.OrdinalIgnoreCase);
-        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
+        var size = new FileInfo(path).Length;
         var digest = StreamedFileDigest.Start(path);
-        var parser = new Parser(path, ndjson, options, stream.Length);
+        var parser = (!ndjson && Environment.ProcessorCount > 1 && size >= 2L * DatasetJsonRowParts.PartBytes
+            ? DatasetJsonRowParts.TryRead(path, options, size)
+            : null) ?? Pump(path, ndjson, options, size, stopAtRows: false).Parser;
+        var dataset = parser.Finish();
+        parser.Warnings.ForEach(warn);
+        if (parser.Replaced > 0)
+        {
+            warn(CsvDatasetReader.ReplacedWarning(path, parser.Replaced));
+        }
+        return new Dataset(name, path, dataset.Rows, dataset.Columns, new RowNumbers(dataset.Rows, ndjson ? 1 : 0))
+        {
+            Label = dataset.Label,
+            ContentSha256 = digest.GetAwaiter().GetResult(),
+        };
+    }
+
+    /// <summary>Where the sequential pass stopped: just after the '[' that opens <c>rows</c>, with the reader's state there.</summary>
+    internal sealed record PumpResult(Parser Parser, long RowsStart, JsonReaderState State, bool StoppedAtRows);
+
+    /// <summary>
+    /// Passes the file's tokens to a parser, front to back in blocks, from <paramref name="from"/> (with the reader state
+    /// <paramref name="resume"/> there, continuing <paramref name="parser"/>); with <paramref name="stopAtRows"/>, stops
+    /// where the rows begin, so that they can be read in parts.
+    /// </summary>
+    internal static PumpResult Pump(string path, bool ndjson, DataReadOptions options, long size, bool stopAtRows,
+        long from = 0, JsonReaderState? resume = null, Parser? parser = null)
+    {
+        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
+        stream.Position = from;
+        parser ??= new Parser(path, ndjson, options, size);
         var buffer = new byte[BlockBytes];
         var length = 0;
         var final = false;
-        var first = true;
-        var state = new JsonReaderState(new JsonReaderOptions { AllowMultipleValues = ndjson, CommentHandling = JsonCommentHandling.Disallow });
+        var first = from == 0;
+        long offset = from;
+        var state = resume ?? new JsonReaderState(new JsonReaderOptions { AllowMultipleValues = ndjson, CommentHandling = JsonCommentHandling.Disallow });
         try
         {
             while (true)
@@ -53,6 +83,10 @@ public static class DatasetJsonReader
                 while (reader.Read())
                 {
                     parser.Token(ref reader);
+                    if (stopAtRows && parser.AtRowsStart)
+                    {
+                        return new PumpResult(parser, offset + start + reader.BytesConsumed, reader.CurrentState, true);
+                    }
                 }
                 if (final)
                 {
@@ -62,6 +96,7 @@ public static class DatasetJsonReader
                 state = reader.CurrentState;
                 Buffer.BlockCopy(buffer, consumed, buffer, 0, length - consumed);
                 length -= consumed;
+                offset += consumed;
                 if (length == buffer.Length)
                 {
                     Array.Resize(ref buffer, buffer.Length * 2);
@@ -73,21 +108,11 @@ public static class DatasetJsonReader
             throw new DataException(path, null, null,
                 $"invalid JSON at line {e.LineNumber + 1}, byte {e.BytePositionInLine + 1} ({parser.Where}): {Reason(e.Message)}");
         }
-        var dataset = parser.Finish();
-        parser.Warnings.ForEach(warn);
-        if (parser.Replaced > 0)
-        {
-            warn(CsvDatasetReader.ReplacedWarning(path, parser.Replaced));
-        }
-        return new Dataset(name, path, dataset.Rows, dataset.Columns, new RowNumbers(dataset.Rows, ndjson ? 1 : 0))
-        {
-            Label = dataset.Label,
-            ContentSha256 = digest.GetAwaiter().GetResult(),
-        };
+        return new PumpResult(parser, -1, default, false);
     }
 
     /// <summary>The reader's description of the fault without its own position (reported in our words).</summary>
-    private static string Reason(string message)
+    internal static string Reason(string message)
     {
         var at = message.IndexOf(" LineNumber:", StringComparison.Ordinal);
         var text = (at >= 0 ? message[..at] : message).Trim().TrimEnd('.');
@@ -98,13 +123,13 @@ public static class DatasetJsonReader
     }
 
     /// <summary>The state of one pass through the tokens.</summary>
-    private sealed class Parser(string path, bool ndjson, DataReadOptions options, long fileBytes)
+    internal sealed class Parser(string path, bool ndjson, DataReadOptions options, long fileBytes, bool rowsOnly = false)
     {
         private enum Section { Top, Columns, Rows, Skip }
 
         private readonly List<DatasetJsonColumn> _columns = [];
         private TypedColumnBuilder[]? _builders;
-        private Section _section = Section.Top;
+        private Section _section = rowsOnly ? Section.Rows : Section.Top;
         private int _skipDepth;
         private string? _property;
         private string? _columnProperty;
@@ -116,7 +141,42 @@ public static class DatasetJsonReader
         private string? _label;
         private int _rows;
         private int _cell = -1;
-        private readonly int _rowDepth = ndjson ? 0 : 2;
+        private readonly int _rowDepth = ndjson || rowsOnly ? 0 : 2;
+
+        /// <summary>True just after the '[' opening <c>rows</c> (before any row).</summary>
+        public bool AtRowsStart => _section == Section.Rows && _cell < 0 && _rows == 0 && !rowsOnly;
+
+        /// <summary>The rows read so far (complete rows).</summary>
+        public int Rows => _rows;
+
+        /// <summary>True while inside a row.</summary>
+        public bool InRow => _cell >= 0;
+
+        public IReadOnlyList<DatasetJsonColumn> ColumnList => _columns;
+
+        public TypedColumnBuilder[]? Builders => _builders;
+
+        /// <summary>A parser of rows only (a part of the rows), with the columns the metadata gave.</summary>
+        public static Parser ForRows(Parser metadata, int capacity)
+        {
+            var rows = new Parser(path: metadata.FilePath, ndjson: false, metadata.Options, 0, rowsOnly: true);
+            rows._columns.AddRange(metadata._columns);
+            rows._columnsSeen = true;
+            rows._builders = rows._columns.Select(c => new TypedColumnBuilder(c.Name!, KindOf(c), capacity) { Label = c.Label }).ToArray();
+            return rows;
+        }
+
+        /// <summary>Takes the rows that parts read (joined), in place of rows of its own.</summary>
+        public void AdoptRows(int rows, TypedColumnBuilder[] builders, int replaced)
+        {
+            _rows = rows;
+            _builders = builders;
+            Replaced += replaced;
+        }
+
+        private string FilePath => path;
+
+        private DataReadOptions Options => options;
 
         public int Replaced { get; private set; }
 

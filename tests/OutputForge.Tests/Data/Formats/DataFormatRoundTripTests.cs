@@ -44,6 +44,9 @@ public sealed class DataFormatRoundTripTests
                 }
             }
             Assert.Equal(original.RowCount, ndjson.LineOfRow[^1] - 1);
+            // The manifest's digest of the data read: the SHA-256 of the file's bytes.
+            Assert.Equal(Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(File.ReadAllBytes(temp.File(name + ".xpt")))), xpt.ContentSha256);
+            Assert.Equal(Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(File.ReadAllBytes(temp.File(name + ".json")))), json.ContentSha256);
         }
     }
 
