@@ -11,8 +11,9 @@ namespace OutputForge.Data;
 public static class CsvDatasetReader
 {
     /// <summary>
-    /// The longest value read, in characters. ADaM text variables hold at most 200 characters (SAS
-    /// transport version 5); a field far beyond that is a broken file (e.g. a lost closing quote).
+    /// The longest value read, in characters. ADaM text variables hold at most 200 characters (the
+    /// version 5 transport files of regulatory submissions; common practice); a field far beyond that
+    /// is a broken file (e.g. a lost closing quote).
     /// </summary>
     public const int MaxFieldLength = 1 << 20;
 
@@ -177,8 +178,14 @@ public static class CsvDatasetReader
                     throw new DataException(path, line, header[c],
                         FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
                 }
-                // Control characters are single bytes below 0x20 in UTF-8: look for them only when such a byte is present.
-                if (utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 && ControlCharacters.IndexIn(value) >= 0)
+                if (value.Length > Layout.DocumentText.MaxLength)
+                {
+                    throw new DataException(path, line, header[c], Layout.DocumentText.TooLong(value.Length));
+                }
+                // Control characters are single bytes below 0x20 in UTF-8, noncharacters start with a byte from 0xEF to
+                // 0xF4: look for them only when such a byte is present.
+                if ((utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 || utf8.IndexOfAnyInRange((byte)0xEF, (byte)0xF4) >= 0)
+                    && ControlCharacters.IndexIn(value) >= 0)
                 {
                     value = HandleControlCharacter(path, line, header[c], value, options, ref replaced);
                 }
@@ -200,7 +207,7 @@ public static class CsvDatasetReader
         {
             var at = ControlCharacters.IndexIn(value);
             throw new DataException(path, line, variable,
-                $"the value holds the control character U+{(int)value[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
+                $"the value holds {ControlCharacters.Describe(value, at)} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
         }
         replaced++;
         return ControlCharacters.Replace(value);

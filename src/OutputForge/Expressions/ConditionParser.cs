@@ -8,16 +8,26 @@ namespace OutputForge.Expressions;
 /// single     := "not" single | "(" condition ")" | test
 /// test       := VARIABLE compare literal
 ///             | VARIABLE ["not"] "in" "(" literal ("," literal)* ")"
-///             | VARIABLE "is" ["not"] "missing"
+///             | VARIABLE "is" ["not"] "null"
 /// compare    := "=" | "!=" | "&lt;&gt;" | "&lt;" | "&lt;=" | "&gt;" | "&gt;="
 /// literal    := 'text' | "text" | number
 /// </code>
-/// "and" binds tighter than "or"; keywords are case-insensitive.
+/// "and" binds tighter than "or"; keywords are case-insensitive. The missing-value test takes ISO
+/// SQL's words (ISO/IEC 9075-2, null predicate); the earlier word "missing" in place of "null"
+/// gets an error that names the new form, so that old specs are quick to fix.
 /// </summary>
 public sealed class ConditionParser
 {
+    /// <summary>The deepest nesting of '(' and 'not' read: a real condition nests a few levels; a deeper one would exhaust the stack.</summary>
+    public const int MaxNesting = 100;
+
+    /// <summary>The most tests joined by 'and' and 'or' in one condition (each join deepens the tree that evaluates it).</summary>
+    public const int MaxJoins = 1_000;
+
     private readonly List<Token> _tokens;
     private int _next;
+    private int _nesting;
+    private int _joins;
 
     private ConditionParser(string text)
     {
@@ -63,6 +73,7 @@ public sealed class ConditionParser
         while (Peek().Kind == TokenKind.Or)
         {
             var op = Take();
+            Join(op);
             left = new OrNode(left, ParseAnd(), op.Position);
         }
         return left;
@@ -74,9 +85,26 @@ public sealed class ConditionParser
         while (Peek().Kind == TokenKind.And)
         {
             var op = Take();
+            Join(op);
             left = new AndNode(left, ParseSingle(), op.Position);
         }
         return left;
+    }
+
+    private void Nest(Token token)
+    {
+        if (++_nesting > MaxNesting)
+        {
+            throw new ConditionSyntaxException($"the condition nests '(' and 'not' more than {MaxNesting} levels deep", token.Position);
+        }
+    }
+
+    private void Join(Token token)
+    {
+        if (++_joins > MaxJoins)
+        {
+            throw new ConditionSyntaxException($"the condition joins more than {MaxJoins} tests with 'and' and 'or'", token.Position);
+        }
     }
 
     private ConditionNode ParseSingle()
@@ -86,11 +114,16 @@ public sealed class ConditionParser
         {
             case TokenKind.Not:
                 Take();
-                return new NotNode(ParseSingle(), token.Position);
+                Nest(token);
+                var negated = new NotNode(ParseSingle(), token.Position);
+                _nesting--;
+                return negated;
             case TokenKind.OpenParen:
                 Take();
+                Nest(token);
                 var inner = ParseOr();
                 Expect(TokenKind.CloseParen, "')'");
+                _nesting--;
                 return inner;
             case TokenKind.Identifier:
                 return ParseTest();
@@ -106,14 +139,15 @@ public sealed class ConditionParser
         switch (op.Kind)
         {
             case TokenKind.Is:
-                Take();
+                var written = Take().Text;
                 var negated = false;
                 if (Peek().Kind == TokenKind.Not)
                 {
-                    Take();
+                    written += " " + Take().Text;
                     negated = true;
                 }
-                Expect(TokenKind.Missing, "'missing' after 'is'");
+                RejectOldMissingTest(written, negated);
+                Expect(TokenKind.Null, negated ? "'null' after 'is not'" : "'null' or 'not null' after 'is'");
                 return new MissingTestNode(variable.Text, negated, variable.Position);
             case TokenKind.In:
                 Take();
@@ -132,11 +166,23 @@ public sealed class ConditionParser
             TokenKind.Greater => ComparisonOperator.Greater,
             TokenKind.GreaterOrEqual => ComparisonOperator.GreaterOrEqual,
             _ => throw new ConditionSyntaxException(
-                $"expected a comparison (=, !=, <, <=, >, >=), 'in', 'not in' or 'is missing' after {variable.Text} but found {Describe(op)}",
+                $"expected a comparison (=, !=, <, <=, >, >=), 'in', 'not in' or 'is null' after {variable.Text} but found {Describe(op)}",
                 op.Position),
         };
         Take();
         return new ComparisonNode(variable.Text, comparison, ParseLiteral(), variable.Position);
+    }
+
+    /// <summary>The word "missing" where "null" belongs: the test's earlier wording, answered with the one to write.</summary>
+    /// <param name="written">"is" or "is not" as the condition spells it.</param>
+    private void RejectOldMissingTest(string written, bool negated)
+    {
+        var word = Peek();
+        if (word.Kind == TokenKind.Identifier && string.Equals(word.Text, "missing", StringComparison.OrdinalIgnoreCase))
+        {
+            throw new ConditionSyntaxException(
+                $"the missing-value test is written '{(negated ? "is not null" : "is null")}', not '{written} {word.Text}'", word.Position);
+        }
     }
 
     private List<Literal> ParseList()
@@ -166,6 +212,10 @@ public sealed class ConditionParser
             case TokenKind.Identifier:
                 throw new ConditionSyntaxException(
                     $"expected a quoted text or a number but found '{token.Text}' (put text values in quotes: '{token.Text}')",
+                    token.Position);
+            case TokenKind.Null:
+                throw new ConditionSyntaxException(
+                    $"expected a quoted text or a number but found '{token.Text}' (a comparison with a missing value is false; test for one with 'is null' or 'is not null')",
                     token.Position);
             default:
                 throw new ConditionSyntaxException($"expected a quoted text or a number but found {Describe(token)}", token.Position);

@@ -29,7 +29,7 @@ public static class DataFormatBadInputCases
         new(name, [$"adsl.{extension}", .. expect])
         {
             Study = [("\"adsl\": \"adsl.csv\"", $"\"adsl\": \"adsl.{extension}\"")],
-            Spoil = study => File.WriteAllBytes(Path.Combine(study.DataFolder, "adsl." + extension), damage(Adsl(extension))),
+            Prepare = study => File.WriteAllBytes(Path.Combine(study.DataFolder, "adsl." + extension), damage(Adsl(extension))),
         };
 
     private static BadInputCase JsonCase(string name, string extension, string from, string to, params string[] expect) =>
