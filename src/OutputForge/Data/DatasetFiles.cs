@@ -18,6 +18,11 @@ public static class DatasetFiles
     public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn)
     {
         var extension = Path.GetExtension(path).ToLowerInvariant();
+        // A streamed file has no size limit, but it must be a regular file: a named pipe would make the run wait forever.
+        if (extension != ".csv" && Files.RegularFile.NotRegular(path) is { } kind)
+        {
+            throw new DataException(path, null, null, $"the file is {kind}, not a regular file");
+        }
         return extension switch
         {
             ".csv" => CsvDatasetReader.Read(name, path, options, warn),

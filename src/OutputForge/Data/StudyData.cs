@@ -90,7 +90,7 @@ public sealed class StudyData
                     throw new DataException(path, null, null,
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
-<<<<<<< HEAD
+                DatasetFileScope.Check(path, folder, options.ReadableFolders);
                 if (DatasetFiles.IsCsv(fileName))
                 {
                     opened[i] = CsvFileParts.Open(name, path, options);
@@ -101,10 +101,6 @@ public sealed class StudyData
                     var warnings = new List<string>();
                     outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add), warnings, null);
                 }
-=======
-                DatasetFileScope.Check(path, folder, options.ReadableFolders);
-                opened[i] = CsvFileParts.Open(name, path, options);
->>>>>>> main
             }
             catch (Exception e)
             {
