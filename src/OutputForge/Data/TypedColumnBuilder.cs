@@ -79,6 +79,18 @@ internal sealed class TypedColumnBuilder
         _count++;
     }
 
+    /// <summary>A missing number that is one of the special missing values (XPT .A-.Z and ._): the letter is kept beside it.</summary>
+    public void AddMissing(char letter)
+    {
+        if (letter != '.')
+        {
+            (_letters ??= [])[_count] = letter;
+        }
+        AddMissing();
+    }
+
+    private Dictionary<int, char>? _letters;
+
     private bool Full => _kind == VariableKind.Text ? _text!.Length <= _count : _numbers.Length <= _count || (_text is not null && _text.Length <= _count);
 
     /// <summary>A number held in binary: its text is its shortest decimal form.</summary>
@@ -224,6 +236,7 @@ internal sealed class TypedColumnBuilder
         }
         var column = DataColumn.Compact(_name, _kind, _numbers, _decimals, _text, _count);
         column.Label = Label;
+        column.KeepMissingLetters(_letters);
         return column;
     }
 

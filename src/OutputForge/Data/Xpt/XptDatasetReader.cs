@@ -245,9 +245,9 @@ public static class XptDatasetReader
                 builder.AddText(text, DecodeText);
                 continue;
             }
-            if (IbmFloat.IsMissing(value, out _))
+            if (IbmFloat.IsMissing(value, out var letter))
             {
-                builder.AddMissing();
+                builder.AddMissing(letter);
                 continue;
             }
             var number = IbmFloat.ToDouble(value);

@@ -82,4 +82,28 @@ public sealed class DataFormatRoundTripTests
         Assert.Null(TypedColumnBuilder.ShortestDecimals(1.0 / 3));
         Assert.Null(TypedColumnBuilder.ShortestDecimals(1e20));
     }
+
+    [Fact]
+    public void Special_missing_numbers_read_as_missing_with_their_letter_kept()
+    {
+        using var temp = new TempFolder();
+        var original = CsvDatasetReader.Read("adsl", temp.Write("adsl.csv", "N,S\n1,a\n2,b\n3,c\n"));
+        var path = temp.File("adsl.xpt");
+        XptDatasetWriter.Write(original, path, Created);
+        var bytes = File.ReadAllBytes(path);
+        // Observations start after 8 header records, 4 records of 2 namestrs (280 bytes) and the observation header;
+        // a row is N (8 bytes) then S (1 byte). Row 1's N becomes .A, row 2's ._ (the letter, then zero bytes).
+        const int data = 13 * 80;
+        bytes[data] = (byte)'A';
+        Array.Clear(bytes, data + 1, 7);
+        bytes[data + 9] = (byte)'_';
+        Array.Clear(bytes, data + 10, 7);
+        File.WriteAllBytes(path, bytes);
+        var read = XptDatasetReader.Read("adsl", path).Get("N");
+        Assert.True(read.IsMissing(0) && read.IsMissing(1));
+        Assert.Equal('A', read.MissingLetter(0));
+        Assert.Equal('_', read.MissingLetter(1));
+        Assert.Null(read.MissingLetter(2));
+        Assert.Equal(3, read.GetNumber(2));
+    }
 }
