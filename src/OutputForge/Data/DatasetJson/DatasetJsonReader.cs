@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using OutputForge.Expressions;
+using OutputForge.Common;
 
 namespace OutputForge.Data.DatasetJson;
 

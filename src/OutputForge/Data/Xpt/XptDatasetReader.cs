@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using OutputForge.Expressions;
+using OutputForge.Common;
 
 namespace OutputForge.Data.Xpt;
 
