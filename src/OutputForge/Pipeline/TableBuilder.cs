@@ -1,6 +1,7 @@
 using OutputForge.Layout;
 using OutputForge.Pipeline.Manifest;
 using OutputForge.Rendering;
+using OutputForge.Rendering.Figures;
 using OutputForge.Spec;
 using OutputForge.Templates;
 
@@ -22,6 +23,10 @@ internal sealed class TableBuilder(RunRequest request, PreparedRun prepared)
         var times = new StageTimes();
         var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, prepared.Data);
         times.Lap("analysis");
+        if (result.Figure is { } drawn && FigurePainter.Warning(drawn) is { } drawing)
+        {
+            result = result with { Warnings = [.. result.Warnings, drawing] };
+        }
         if (prepared.DataWarnings.Count > 0)
         {
             result = result with { Warnings = [.. prepared.DataWarnings, .. result.Warnings] };
@@ -56,7 +61,7 @@ internal sealed class TableBuilder(RunRequest request, PreparedRun prepared)
         }
         if (result.Figure is { } picture)
         {
-            files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
+            files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), FigurePainter.Paint(picture).Png));
         }
         return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
     }

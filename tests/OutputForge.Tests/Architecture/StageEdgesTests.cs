@@ -29,7 +29,7 @@ public class StageEdgesTests
         ["Rendering"] = ["Results", "Layout"],
         ["Pipeline"] = ["Naming", "Files", "Common", "Expressions", "Spec", "Data", "Results", "Analysis", "Kinds", "Layout", "Templates", "Rendering"],
         ["Workflow"] = ["Naming", "Files", "Common", "Expressions", "Spec", "Data", "Results", "Analysis", "Kinds", "Layout", "Templates", "Rendering", "Pipeline"],
-        ["Demo"] = ["Naming", "Files", "Spec", "Kinds"],
+        ["Demo"] = ["Common", "Naming", "Files", "Expressions", "Spec", "Data", "Kinds"],
     };
 
     /// <summary>

@@ -2,21 +2,18 @@ using System.Globalization;
 using OutputForge.Results;
 using ScottPlot;
 
-namespace OutputForge.Kinds.Subgroups;
+namespace OutputForge.Rendering.Figures;
 
 /// <summary>
-/// Draws a <see cref="ForestPlot"/> as a PNG with ScottPlot: one line per subgroup level (the
-/// interval, a square at the estimate; a diamond for the overall row), the subgroup variables'
-/// labels as headings, a dashed vertical line of no effect (0 for a difference, 1 for a ratio),
-/// ratios on a log scale, the measure in the axis title and which side favours which arm under
-/// the axis. With several active arms each has its own colour and a legend. Text is drawn in
-/// DejaVu Sans (Debian package fonts-dejavu-core), so the same inputs give the same bytes on any
-/// machine with that font.
+/// Draws a <see cref="ForestFigure"/> as a PNG with ScottPlot: one line per row's interval with a square at the
+/// estimate (a diamond for the summary row), headings in bold, a dashed vertical line of no effect, a log axis for
+/// ratios, the axis title and the "favours" texts under the axis. With several series each has its own colour and a
+/// legend. Text is drawn in DejaVu Sans (Debian package fonts-dejavu-core), so the same inputs give the same bytes on
+/// any machine with that font.
 /// </summary>
-internal static class ForestPlotPicture
+internal static class ForestPlotPainter
 {
     public const string FontName = "DejaVu Sans";
-    public const string FileName = "forest";
     private const int Width = 1600;
     private const int RowHeight = 46;
     private const float FontSize = 22;
@@ -29,14 +26,13 @@ internal static class ForestPlotPicture
             ? null
             : $"the forest plot font {FontName} is not installed (Debian package fonts-dejavu-core); another font was used, so the plot's bytes depend on this machine.";
 
-    public static TableFigure Draw(ForestPlot forest)
+    public static PaintedFigure Paint(ForestFigure forest)
     {
-        var measure = forest.Measure;
-        double X(double value) => measure.IsRatio ? Math.Log10(value) : value * measure.Scale;
+        double X(double value) => forest.LogScale ? Math.Log10(value) : value;
         var plot = new Plot();
-        var arms = forest.ActiveArms.Count;
-        var estimable = forest.Rows.Where(r => r.Effects is not null).SelectMany(r => r.Effects!).Where(e => e.IsEstimable).ToList();
-        var noEffect = measure.IsRatio ? 0 : measure.NoEffect;
+        var arms = forest.Series.Count;
+        var estimable = forest.Rows.Where(r => r.Intervals is not null).SelectMany(r => r.Intervals!).Where(e => e.IsEstimable).ToList();
+        var noEffect = forest.LogScale ? 0 : forest.NoEffect;
         double low = estimable.Select(e => X(e.Lower)).Append(noEffect).Min();
         double high = estimable.Select(e => X(e.Upper)).Append(noEffect).Max();
         if (high - low < 1e-9)
@@ -51,7 +47,7 @@ internal static class ForestPlotPicture
         {
             var row = forest.Rows[i];
             double y = -i;
-            if (row.Effects is null)
+            if (row.Intervals is null)
             {
                 var heading = plot.Add.Text(row.Label, low, y);
                 heading.LabelFontName = FontName;
@@ -64,12 +60,12 @@ internal static class ForestPlotPicture
             ticks.AddMajor(y, row.Label);
             for (var j = 0; j < arms; j++)
             {
-                var effect = row.Effects[j];
+                var effect = row.Intervals[j];
                 var offset = arms == 1 ? 0 : 0.5 * (j - (arms - 1) / 2.0) / arms * 1.2;
                 var color = ArmColors[j % ArmColors.Length];
                 if (!effect.IsEstimable)
                 {
-                    var ne = plot.Add.Text("NE", noEffect, y - offset);
+                    var ne = plot.Add.Text(forest.NotEstimable, noEffect, y - offset);
                     ne.LabelFontSize = FontSize * 0.8f;
                     ne.LabelFontColor = color;
                     ne.LabelAlignment = Alignment.MiddleLeft;
@@ -79,12 +75,12 @@ internal static class ForestPlotPicture
                 var line = plot.Add.Line(X(effect.Lower), y - offset, X(effect.Upper), y - offset);
                 line.LineWidth = 2.5f;
                 line.Color = color;
-                var overall = i == 0;
+                var overall = row.IsSummary;
                 var marker = plot.Add.Marker(X(effect.Estimate), y - offset, overall ? MarkerShape.FilledDiamond : MarkerShape.FilledSquare,
                     overall ? 24 : 15, color);
-                if (i == 0 && arms > 1)
+                if (overall && arms > 1)
                 {
-                    marker.LegendText = $"{forest.ActiveArms[j]} vs {forest.ControlArm}";
+                    marker.LegendText = forest.Series[j];
                 }
             }
         }
@@ -93,8 +89,8 @@ internal static class ForestPlotPicture
         none.LinePattern = LinePattern.Dashed;
         none.LineWidth = 2;
         none.Color = Color.FromHex("#606060");
-        var left = plot.Add.Text($"\u2190 Favours {forest.ControlArm}", noEffect, bottom + 0.1);
-        var right = plot.Add.Text($"Favours {string.Join(" / ", forest.ActiveArms)} \u2192", noEffect, bottom + 0.1);
+        var left = plot.Add.Text(forest.FavoursLow, noEffect, bottom + 0.1);
+        var right = plot.Add.Text(forest.FavoursHigh, noEffect, bottom + 0.1);
         foreach (var (text, alignment) in new[] { (left, Alignment.LowerRight), (right, Alignment.LowerLeft) })
         {
             text.LabelFontSize = FontSize * 0.9f;
@@ -110,14 +106,12 @@ internal static class ForestPlotPicture
         plot.Axes.Bottom.Label.FontName = FontName;
         plot.Axes.Left.TickLabelStyle.FontSize = FontSize;
         plot.Axes.Bottom.TickLabelStyle.FontSize = FontSize * 0.9f;
-        plot.Axes.Bottom.TickGenerator = measure.IsRatio
+        plot.Axes.Bottom.TickGenerator = forest.LogScale
             ? RatioTicks(low, high)
             : new ScottPlot.TickGenerators.NumericAutomatic { MinimumTickSpacing = 90, MinorTickGenerator = new ScottPlot.TickGenerators.EvenlySpacedMinorTickGenerator(1) };
-        plot.Axes.Bottom.Label.Text = measure.IsRatio
-            ? $"{measure.Label} ({forest.LevelText} CI), log scale"
-            : $"Difference in proportions of responders, percentage points ({forest.LevelText} CI)";
+        plot.Axes.Bottom.Label.Text = forest.AxisLabel;
         plot.Axes.Bottom.Label.FontSize = FontSize;
-        plot.Title($"Table {forest.TableId}: {(measure.IsRatio ? measure.Label.ToLowerInvariant() + " of response" : "difference in proportions of responders")} by subgroup", FontSize * 1.1f);
+        plot.Title(forest.Title, FontSize * 1.1f);
         plot.Axes.Title.Label.FontName = FontName;
         plot.Axes.SetLimits(low, high, bottom - 0.2, 0.7);
         plot.Grid.XAxisStyle.MajorLineStyle.Color = Color.FromHex("#E4E4E4");
@@ -130,7 +124,7 @@ internal static class ForestPlotPicture
         }
         var height = 220 + RowHeight * (forest.Rows.Count + 1) + (arms > 1 ? 60 : 0);
         var png = plot.GetImageBytes(Width, height, ImageFormat.Png);
-        return new TableFigure(FileName, AltText(forest), png, Width, height);
+        return new PaintedFigure(png, Width, height);
     }
 
     /// <summary>Ticks at 1-2-5 steps of the ratio, placed on the log10 axis, labelled with the ratio itself.</summary>
@@ -155,14 +149,5 @@ internal static class ForestPlotPicture
             ticks.AddMajor(Math.Log10(c), c.ToString("0.####", CultureInfo.InvariantCulture));
         }
         return ticks;
-    }
-
-    private static string AltText(ForestPlot forest)
-    {
-        var headings = forest.Rows.Where(r => r.Effects is null).Select(r => r.Label).ToList();
-        return $"Forest plot for Table {forest.TableId}: {forest.Measure.Label.Replace(", %", " in percentage points", StringComparison.Ordinal).ToLowerInvariant()} " +
-               $"with {forest.LevelText} confidence intervals of {string.Join(" and ", forest.ActiveArms)} against {forest.ControlArm}, " +
-               $"overall and by {string.Join(", ", headings)}; the line of no effect is at {forest.Measure.NoEffect.ToString(CultureInfo.InvariantCulture)}. " +
-               $"The numbers are those of Table {forest.TableId}.";
     }
 }
