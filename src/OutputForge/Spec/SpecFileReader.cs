@@ -18,6 +18,7 @@ internal static class SpecFileReader
         TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver(),
         ReadCommentHandling = JsonCommentHandling.Skip,
         AllowTrailingCommas = true,
+        Converters = { new ChoiceJsonConverterFactory() },
     };
 
     public static T Read<T>(string file, string schemaName, Action<T, SpecSource> attach)

@@ -59,7 +59,7 @@ public static class LevelOrder
                 .ThenBy(v => v, StringComparer.Ordinal)
                 .Select(v => (v, v)).ToList();
         }
-        if (request.Order == "frequency")
+        if (request.Order == LevelSorting.Frequency)
         {
             var counts = rows.Select(variable.GetText).OfType<string>().GroupBy(v => v, StringComparer.Ordinal)
                 .ToDictionary(g => g.Key, g => g.Count(), StringComparer.Ordinal);

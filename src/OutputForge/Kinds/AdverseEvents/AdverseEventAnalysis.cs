@@ -38,7 +38,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         var records = AdverseEventRecords.Read(study, table, data, selection, warnings);
         var columns = SummaryColumns.For(selection, study, settings.Total);
         var control = selection.Control;
-        var active = settings.Test == "fisher" ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
+        var active = settings.Test == SummaryTest.Fisher ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
         var resultColumns = SummaryColumns.ToResultColumns(columns);
         resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value [a]", null)));
         var context = new RowContext(settings, columns, selection, active, control,
@@ -105,10 +105,10 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
     }
 
     private static IEnumerable<T> Sorted<T>(IEnumerable<T> items, Func<T, string> name, Func<T, List<AdverseEventRecord>> records,
-        string by, IReadOnlySet<TreatmentArm> arms)
+        LevelSorting by, IReadOnlySet<TreatmentArm> arms)
     {
         var byName = StringComparer.OrdinalIgnoreCase;
-        return by == "frequency"
+        return by == LevelSorting.Frequency
             ? items.OrderByDescending(i => records(i).Where(r => arms.Contains(r.Arm)).Select(r => r.Subject).Distinct(StringComparer.Ordinal).Count())
                 .ThenBy(name, byName).ThenBy(name, StringComparer.Ordinal)
             : items.OrderBy(name, byName).ThenBy(name, StringComparer.Ordinal);
@@ -169,7 +169,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             notes.Add(string.Create(CultureInfo.InvariantCulture,
                 $"Preferred terms reported by at least {threshold.Percent:0.###}% of subjects in {where}; a system organ class row counts all of its events, including terms not shown."));
         }
-        notes.Add(settings.Sort.By == "frequency"
+        notes.Add(settings.Sort.By == LevelSorting.Frequency
             ? $"Sorted by decreasing number of subjects in {(settings.Sort.Column == ResultKeys.Total ? "all arms combined" : settings.Sort.Column)}, then alphabetically."
             : "Sorted alphabetically.");
         return notes;
