@@ -186,6 +186,9 @@ public static class MethodCatalog
 
     public static readonly IReadOnlyList<NumberRange> Ranges = [ConfidenceLevel, PValueFloor];
 
+    /// <summary>Spec keys renamed for a name of our own: "geomean" (one program's function name) is "geometricMean".</summary>
+    public static readonly IReadOnlyList<RetiredName> RetiredKeys = [new("geomean", "geometricMean")];
+
     /// <summary>The full set of each enum type, for reading spec values: a subset shares its type with the set it was cut from.</summary>
     private static readonly Dictionary<Type, IOptionSet> ByType = All
         .GroupBy(s => s.ValueType).ToDictionary(g => g.Key, g => g.First());
