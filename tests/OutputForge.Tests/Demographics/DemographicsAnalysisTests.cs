@@ -117,7 +117,7 @@ public sealed class DemographicsAnalysisTests
         // R 4.2.2: exp(mean(log(c(30, 41, 52)))) = 39.99166493, exp(mean(log(c(35, 46, 57, 68)))) = 49.9807088384;
         // 100 * sd / mean = 26.8292682927 and 27.5746387109. Decimals: geometric mean as the mean (1 for integer data),
         // CV% one (common practice).
-        Assert.Equal(39.99166493, SummaryStudy.Value(result, "AGE/geometric-mean", "placebo", "geometric-mean")!.Value, 8);
+        Assert.Equal(39.99166493, SummaryStudy.Value(result, "AGE/geometric-mean", "placebo", "geometricMean")!.Value, 8);
         Assert.Equal(27.5746387109, SummaryStudy.Value(result, "AGE/cv", "active", "cv")!.Value, 9);
         Assert.Equal("40.0", SummaryStudy.Displayed(result, "AGE/geometric-mean", "placebo"));
         Assert.Equal("50.0", SummaryStudy.Displayed(result, "AGE/geometric-mean", "active"));
