@@ -121,7 +121,7 @@ public static class CalcCommand
         };
         var scores = new Option<string?>("--scores")
         {
-            Description = "Scores for the generalized statistics: \"row scores/column scores\", e.g. \"1,2,3/0,1\" (default: table scores 1, 2, ...).",
+            Description = "Scores for the generalized statistics: \"row scores/column scores\", e.g. \"1,2,3/0,1\" (default: 1, 2, ... in the order given).",
         };
         var level = Level();
         var json = Json();

@@ -60,7 +60,7 @@ public static class MethodCatalog
         new("chi-square", Choices.SummaryTest.ChiSquare, "Pearson's chi-square test"),
         new("likelihood-ratio", Choices.SummaryTest.LikelihoodRatio, "the likelihood-ratio chi-square test"),
         new("fisher", Choices.SummaryTest.Fisher, "Fisher's exact test"),
-    ], Choices.SummaryTest.None, [new("pearson", "chi-square")]);
+    ], Choices.SummaryTest.None);
 
     public static readonly OptionSet<SummaryTest> ContinuousTest = SummaryTest.Subset("continuous-test", "Test of a continuous demographics variable",
         Choices.SummaryTest.None, Choices.SummaryTest.None, Choices.SummaryTest.Anova);
