@@ -18,7 +18,7 @@ internal static class SpecFileReader
         TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver(),
         ReadCommentHandling = JsonCommentHandling.Skip,
         AllowTrailingCommas = true,
-        Converters = { new ChoiceJsonConverterFactory() },
+        Converters = { new ChoiceJsonConverterFactory(), new ArmChoiceJsonConverter() },
     };
 
     /// <summary>The largest spec file read: specs are a few kilobytes; 16 MB is far beyond any real one.</summary>

@@ -54,7 +54,7 @@ public sealed class AdverseEventSortSpec
     public LevelSorting By { get; init; } = MethodCatalog.LevelSorting.DefaultValue;
 
     /// <summary>The arm (its value in the data) or "total" whose count orders the rows.</summary>
-    public string Column { get; init; } = "total";
+    public ArmChoice Column { get; init; } = ArmChoice.Total;
 }
 
 public sealed class AdverseEventThresholdSpec
@@ -63,7 +63,7 @@ public sealed class AdverseEventThresholdSpec
     public required double Percent { get; init; }
 
     /// <summary>...in "any-arm", in the "total", or in the arm with this value.</summary>
-    public string In { get; init; } = "any-arm";
+    public ArmChoice In { get; init; } = ArmChoice.AnyArm;
 }
 
 public sealed class AdverseEventSeveritySpec
