@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>
 /// The interval of the odds ratio rows, as the spec's "oddsRatioInterval" names it. Each method states

@@ -1,6 +1,6 @@
 using System.Text;
 
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>
 /// The section of docs/methods.md that lists every name of <see cref="MethodCatalog"/>: written from the catalogue, so
@@ -8,7 +8,7 @@ namespace OutputForge.Analysis.Choices;
 /// </summary>
 public static class MethodCatalogPage
 {
-    public const string Start = "<!-- method catalogue: generated from src/OutputForge/Analysis/MethodCatalog.cs; a test keeps it equal -->";
+    public const string Start = "<!-- method catalogue: generated from src/OutputForge/Choices/MethodCatalog.cs; a test keeps it equal -->";
     public const string End = "<!-- end of method catalogue -->";
 
     public static string Text()

@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>The order of the levels of a categorical variable, or of adverse event rows, where the spec lists none.</summary>
 public enum LevelSorting

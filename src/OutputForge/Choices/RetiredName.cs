@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>
 /// A name an option no longer accepts, with the name that replaced it, so that a spec or command line still using it

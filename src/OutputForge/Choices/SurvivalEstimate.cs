@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>What a time-to-event table prints at the chosen times.</summary>
 public enum SurvivalEstimate

@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>
 /// Which arms a count is taken over where a spec names "any-arm", "total" or one arm by its value in the data (the

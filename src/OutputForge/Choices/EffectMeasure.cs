@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>The treatment effect of each subgroup level.</summary>
 public enum EffectMeasure

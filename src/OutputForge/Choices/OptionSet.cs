@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>
 /// The choices of one option (an interval method, a test, a sort order ...): names and typed values defined once, in

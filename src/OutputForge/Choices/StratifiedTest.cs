@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>The Cochran-Mantel-Haenszel test of a stratified responder analysis.</summary>
 public enum StratifiedTest

@@ -1,8 +1,8 @@
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 using OutputForge.Stats;
 using QuantileDefinition = MathNet.Numerics.Statistics.QuantileDefinition;
 
-namespace OutputForge.Analysis;
+namespace OutputForge.Choices;
 
 /// <summary>
 /// The one catalogue of the names of every method, test, interval, sort and display choice of a spec, with the typed

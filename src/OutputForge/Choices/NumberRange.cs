@@ -1,6 +1,6 @@
 using System.Globalization;
 
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>
 /// The accepted values of a numeric option and its default, defined once in <see cref="MethodCatalog"/> for the schema

@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>The test of each active arm against the control on a responder table (the spec's statistics.test, `calc table --test`).</summary>
 public enum TableTest

@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>A ratio row of a responder table, each active arm against the control.</summary>
 public enum RatioMeasure

@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>The names of one option's choices, whatever their type: what the schema, the docs and the checks need.</summary>
 public interface IOptionSet

@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>Which arms one test of a categorical-by-visit table compares.</summary>
 public enum ArmComparison

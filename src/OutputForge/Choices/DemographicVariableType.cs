@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>Whether a demographics variable is summarized by descriptive statistics or by n (%) per level.</summary>
 public enum DemographicVariableType

@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>How a zero count of an n (%) cell is shown.</summary>
 public enum ZeroDisplay

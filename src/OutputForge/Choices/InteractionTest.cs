@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>The treatment-by-subgroup interaction test.</summary>
 public enum InteractionTest

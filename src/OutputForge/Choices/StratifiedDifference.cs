@@ -1,4 +1,4 @@
-namespace OutputForge.Analysis.Choices;
+namespace OutputForge.Choices;
 
 /// <summary>The common risk difference of a stratified responder analysis.</summary>
 public enum StratifiedDifference
