@@ -1,6 +1,5 @@
 using System.Text.Json;
 using System.Text.Json.Serialization;
-using OutputForge.Analysis;
 using OutputForge.Choices;
 
 namespace OutputForge.Spec;

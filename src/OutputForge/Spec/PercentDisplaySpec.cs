@@ -1,4 +1,3 @@
-using OutputForge.Analysis;
 using OutputForge.Choices;
 namespace OutputForge.Spec;
 

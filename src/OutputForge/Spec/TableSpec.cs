@@ -1,4 +1,3 @@
-using OutputForge.Analysis;
 using OutputForge.Choices;
 using System.Text.Json.Nodes;
 using System.Text.Json.Serialization;

@@ -1,5 +1,7 @@
 using System.Reflection;
+using System.Text.RegularExpressions;
 using OutputForge.Pipeline;
+using OutputForge.Tests.Support;
 
 namespace OutputForge.Tests.Architecture;
 
@@ -74,6 +76,38 @@ public class StageEdgesTests
             .Order(StringComparer.Ordinal)
             .ToList();
         Assert.True(uses.Count == 0, "drawing or document library used outside Rendering:\n" + string.Join("\n", uses));
+    }
+
+    [Fact]
+    public void Every_source_file_names_only_the_stages_its_stage_may_use()
+    {
+        // The compiled code does not show a constant's owner (the compiler copies its value), so the source is read too:
+        // a using directive or a fully qualified name of a stage this folder may not use is a crossing as well.
+        var core = Path.Combine(RepositoryRoot.Path, "src", "OutputForge");
+        var named = new Regex(@"\bOutputForge\.(?<stage>[A-Z]\w*)\b");
+        var crossings = new List<string>();
+        foreach (var file in Directory.EnumerateFiles(core, "*.cs", SearchOption.AllDirectories))
+        {
+            var relative = Path.GetRelativePath(core, file).Replace('\\', '/');
+            var stage = relative.Split('/')[0];
+            if (!Allowed.TryGetValue(stage, out var allowed) || relative.Contains("/obj/") || relative.StartsWith("obj/") || relative.StartsWith("bin/"))
+            {
+                continue;
+            }
+            var lines = File.ReadAllLines(file);
+            for (var i = 0; i < lines.Length; i++)
+            {
+                foreach (Match match in named.Matches(lines[i]))
+                {
+                    var to = match.Groups["stage"].Value;
+                    if (to != stage && Allowed.ContainsKey(to) && !allowed.Contains(to) && !KeptCrossings.Any(k => k.From == stage && k.Used.Namespace == "OutputForge." + to))
+                    {
+                        crossings.Add($"{relative}:{i + 1}: {stage} names {to}: {lines[i].Trim()}");
+                    }
+                }
+            }
+        }
+        Assert.True(crossings.Count == 0, "stage edges crossed in source:\n" + string.Join("\n", crossings));
     }
 
     [Fact]
