@@ -173,7 +173,7 @@ public sealed class CsvFileParts
             warn(CsvDatasetReader.ReplacedWarning(_path, replaced));
         }
         var columns = new DataColumn[_header.Length];
-        Parallel.For(0, _header.Length, c => columns[c] = ColumnBuilder.Join(_columns.Select(part => part[c]).ToList()));
+        Parallel.For(0, _header.Length, c => columns[c] = ColumnBuilder.Join(_columns.Select(part => part[c]).ToList(), _path));
         var rows = _read.Sum(r => r.Rows);
         ColumnBuilder.MoveTogether(_columns.Select(part => part[0]).ToList(), _lines);
         return new Dataset(_name, _path, rows, columns, new ArraySegment<int>(_lines, 0, rows));

@@ -150,7 +150,7 @@ public static class BadInputCases
         yield return A("header only", AdslHeader, "ADSL has a header but no subjects");
         yield return A("duplicate column names", "STUDYID,USUBJID,TRT01P,TRT01PN,ITTFL,ITTFL\nT1,T1-001,Placebo,0,Y,Y\n", "line 1", "variable ITTFL", "appears twice");
         yield return A("empty column name", "STUDYID,,TRT01P\nT1,x,y\n", "line 1", "column 2 of the header has no variable name");
-        yield return new BadInputCase("text in a numeric variable", ["t1.json", "$.subset", "AGE holds text ('abc' on line 3 is not a number)"])
+        yield return new BadInputCase("text in a numeric variable", ["t1.json", "$.subset", "AGE holds text ('abc' on line 3 of adsl.csv is not a number)"])
         {
             Table = [("\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"AGE >= 18\",")],
             Adsl = Utf8(Adsl.Replace("T1,T1-002,Placebo,0,Y,51", "T1,T1-002,Placebo,0,Y,abc")),
