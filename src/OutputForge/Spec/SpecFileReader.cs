@@ -30,6 +30,11 @@ internal static class SpecFileReader
         {
             throw new SpecException(new SpecProblem(file, null, null, "$", $"cannot read the spec file ({e.Message})"));
         }
+        if (bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]))
+        {
+            // A UTF-8 byte-order mark, as some editors write: accepted, as in the data files.
+            bytes = bytes[3..];
+        }
         JsonDocument document;
         try
         {
@@ -48,11 +53,19 @@ internal static class SpecFileReader
                 message = message[..cut];
             }
             throw new SpecException(new SpecProblem(file, (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1,
-                e.Path ?? "$", $"invalid JSON: {message.TrimEnd('.')}"));
+                JsonPositionMap.FailurePath(bytes), $"invalid JSON: {Describe(bytes, message.TrimEnd('.'))}"));
         }
         using (document)
         {
-            var source = new SpecSource(file, JsonPositionMap.Build(bytes));
+            var positions = JsonPositionMap.Build(bytes);
+            if (positions.DuplicateKeys.Count > 0)
+            {
+                // The readers keep the last of two equal keys without a word: a spec saying two things is refused.
+                throw new SpecException(positions.DuplicateKeys.Select(d => new SpecProblem(file, d.Line, d.Column,
+                    JsonPositionMap.ToJsonPath(d.Pointer),
+                    $"the key '{LastSegment(d.Pointer)}' is given twice in this object (first on line {d.FirstLine}); keep one")).ToList());
+            }
+            var source = new SpecSource(file, positions);
             var problems = Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
@@ -63,6 +76,23 @@ internal static class SpecFileReader
             attach(model, source);
             return model;
         }
+    }
+
+    private static string LastSegment(string pointer) =>
+        pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
+
+    /// <summary>The parser's description of a syntax error, in the spec writer's terms where it is cryptic.</summary>
+    private static string Describe(byte[] bytes, string message)
+    {
+        if (message.Contains("maximum configured depth", StringComparison.OrdinalIgnoreCase))
+        {
+            return "the objects and arrays are nested more than 64 levels deep";
+        }
+        if (bytes.Length >= 2 && ((bytes[0] == 0xFF && bytes[1] == 0xFE) || (bytes[0] == 0xFE && bytes[1] == 0xFF)))
+        {
+            return "the file is UTF-16 encoded (it starts with a UTF-16 byte-order mark); save it as UTF-8";
+        }
+        return message;
     }
 
     private static List<SpecProblem> Validate(JsonElement root, string schemaName, SpecSource source)
