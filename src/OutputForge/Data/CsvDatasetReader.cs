@@ -114,7 +114,28 @@ public static class CsvDatasetReader
             {
                 warn(ReplacedWarning(path, replaced));
             }
-            return new Dataset(name, path, rows, columns.Select(c => c.Build(path)).ToList(), new ArraySegment<int>(lines, 0, rows));
+            var built = new List<DataColumn>(columns.Length);
+            DataException? first = null;
+            foreach (var column in columns)
+            {
+                try
+                {
+                    built.Add(column.Build(path));
+                }
+                catch (DataException e) when (first is null || e.Line < first.Line)
+                {
+                    // An unusable number: the one on the earliest line (then the leftmost column) is reported.
+                    first = e;
+                }
+                catch (DataException)
+                {
+                }
+            }
+            if (first is not null)
+            {
+                throw first;
+            }
+            return new Dataset(name, path, rows, built, new ArraySegment<int>(lines, 0, rows));
         }
         catch (CsvFormatException e)
         {
