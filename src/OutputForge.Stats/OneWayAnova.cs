@@ -54,11 +54,6 @@ public static class OneWayAnova
         {
             return AnovaResult.NotEstimable("every group is constant, so the within-group mean square is zero") with { Notes = notes };
         }
-        if (DegenerateVariance.Holds(within, used.Sum(g => g.Sum(v => v * v)), total))
-        {
-            // Constant groups whose sums were not exact: a within-group sum of squares of rounding noise only.
-            return AnovaResult.NotEstimable("every group is constant up to rounding, so the within-group mean square is zero") with { Notes = notes };
-        }
         double f = msBetween / msWithin;
         // Upper tail of F(d1, d2) as the regularized incomplete beta I_x(d2/2, d1/2), x = d2 / (d2 + d1 F),
         // which keeps small p-values accurate (Abramowitz and Stegun 26.6.2).
