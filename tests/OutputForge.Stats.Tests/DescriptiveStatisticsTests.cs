@@ -1,5 +1,5 @@
 using System.Text.Json;
-using MathNet.Numerics.Statistics;
+using QuantileDefinition = MathNet.Numerics.Statistics.QuantileDefinition;
 
 namespace OutputForge.Stats.Tests;
 

@@ -8,8 +8,9 @@ namespace OutputForge.Stats.Tests;
 /// paper's as transcribed, row for row, in the mergeron_extra test suite ("Examples from Newcombe
 /// (1998), Table II"); several of them are quoted identically by other public test suites (for
 /// example (a), (b), (d), (e) of method 10, and (d) of method 6 in petelaud/ratesci test3.R).
-/// The Wald and corrected Wald columns for (a), (b) and (g) are the SAS reference values of the
-/// WUSS 2016 paper 127 (page 9) as transcribed in a public R test suite, which agree with Table II;
+/// The Wald and corrected Wald columns for (a), (b) and (g) are the reference values of a 2016
+/// conference paper on difference intervals (paper 127, page 9) as transcribed in a public R test
+/// suite, which agree with Table II;
 /// the other Wald rows are recalled from memory (they are closed-form and are also checked against
 /// statsmodels in ProportionDifferenceLibraryTests). Limits the paper prints beyond [-1, 1] are
 /// truncated here, by design.
@@ -51,21 +52,21 @@ public class ProportionDifferencePublishedTests
         => AssertInterval(DifferenceCiMethod.MiettinenNurminen, x1, n1, x2, n2, lower, upper, 0.5e-8 + 1e-10);
 
     [Theory]
-    [InlineData(56, 70, 48, 80, 0.0575, 0.3425)]   // (a), WUSS 2016 / Table II
-    [InlineData(9, 10, 3, 10, 0.2605, 0.9395)]     // (b), WUSS 2016 / Table II
+    [InlineData(56, 70, 48, 80, 0.0575, 0.3425)]   // (a), 2016 paper / Table II
+    [InlineData(9, 10, 3, 10, 0.2605, 0.9395)]     // (b), 2016 paper / Table II
     [InlineData(6, 7, 2, 7, 0.1481, 0.9947)]       // (c), recalled from memory
     [InlineData(5, 56, 0, 29, 0.0146, 0.1640)]     // (d), recalled from memory
     [InlineData(0, 10, 0, 20, 0.0000, 0.0000)]     // (e), zero width in the paper
     [InlineData(0, 10, 0, 10, 0.0000, 0.0000)]     // (f), zero width in the paper
-    [InlineData(10, 10, 0, 20, 1.0000, 1.0000)]    // (g), WUSS 2016 / Table II
+    [InlineData(10, 10, 0, 20, 1.0000, 1.0000)]    // (g), 2016 paper / Table II
     [InlineData(10, 10, 0, 10, 1.0000, 1.0000)]    // (h), zero width in the paper
     public void WaldMatchesNewcombeTableII(int x1, int n1, int x2, int n2, double lower, double upper)
         => AssertInterval(DifferenceCiMethod.Wald, x1, n1, x2, n2, lower, upper, FourDecimals);
 
     [Theory]
-    [InlineData(56, 70, 48, 80, 0.0441, 0.3559)]   // (a), WUSS 2016 / Table II
-    [InlineData(9, 10, 3, 10, 0.1605, 1.0000)]     // (b), WUSS 2016; Table II prints an upper limit above 1
-    [InlineData(10, 10, 0, 20, 0.9250, 1.0000)]    // (g), WUSS 2016; Table II prints an upper limit above 1
+    [InlineData(56, 70, 48, 80, 0.0441, 0.3559)]   // (a), 2016 paper / Table II
+    [InlineData(9, 10, 3, 10, 0.1605, 1.0000)]     // (b), 2016 paper; Table II prints an upper limit above 1
+    [InlineData(10, 10, 0, 20, 0.9250, 1.0000)]    // (g), 2016 paper; Table II prints an upper limit above 1
     [InlineData(5, 56, 0, 29, -0.0116, 0.1901)]    // (d), recalled from memory
     [InlineData(0, 10, 0, 20, -0.0750, 0.0750)]    // (e), recalled from memory
     [InlineData(0, 10, 0, 10, -0.1000, 0.1000)]    // (f), recalled from memory
@@ -73,14 +74,14 @@ public class ProportionDifferencePublishedTests
         => AssertInterval(DifferenceCiMethod.WaldCorrected, x1, n1, x2, n2, lower, upper, FourDecimals);
 
     [Theory]
-    // WUSS 2016 paper 127 (page 9), SAS reference values for an HIV trial, 84/101 vs 89/105,
-    // as transcribed in a public R test suite.
+    // The 2016 conference paper's reference values (paper 127, page 9) for an HIV trial, 84/101 vs
+    // 89/105, as transcribed in a public R test suite.
     [InlineData(DifferenceCiMethod.Wald, -0.1162, 0.0843)]
     [InlineData(DifferenceCiMethod.WaldCorrected, -0.1259, 0.0940)]
     [InlineData(DifferenceCiMethod.MiettinenNurminen, -0.1191, 0.0860)]
     [InlineData(DifferenceCiMethod.Newcombe, -0.1177, 0.0851)]
     [InlineData(DifferenceCiMethod.AgrestiCaffo, -0.1168, 0.0850)]
-    public void MatchesSasReferenceForHivTrialExample(DifferenceCiMethod method, double lower, double upper)
+    public void MatchesPublishedHivTrialExample(DifferenceCiMethod method, double lower, double upper)
         => AssertInterval(method, 84, 101, 89, 105, lower, upper, FourDecimals);
 
     [Fact]

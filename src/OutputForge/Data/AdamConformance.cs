@@ -41,7 +41,7 @@ public static class AdamConformance
             var id = subjects.GetText(row);
             if (id is null)
             {
-                yield return new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable, "USUBJID is missing");
+                yield return new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable, "USUBJID is empty");
             }
             else if (!firstLine.TryAdd(id, adsl.LineOfRow[row]))
             {
@@ -82,7 +82,7 @@ public static class AdamConformance
             var id = subjects.GetText(row);
             if (id is null)
             {
-                yield return new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable, "USUBJID is missing");
+                yield return new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable, "USUBJID is empty");
             }
             else if (!known.Contains(id))
             {

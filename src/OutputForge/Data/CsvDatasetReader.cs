@@ -12,8 +12,9 @@ namespace OutputForge.Data;
 public static class CsvDatasetReader
 {
     /// <summary>
-    /// The longest value read, in characters. ADaM text variables hold at most 200 characters (SAS
-    /// transport version 5); a field far beyond that is a broken file (e.g. a lost closing quote).
+    /// The longest value read, in characters. ADaM text variables hold at most 200 characters (the
+    /// version 5 transport files of regulatory submissions; common practice); a field far beyond that
+    /// is a broken file (e.g. a lost closing quote).
     /// </summary>
     public const int MaxFieldLength = 1 << 20;
 

@@ -7,7 +7,7 @@ namespace OutputForge.Expressions;
 /// A condition bound to one set of variables and compiled to a row predicate.
 /// Rule for missing values: a comparison or list test on a missing value is false (whatever the
 /// operator), so <c>AESER != 'Y'</c> does not select records with AESER missing; use
-/// <c>is missing</c> / <c>is not missing</c> to test for them.
+/// <c>is null</c> / <c>is not null</c> to test for them.
 /// </summary>
 public sealed class Condition
 {

@@ -13,7 +13,7 @@ internal static class ConditionLexer
         ["not"] = TokenKind.Not,
         ["in"] = TokenKind.In,
         ["is"] = TokenKind.Is,
-        ["missing"] = TokenKind.Missing,
+        ["null"] = TokenKind.Null,
     };
 
     public static List<Token> Tokenize(string text)

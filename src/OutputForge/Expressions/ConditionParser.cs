@@ -8,11 +8,13 @@ namespace OutputForge.Expressions;
 /// single     := "not" single | "(" condition ")" | test
 /// test       := VARIABLE compare literal
 ///             | VARIABLE ["not"] "in" "(" literal ("," literal)* ")"
-///             | VARIABLE "is" ["not"] "missing"
+///             | VARIABLE "is" ["not"] "null"
 /// compare    := "=" | "!=" | "&lt;&gt;" | "&lt;" | "&lt;=" | "&gt;" | "&gt;="
 /// literal    := 'text' | "text" | number
 /// </code>
-/// "and" binds tighter than "or"; keywords are case-insensitive.
+/// "and" binds tighter than "or"; keywords are case-insensitive. The missing-value test takes ISO
+/// SQL's words (ISO/IEC 9075-2, null predicate); the earlier word "missing" in place of "null"
+/// gets an error that names the new form, so that old specs are quick to fix.
 /// </summary>
 public sealed class ConditionParser
 {
@@ -106,14 +108,15 @@ public sealed class ConditionParser
         switch (op.Kind)
         {
             case TokenKind.Is:
-                Take();
+                var written = Take().Text;
                 var negated = false;
                 if (Peek().Kind == TokenKind.Not)
                 {
-                    Take();
+                    written += " " + Take().Text;
                     negated = true;
                 }
-                Expect(TokenKind.Missing, "'missing' after 'is'");
+                RejectOldMissingTest(written, negated);
+                Expect(TokenKind.Null, negated ? "'null' after 'is not'" : "'null' or 'not null' after 'is'");
                 return new MissingTestNode(variable.Text, negated, variable.Position);
             case TokenKind.In:
                 Take();
@@ -132,11 +135,23 @@ public sealed class ConditionParser
             TokenKind.Greater => ComparisonOperator.Greater,
             TokenKind.GreaterOrEqual => ComparisonOperator.GreaterOrEqual,
             _ => throw new ConditionSyntaxException(
-                $"expected a comparison (=, !=, <, <=, >, >=), 'in', 'not in' or 'is missing' after {variable.Text} but found {Describe(op)}",
+                $"expected a comparison (=, !=, <, <=, >, >=), 'in', 'not in' or 'is null' after {variable.Text} but found {Describe(op)}",
                 op.Position),
         };
         Take();
         return new ComparisonNode(variable.Text, comparison, ParseLiteral(), variable.Position);
+    }
+
+    /// <summary>The word "missing" where "null" belongs: the test's earlier wording, answered with the one to write.</summary>
+    /// <param name="written">"is" or "is not" as the condition spells it.</param>
+    private void RejectOldMissingTest(string written, bool negated)
+    {
+        var word = Peek();
+        if (word.Kind == TokenKind.Identifier && string.Equals(word.Text, "missing", StringComparison.OrdinalIgnoreCase))
+        {
+            throw new ConditionSyntaxException(
+                $"the missing-value test is written '{(negated ? "is not null" : "is null")}', not '{written} {word.Text}'", word.Position);
+        }
     }
 
     private List<Literal> ParseList()
@@ -166,6 +181,10 @@ public sealed class ConditionParser
             case TokenKind.Identifier:
                 throw new ConditionSyntaxException(
                     $"expected a quoted text or a number but found '{token.Text}' (put text values in quotes: '{token.Text}')",
+                    token.Position);
+            case TokenKind.Null:
+                throw new ConditionSyntaxException(
+                    $"expected a quoted text or a number but found '{token.Text}' (a comparison with a missing value is false; test for one with 'is null' or 'is not null')",
                     token.Position);
             default:
                 throw new ConditionSyntaxException($"expected a quoted text or a number but found {Describe(token)}", token.Position);

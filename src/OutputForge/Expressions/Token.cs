@@ -19,7 +19,7 @@ internal enum TokenKind
     Not,
     In,
     Is,
-    Missing,
+    Null,
     End,
 }
 

@@ -14,7 +14,7 @@ public sealed class DemographicsTableSpec
 
     public PercentDisplaySpec Percent { get; init; } = new();
 
-    /// <summary>"hyndman-fan-2" (SAS's default) or "hyndman-fan-7" (R's default).</summary>
+    /// <summary>"hyndman-fan-2" (Hyndman and Fan 1996 definition 2) or "hyndman-fan-7" (definition 7, R's default).</summary>
     public string Quartiles { get; init; } = "hyndman-fan-2";
 
     /// <summary>Default decimals of each statistic for every continuous variable (overriding the data-precision rule).</summary>

@@ -54,7 +54,7 @@ public sealed class TemplateSet : ITemplateLoader
         foreach (var name in TemplateNames.All)
         {
             if (!set._sources.ContainsKey(name))
-                throw new TemplateException($"{TemplateNames.Folder}/{name}: the built-in template is missing");
+                throw new TemplateException($"{TemplateNames.Folder}/{name}: the built-in template is absent");
         }
         foreach (var name in set._sources.Keys.Order(StringComparer.Ordinal))
             set._parsed[name] = set.Parse(name);

@@ -5,7 +5,7 @@ Run from the repository root:
     python3 tests/OutputForge.Stats.Tests/Oracles/generate_descriptive_oracles.py
 It writes tests/OutputForge.Stats.Tests/Oracles/descriptive_oracles.json with, for invented data sets,
 numpy mean, std (ddof = 1), median, min, max, quartiles by numpy.quantile with
-method "averaged_inverted_cdf" (Hyndman and Fan definition 2, SAS QNTLDEF = 5) and "linear"
+method "averaged_inverted_cdf" (Hyndman and Fan definition 2) and "linear"
 (definition 7, R's default), scipy.stats.gmean (positive data only) and 100 * SD / mean,
 and the library versions.
 """

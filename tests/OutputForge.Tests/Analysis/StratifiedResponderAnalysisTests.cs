@@ -96,8 +96,8 @@ public sealed class StratifiedResponderAnalysisTests
     {
         using var study = new MiniStudy(table: Table(Settings.Replace("\"homogeneity\": true", "\"difference\": \"miettinen-nurminen\"")), adsl: Adsl, adeff: Adeff);
         var result = Analyze(study);
-        Assert.Equal(Stats.StratifiedMiettinenNurminen.MethodName, Value(result, "stratified-difference-ci", "lower").Method);
-        var interval = Stats.StratifiedMiettinenNurminen.Compute([new(2, 2, 1, 2), new(1, 1, 0, 1)]);
+        Assert.Equal(Stats.Stratified.StratifiedMiettinenNurminen.MethodName, Value(result, "stratified-difference-ci", "lower").Method);
+        var interval = Stats.Stratified.StratifiedMiettinenNurminen.Compute([new(2, 2, 1, 2), new(1, 1, 0, 1)]);
         Assert.Equal(100 * interval.Lower, Value(result, "stratified-difference-ci", "lower").Value!.Value, 12);
         Assert.DoesNotContain(result.Rows, r => r.Key == "homogeneity-p-value");
     }

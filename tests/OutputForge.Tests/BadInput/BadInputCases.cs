@@ -122,7 +122,9 @@ public static class BadInputCases
         yield return T("list without parentheses", "ANL01FL = 'Y'", "ANL01FL in 'Y'", "$.endpoint.where", "expected '(' to start the list");
         yield return T("unknown operator", "AVALC = 'Y'", "AVALC # 'Y'", "$.endpoint.response", "unexpected character '#'");
         yield return T("empty condition", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"\",", "$.subset", "the condition is empty");
-        yield return T("is without missing", "ANL01FL = 'Y'", "ANL01FL is 'Y'", "$.endpoint.where", "expected 'missing' after 'is'");
+        yield return T("is without null", "ANL01FL = 'Y'", "ANL01FL is 'Y'", "$.endpoint.where", "expected 'null' or 'not null' after 'is'");
+        yield return T("the old missing-value test", "ANL01FL = 'Y'", "ANL01FL is not missing", "$.endpoint.where",
+            "the missing-value test is written 'is not null', not 'is not missing'", "character 16", "t1.json:10:");
         yield return T("date compared without ISO format", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"AGE = 1 or STUDYID = 1\",", "$.subset", "STUDYID holds text");
 
         // meaning
@@ -162,7 +164,7 @@ public static class BadInputCases
 
         // ADaM conventions
         yield return A("no USUBJID", "STUDYID,SUBJID,TRT01P,TRT01PN,ITTFL,AGE\nT1,1,Placebo,0,Y,4\n", "ADSL has no USUBJID");
-        yield return A("empty USUBJID", AdslHeader + "T1,,Placebo,0,Y,40\n", "line 2", "USUBJID is missing");
+        yield return A("empty USUBJID", AdslHeader + "T1,,Placebo,0,Y,40\n", "line 2", "USUBJID is empty");
         yield return A("duplicate subject", Adsl + "T1,T1-001,Placebo,0,Y,40\n", "line 7", "subject T1-001 has a second ADSL row (first on line 2)");
         yield return A("flag in lower case", Adsl.Replace("T1,T1-003,Active,1,Y,38", "T1,T1-003,Active,1,y,38"), "line 4", "variable ITTFL", "flag value 'y'");
         yield return A("flag as 1", Adsl.Replace("T1,T1-003,Active,1,Y,38", "T1,T1-003,Active,1,1,38"), "line 4", "flag value '1'");

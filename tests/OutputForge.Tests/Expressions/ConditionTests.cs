@@ -39,10 +39,12 @@ public sealed class ConditionTests : IDisposable
     [InlineData("not SEX = 'F'", "S2,S4")]
     [InlineData("RACE in ('WHITE', 'ASIAN')", "S1,S2,S4")]
     [InlineData("RACE not in ('WHITE')", "S2,S3")]
-    [InlineData("AGE is missing", "S3")]
-    [InlineData("ITTFL is not missing", "S1,S2,S3")]
+    [InlineData("AGE is null", "S3")]
+    [InlineData("ITTFL is not null", "S1,S2,S3")]
+    [InlineData("AGE IS NULL", "S3")]
+    [InlineData("ITTFL Is Not Null", "S1,S2,S3")]
     [InlineData("TRTSDT >= '2026-02-01'", "S2,S4")]
-    [InlineData("(SEX = 'M' or AGE is missing) and ITTFL != 'N'", "S2")]
+    [InlineData("(SEX = 'M' or AGE is null) and ITTFL != 'N'", "S2")]
     [InlineData("sex = 'F' AND age > 30", "S1")]
     [InlineData("AGE = 40.0", "S1")]
     public void Selects_the_expected_rows(string condition, string expected)
@@ -68,7 +70,9 @@ public sealed class ConditionTests : IDisposable
     [InlineData("SEX = 'F", 7, "no closing '")]
     [InlineData("SEX == 'F'", 6, "expected a quoted text or a number")]
     [InlineData("TRTSDT > '01JAN2026'", 10, "not an ISO 8601 date")]
-    [InlineData("AGE is 5", 8, "expected 'missing'")]
+    [InlineData("AGE is 5", 8, "expected 'null' or 'not null' after 'is'")]
+    [InlineData("AGE is not 5", 12, "expected 'null' after 'is not'")]
+    [InlineData("AGE = null", 7, "test for one with 'is null' or 'is not null'")]
     [InlineData("SEX in 'F'", 8, "expected '('")]
     [InlineData("", 1, "empty")]
     [InlineData("SEX = 'F' SEX = 'M'", 11, "expected 'and', 'or'")]
@@ -80,10 +84,31 @@ public sealed class ConditionTests : IDisposable
         Assert.Contains(message, error.Message);
     }
 
+    [Theory]
+    [InlineData("AGE is missing", 8, "the missing-value test is written 'is null', not 'is missing'")]
+    [InlineData("ITTFL is not missing", 14, "the missing-value test is written 'is not null', not 'is not missing'")]
+    [InlineData("SEX = 'F' and AGE IS Missing", 22, "written 'is null', not 'IS Missing'")]
+    public void The_old_missing_value_test_names_the_form_to_write(string condition, int position, string message)
+    {
+        var error = Assert.Throws<ConditionSyntaxException>(() => Condition.Compile(condition, _data));
+        Assert.Equal(position, error.Position);
+        Assert.Contains(message, error.Message);
+    }
+
+    [Fact]
+    public void Missing_is_no_keyword_and_can_name_a_variable()
+    {
+        var path = _folder.Write("m.csv", "USUBJID,MISSING\nA,Y\nB,\n");
+        var data = CsvDatasetReader.Read("m", path);
+        Assert.True(Condition.Compile("MISSING = 'Y'", data).Matches(0));
+        Assert.True(Condition.Compile("missing is null", data).Matches(1));
+        Assert.False(Condition.Compile("missing is null", data).Matches(0));
+    }
+
     [Fact]
     public void Reports_the_variables_it_reads()
     {
-        var condition = Condition.Compile("SEX = 'F' and (AGE > 3 or AGE is missing)", _data);
+        var condition = Condition.Compile("SEX = 'F' and (AGE > 3 or AGE is null)", _data);
         Assert.Equal(["AGE", "SEX"], condition.Variables);
     }
 

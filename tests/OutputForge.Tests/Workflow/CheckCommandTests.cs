@@ -103,6 +103,19 @@ public sealed class CheckCommandTests(WorkflowDemoFixture demo) : IClassFixture<
     }
 
     [Fact]
+    public void TheOldMissingValueTestIsLocatedAndNamesTheFormToWrite()
+    {
+        var spec = MiniStudy.StudyJson.Replace("ITTFL = 'Y'", "ITTFL IS NOT MISSING");
+        using var study = new MiniStudy(study: spec);
+
+        var (code, output, _) = WorkflowDemoFixture.Run(["check", "--spec", study.StudyFile]);
+
+        Assert.Equal(2, code);
+        Assert.Contains("$.populations.itt.where: the missing-value test is written 'is not null', not 'IS NOT MISSING' (at character 14 of \"ITTFL IS NOT MISSING\")", output);
+        Assert.Contains("hint: write the missing-value test as 'VARIABLE is null' or 'VARIABLE is not null'", output);
+    }
+
+    [Fact]
     public void AMissingDataFileAndAnUnreadableOneAreBothReported()
     {
         using var study = new MiniStudy();

@@ -45,7 +45,7 @@ public sealed class PlaceholderTests
     [InlineData("ITTFL = 'Y' and AGE >= 65", true)]
     [InlineData("ITTFL = 'Y' and AGE >= 65", false)]
     [InlineData("SEX in ('F') and not (RACE = 'ASIAN') and TRTSDT >= '2025-01-01'", true)]
-    [InlineData("AESER != 'Y' or AESER is missing", false)]
+    [InlineData("AESER != 'Y' or AESER is null", false)]
     public void WitnessValuesMakeTheConditionAsWanted(string condition, bool wanted)
     {
         var values = ConditionWitness.Find(condition, wanted, new Dictionary<string, string?>());

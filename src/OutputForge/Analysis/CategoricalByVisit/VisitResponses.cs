@@ -27,7 +27,7 @@ internal sealed class VisitResponses
 
     public IReadOnlyList<string> Visits { get; }
 
-    /// <summary>The response of each subject with a record at the visit; Category is -1 when the value is missing.</summary>
+    /// <summary>The response of each subject with a record at the visit; Category is -1 for a missing value.</summary>
     public IReadOnlyDictionary<string, Response> OfVisit(string visit) => _byVisit[visit];
 
     public static VisitResponses Select(TableSpec table, StudyData data, ResponseCategories categories, List<string> warnings)

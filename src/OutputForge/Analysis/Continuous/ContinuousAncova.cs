@@ -4,7 +4,7 @@ namespace OutputForge.Analysis.Continuous;
 
 /// <summary>
 /// The ANCOVA of one visit: change from baseline = treatment + numeric covariates + factors, fitted by
-/// least squares (OutputForge.Stats.LinearModel); LS means per arm, LS mean differences (each active arm
+/// least squares (OutputForge.Stats.Models.LinearModel); LS means per arm, LS mean differences (each active arm
 /// minus control, then the spec's pairs) and, on request, the dose-response test: the same model with
 /// treatment entered as its numeric dose, testing the slope. Observations missing any model variable
 /// are left out; arms with no observation left get no LS mean. A model that cannot be fitted says why.

@@ -29,7 +29,7 @@ public static class ContinuousSummary
             warnings.Add($"{column.Name} is written with up to {dataDecimals} decimals; {StatisticDecimals.DetectionCap} are assumed (set \"dataDecimals\" to say how it was collected).");
             dataDecimals = StatisticDecimals.DetectionCap;
         }
-        // Hyndman-Fan definition 2 is SAS's default (QNTLDEF=5), definition 7 R's.
+        // Hyndman and Fan (1996) definition 2, the usual one in clinical summaries (common practice); 7 is R's.
         var quantiles = settings.Quartiles == "hyndman-fan-7" ? QuantileDefinition.R7 : QuantileDefinition.R2;
         var geometricMean = layouts.Any(l => l.Statistics.Contains(GeometricMean));
         var summaries = columns.ToDictionary(c => c.Key, c => Summarize(

@@ -13,7 +13,7 @@ public sealed record ResponderRatios(TreatmentArm Arm, IntervalResult? RelativeR
     public static ResponderRatios Unstratified(TreatmentArm arm, ResponderCounts active, ResponderCounts control,
         bool withRelativeRisk, bool withOddsRatio, OddsRatioIntervalMethod oddsRatioMethod, double level) =>
         new(arm,
-            withRelativeRisk ? Stats.RelativeRisk.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level) : null,
+            withRelativeRisk ? Stats.Proportions.RelativeRisk.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level) : null,
             withOddsRatio ? UnstratifiedOddsRatio(active, control, oddsRatioMethod, level) : null);
 
     /// <summary>
@@ -30,7 +30,7 @@ public sealed record ResponderRatios(TreatmentArm Arm, IntervalResult? RelativeR
 
     private static IntervalResult UnstratifiedOddsRatio(ResponderCounts active, ResponderCounts control, OddsRatioIntervalMethod method, double level) => method switch
     {
-        OddsRatioIntervalMethod.Woolf => Stats.OddsRatio.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level),
+        OddsRatioIntervalMethod.Woolf => Stats.Proportions.OddsRatio.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level),
         OddsRatioIntervalMethod.Exact => Displayable(ExactConditionalOddsRatio.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, level)),
         _ => throw new ArgumentOutOfRangeException(nameof(method), method, "Unknown odds ratio interval."),
     };

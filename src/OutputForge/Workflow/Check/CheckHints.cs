@@ -6,6 +6,7 @@ public static class CheckHints
     public const string Schema = "correct the value or key as the schema says (specs/schema/*.json; docs/spec-reference.md)";
     public const string Reference = "use a name defined in the study spec (populations, data.datasets) or correct its spelling";
     public const string Condition = "correct the condition (docs/conditions.md); variables must exist in the dataset it is evaluated on";
+    public const string MissingValueTest = "write the missing-value test as 'VARIABLE is null' or 'VARIABLE is not null' (docs/conditions.md)";
     public const string DataValue = "name a value that occurs in the data (values are compared exactly, including case)";
     public const string DataFile = "fix the file (UTF-8 CSV with a header row, RFC 4180 quoting) or point --data at the right folder";
     public const string SubjectLevel = "ADSL must hold one row per subject with USUBJID filled in";
@@ -18,6 +19,7 @@ public static class CheckHints
         _ when message.StartsWith("invalid JSON", StringComparison.Ordinal) => "fix the JSON syntax at the position given",
         _ when message.StartsWith("unknown population", StringComparison.Ordinal) || message.StartsWith("unknown dataset", StringComparison.Ordinal) => Reference,
         _ when message.Contains("no record of", StringComparison.Ordinal) || message.Contains("is not a value of", StringComparison.Ordinal) => DataValue,
+        _ when message.Contains("the missing-value test is written", StringComparison.Ordinal) => MissingValueTest,
         _ when message.Contains("has no variable", StringComparison.Ordinal) || message.Contains("at character", StringComparison.Ordinal) => Condition,
         _ when message.Contains("no subjects", StringComparison.Ordinal) => "check the population's condition and the flag values in ADSL",
         _ when message.Contains("more than one record", StringComparison.Ordinal) => "narrow the endpoint's selection (e.g. ANL01FL = 'Y')",
