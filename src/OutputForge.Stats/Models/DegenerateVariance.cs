@@ -1,4 +1,4 @@
-namespace OutputForge.Stats;
+namespace OutputForge.Stats.Models;
 
 /// <summary>
 /// Whether a sum of squared deviations is zero up to rounding, relative to the data's scale. Values that are all equal
