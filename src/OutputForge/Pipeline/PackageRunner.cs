@@ -189,7 +189,7 @@ public static class PackageRunner
         IReadOnlyList<string> dataWarnings, RunInputs inputs, RunFacts run, string studyLine, PageSettings page, LayoutContext context)
     {
         var times = new StageTimes();
-        var result = TableAnalyses.For(table).Analyze(study, table, data);
+        var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, data);
         times.Lap("analysis");
         if (dataWarnings.Count > 0)
         {

@@ -11,7 +11,8 @@ namespace OutputForge.Spec;
 /// </summary>
 internal static class SpecFileReader
 {
-    private static readonly JsonSerializerOptions ModelOptions = new()
+    /// <summary>How the typed models are read from a spec: also used by the kinds to read their settings.</summary>
+    public static readonly JsonSerializerOptions ModelOptions = new()
     {
         PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
         TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver(),

@@ -68,7 +68,11 @@ public static class SpecLoader
             }
             try
             {
-                tables.Add(SpecFileReader.Read<TableSpec>(DisplayPath(file), SpecSchemas.Table, (t, source) => t.Source = source));
+                tables.Add(SpecFileReader.Read<TableSpec>(DisplayPath(file), SpecSchemas.Table, (t, source) =>
+                {
+                    t.Source = source;
+                    Kinds.TableKinds.ReadSettings(t, SpecFileReader.ModelOptions);
+                }));
             }
             catch (SpecException e)
             {

@@ -23,7 +23,7 @@ public static class ShellPackage
         var selected = TableSelection.Select(study, package.Tables, tables);
         foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
         {
-            log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", ShellStandIns.Kinds)})");
+            log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", Kinds.TableKinds.Names)})");
         }
         var shells = new List<LaidOutTable>();
         foreach (var table in selected.Where(t => ShellData.Supports(t.Kind)))
