@@ -26,6 +26,9 @@ public sealed class EmptyArmTests
         var text = Run(study);
         Assert.Matches(@"\(N=2\)\s+\(N=2\)\s+\(N=0\)", text);
         Assert.Contains("Warning: arm High has no subjects in population 'itt': its column shows N=0.", text);
+        // No test against an arm without subjects: an exact test would give p = 1, which says nothing.
+        Assert.Matches(@"p-value \[c\]\s+>0\.999\s+NE\n", text);
+        Assert.Contains("column high: no subjects in High.", text);
         var results = File.ReadAllText(Path.Combine(study.OutputFolder, "results.json"));
         Assert.Contains("\"high\"", results);
     }
