@@ -20,12 +20,15 @@ internal static class SpecFileReader
         AllowTrailingCommas = true,
     };
 
+    /// <summary>The largest spec file read: specs are a few kilobytes; 16 MB is far beyond any real one.</summary>
+    public const long MaxSpecBytes = 16 << 20;
+
     public static T Read<T>(string file, string schemaName, Action<T, SpecSource> attach)
     {
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(file);
+            bytes = Files.RegularFile.ReadAllBytes(file, MaxSpecBytes, "a spec file may hold", problem => new SpecException(new SpecProblem(file, null, null, "$", problem)));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -67,7 +70,7 @@ internal static class SpecFileReader
                     $"the key '{LastSegment(d.Pointer)}' is given twice in this object (first on line {d.FirstLine}); keep one")).ToList());
             }
             var source = new SpecSource(file, positions);
-            var problems = Validate(document.RootElement, schemaName, source);
+            var problems = SpecText.Problems(document.RootElement, source) is { Count: > 0 } text ? text : Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
                 throw new SpecException(problems);
