@@ -216,10 +216,12 @@ public sealed class ResponderAnalysis : ITableAnalysis
         {
             return $"Two-sided p-value from {NamedTest(choice)}, unstratified.";
         }
-        var used = comparisons.Select(c => c.Test.Method).Distinct().ToList();
-        var detail = used.Count == 1
+        // A comparison without a p-value (NE, e.g. against an arm without subjects) used no test.
+        var tested = comparisons.Where(c => c.Test.IsEstimable).ToList();
+        var used = tested.Select(c => c.Test.Method).Distinct().ToList();
+        var detail = used.Count == 1 && tested.Count == comparisons.Count
             ? $"; {used[0]} was used for every comparison"
-            : "; " + string.Join("; ", comparisons.Select(c => $"{c.Test.Method} for {c.Arm.Label} vs {control.Label}"));
+            : string.Concat(tested.Select(c => $"; {c.Test.Method} for {c.Arm.Label} vs {control.Label}"));
         return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
     }
 
