@@ -215,6 +215,7 @@ public static class CalcCommand
     private static double CheckLevel(double level) =>
         level is > 0 and < 1 ? level : throw new CalcInputException($"--level: {level} is not between 0 and 1 (e.g. 0.95)");
 
+    /// <summary>Every input of calc is a command-line value, so any input it cannot use is a usage error (exit code 1).</summary>
     private static int Run(TextWriter error, Action work)
     {
         try
@@ -225,12 +226,12 @@ public static class CalcCommand
         catch (CalcInputException e)
         {
             error.WriteLine($"outputforge: error: {e.Message}");
-            return ExitCodes.InputError;
+            return ExitCodes.Usage;
         }
         catch (ArgumentException e)
         {
             error.WriteLine($"outputforge: error: {e.Message.Split(" (Parameter")[0]}");
-            return ExitCodes.InputError;
+            return ExitCodes.Usage;
         }
     }
 }

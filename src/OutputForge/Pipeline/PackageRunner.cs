@@ -27,7 +27,9 @@ public static class PackageRunner
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder);
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
-        var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
+        var dataFolder = PackageInputs.DataFolder(package, request.DataFolder);
+        // The selection is a command-line choice: a pattern that matches no table stops the run before any data is read.
+        var selected = TableSelection.Select(package.Tables, request.Tables);
         var dataWarnings = new List<string>();
         var reading = Stopwatch.StartNew();
         var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
@@ -38,7 +40,6 @@ public static class PackageRunner
         var digesting = Stopwatch.StartNew();
         var inputs = RunInputs.Read(package, data);
         log.Detail($"inputs: SHA-256 digests of the spec and data files in {digesting.Elapsed.TotalMilliseconds:0} ms");
-        var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
         {
             DataDigests = inputs.Data.Where(d => d.Dataset is not null)
@@ -223,22 +224,6 @@ public static class PackageRunner
             files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
         }
         return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
-    }
-
-    private static string DefaultDataFolder(SpecPackage package)
-    {
-        var study = package.Study;
-        if (study.Data.Folder is null)
-        {
-            throw new SpecException(study.Source.Problem("/data",
-                "no data folder: give --data on the command line or data.folder in the study spec"));
-        }
-        var folder = Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
-        if (!package.Folders.Allows(folder))
-        {
-            throw new SpecException(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder) + ", or give --data"));
-        }
-        return folder;
     }
 
     /// <summary>The study identification of the page header: "QF217-301 (Sponsor)".</summary>

@@ -20,7 +20,7 @@ public static class ShellPackage
         var templates = TemplateSet.Load(study.Folder);
         var run = new RunFacts(DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
         var page = PackageRunner.PageFrom(study.Page);
-        var selected = TableSelection.Select(study, package.Tables, tables);
+        var selected = TableSelection.Select(package.Tables, tables);
         foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
         {
             log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", ShellStandIns.Kinds)})");
