@@ -26,7 +26,7 @@ public static class DemoCommand
         {
             Description = "Extra copies of the itch-score records in adeff.csv (parameters ITCHC01, ...) to enlarge the data for speed measurements; no demo table reads them.",
         };
-        var formats = CommonOptions.Formats();
+        var formats = CommonOptions.Formats("results.json and manifest.json are always written.");
         var quiet = CommonOptions.Quiet();
         var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();

@@ -10,7 +10,7 @@ public static class RunCommand
     {
         var inputs = new InputOptionSet("Only these tables, by id or pattern ('14.2.*'), comma-separated or repeated; the other tables' files, results and manifest entries in --out are kept.");
         var output = CommonOptions.Output("Folder for the tables and results.json (created if needed; files of the same name are replaced only when the whole run succeeds).");
-        var formats = CommonOptions.Formats();
+        var formats = CommonOptions.Formats("results.json and manifest.json are always written.");
         var quiet = CommonOptions.Quiet();
         var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();
