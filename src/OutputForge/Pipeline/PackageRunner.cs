@@ -49,7 +49,12 @@ public static class PackageRunner
         var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
         var context = new LayoutContext(templates, ColumnGroupsOf(study));
-        var workbook = request.Combined && selected.Count > 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
+        // With --tables the combined files still cover every table of the folder: the kept tables are rebuilt, and used only
+        // where they come out byte for byte as the files kept in the folder (KeptTablesForCombined).
+        var keptForCombined = request.Combined && request.Tables is not null
+            ? package.Tables.Where(t => !selected.Contains(t)).ToList()
+            : [];
+        var workbook = request.Combined && selected.Count > 0 && keptForCombined.Count == 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
             ? new CombinedWorkbookBuilder(selected.Select(t => t.Id).ToList(), run.RunTime)
             : null;
         BuiltTable[] built;
@@ -63,6 +68,14 @@ public static class PackageRunner
             throw;
         }
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        var keptLaidOut = keptForCombined.Count == 0
+            ? []
+            : KeptTablesForCombined.Rebuild(keptForCombined, request.OutputFolder, run,
+                (table, keptRun) =>
+                {
+                    var kept = BuildTable(table, request, study, data, dataWarnings, inputs, keptRun, studyLine, page, context);
+                    return (kept.Table, kept.Files);
+                });
         log.Detail(CollectorFacts.Describe());
         var writing = new StageTimes();
         var manifestTables = built.Select(b => b.Manifest).ToList();
@@ -94,7 +107,7 @@ public static class PackageRunner
             {
                 if (request.Combined && laidOut.Count > 0)
                 {
-                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime, workbook);
+                    combined = CombinedOutputs.Render(request.Renderers, [.. laidOut.Select(t => t.Table), .. keptLaidOut], run.RunTime, workbook);
                 }
             },
             () =>
