@@ -88,7 +88,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 warnings.AddRange(block.Warnings.Select(w => $"{label}: {w}"));
                 if (spec.Test != "none")
                 {
-                    (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label);
+                    (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label, ExactTestFallback.For(study));
                     warnings.AddRange(testWarnings);
                 }
             }
