@@ -57,6 +57,16 @@ public sealed class EndpointRecords
         return new EndpointRecords(dataset, rowOfSubject);
     }
 
+    /// <summary>What <see cref="Select"/> reads of the endpoint's dataset: the subject, PARAMCD, AVISIT and the record selection.</summary>
+    public static VariableReads Reads(TableSpec table, VariableReads reads)
+    {
+        var endpoint = table.Endpoint!;
+        return reads.Add(endpoint.Dataset, AdamConformance.SubjectVariable)
+            .Add(endpoint.Dataset, endpoint.Parameter is null ? null : "PARAMCD")
+            .Add(endpoint.Dataset, endpoint.Visit is null ? null : "AVISIT")
+            .AddCondition(endpoint.Dataset, endpoint.Where);
+    }
+
     /// <summary>The selecting variable, checked to hold <paramref name="value"/> somewhere.</summary>
     private static DataColumn Variable(Dataset dataset, string variableName, string value, SpecSource source, string pointer)
     {

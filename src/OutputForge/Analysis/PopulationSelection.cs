@@ -118,6 +118,17 @@ public sealed class PopulationSelection
         };
     }
 
+    /// <summary>What <see cref="Select"/> reads of ADSL: the subject, the population's and subset's conditions, the treatment and its order.</summary>
+    public static VariableReads Reads(StudySpec study, TableSpec table, VariableReads reads)
+    {
+        var population = study.Populations[table.Population];
+        return reads.Add(VariableReads.SubjectLevel, AdamConformance.SubjectVariable)
+            .AddCondition(VariableReads.SubjectLevel, population.Where)
+            .AddCondition(VariableReads.SubjectLevel, table.Subset)
+            .Add(VariableReads.SubjectLevel, population.Treatment ?? study.Treatment.Variable)
+            .Add(VariableReads.SubjectLevel, population.Treatment is null ? study.Treatment.Order : population.Order);
+    }
+
     private static DataColumn FindVariable(Dataset adsl, string name, SpecSource source, string pointer) =>
         adsl.Find(name) ?? throw new SpecException(source.Problem(pointer,
             $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{NearestName.Hint(name, adsl.Columns.Select(c => c.Name).ToList())}"));

@@ -39,7 +39,20 @@ public sealed class Dataset : IVariableSource
 
     IVariable? IVariableSource.FindVariable(string name) => Find(name);
 
-    public DataColumn? Find(string name) => _columns.GetValueOrDefault(name);
+    public DataColumn? Find(string name)
+    {
+        _lookups?.Invoke(Name, name);
+        return _columns.GetValueOrDefault(name);
+    }
+
+    private Action<string, string>? _lookups;
+
+    /// <summary>
+    /// A copy sharing the columns that tells <paramref name="lookup"/> the dataset and variable name of every lookup:
+    /// how tests hold what a table kind declares it reads (<see cref="Analysis.VariableReads"/>) to what it reads.
+    /// </summary>
+    public Dataset WithLookupsTold(Action<string, string> lookup) =>
+        new(Name, File, RowCount, Columns, LineOfRow) { ContentSha256 = ContentSha256, _lookups = lookup };
 
     /// <summary>The column, or a <see cref="DataException"/> naming the dataset and the nearest variable.</summary>
     public DataColumn Get(string name) =>

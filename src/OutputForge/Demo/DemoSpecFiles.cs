@@ -7,7 +7,6 @@ namespace OutputForge.Demo;
 public static class DemoSpecFiles
 {
     private const string DemoPrefix = "OutputForge.DemoSpecs.";
-    private const string SchemaPrefix = "OutputForge.Schema.";
 
     /// <summary>How many tables the demo study spec lists (its "tables"), read from the embedded study.json so help texts never drift from it.</summary>
     public static int TableCount
@@ -24,22 +23,16 @@ public static class DemoSpecFiles
     public static string Write(string root)
     {
         var assembly = typeof(DemoSpecFiles).Assembly;
-        foreach (var resource in assembly.GetManifestResourceNames().Order(StringComparer.Ordinal))
+        foreach (var name in Spec.SpecSchemas.Names)
         {
-            string relative;
-            if (resource.StartsWith(DemoPrefix, StringComparison.Ordinal))
-            {
-                relative = Path.Combine("specs", "demo", resource[DemoPrefix.Length..].Replace('\\', '/'));
-            }
-            else if (resource.StartsWith(SchemaPrefix, StringComparison.Ordinal))
-            {
-                relative = Path.Combine("specs", "schema", resource[SchemaPrefix.Length..]);
-            }
-            else
-            {
-                continue;
-            }
-            var target = Path.Combine(root, relative);
+            var target = Path.Combine(root, "specs", "schema", name);
+            Directory.CreateDirectory(Path.GetDirectoryName(target)!);
+            File.WriteAllText(target, Spec.SpecSchemas.Text(name), new System.Text.UTF8Encoding(false));
+        }
+        foreach (var resource in assembly.GetManifestResourceNames().Where(r => r.StartsWith(DemoPrefix, StringComparison.Ordinal))
+                     .Order(StringComparer.Ordinal))
+        {
+            var target = Path.Combine(root, "specs", "demo", resource[DemoPrefix.Length..].Replace('\\', '/'));
             Directory.CreateDirectory(Path.GetDirectoryName(target)!);
             using var input = assembly.GetManifestResourceStream(resource)!;
             using var output = File.Create(target);

@@ -11,7 +11,8 @@ namespace OutputForge.Spec;
 /// </summary>
 internal static class SpecFileReader
 {
-    private static readonly JsonSerializerOptions ModelOptions = new()
+    /// <summary>How the typed models are read from a spec: also used by the kinds to read their settings.</summary>
+    public static readonly JsonSerializerOptions ModelOptions = new()
     {
         PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
         TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver(),
@@ -19,12 +20,15 @@ internal static class SpecFileReader
         AllowTrailingCommas = true,
     };
 
+    /// <summary>The largest spec file read: specs are a few kilobytes; 16 MB is far beyond any real one.</summary>
+    public const long MaxSpecBytes = 16 << 20;
+
     public static T Read<T>(string file, string schemaName, Action<T, SpecSource> attach)
     {
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(file);
+            bytes = Files.RegularFile.ReadAllBytes(file, MaxSpecBytes, "a spec file may hold", problem => new SpecException(new SpecProblem(file, null, null, "$", problem)));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -55,7 +59,7 @@ internal static class SpecFileReader
         using (document)
         {
             var source = new SpecSource(file, JsonPositionMap.Build(bytes));
-            var problems = Validate(document.RootElement, schemaName, source);
+            var problems = SpecText.Problems(document.RootElement, source) is { Count: > 0 } text ? text : Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
                 throw new SpecException(problems);

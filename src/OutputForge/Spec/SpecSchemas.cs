@@ -14,9 +14,13 @@ public static class SpecSchemas
 
     public static IReadOnlyList<string> Names => [Study, Table];
 
-    /// <summary>The schema's text as shipped.</summary>
+    /// <summary>The schema's text as shipped; the table schema as composed from its shared part and the kinds' fragments.</summary>
     public static string Text(string name)
     {
+        if (name == Table)
+        {
+            return Kinds.TableSchemaComposition.Text();
+        }
         using var stream = typeof(SpecSchemas).Assembly.GetManifestResourceStream("OutputForge.Schema." + name)
             ?? throw new InvalidOperationException($"schema {name} is not embedded");
         using var reader = new StreamReader(stream);

@@ -1,3 +1,4 @@
+using System.Text.Json.Nodes;
 using System.Text.Json.Serialization;
 
 namespace OutputForge.Spec;
@@ -15,22 +16,27 @@ public sealed class TableSpec
     public string? Subset { get; init; }
 
     public EndpointSpec? Endpoint { get; init; }
-    public PopulationsTableSpec? Populations { get; init; }
-    public DispositionTableSpec? Disposition { get; init; }
-    public DemographicsTableSpec? Demographics { get; init; }
-    public AdverseEventsTableSpec? AdverseEvents { get; init; }
     public StatisticsSpec Statistics { get; init; } = new();
     public List<string> Footnotes { get; init; } = [];
 
-    public ContinuousSettings? Continuous { get; init; }
+    /// <summary>
+    /// The keys the shared model leaves to the kinds: each kind's settings object under its key (e.g. "continuous"),
+    /// shaped by the kind's schema fragment, and "$schema". Only the kind's own object is read, into
+    /// <see cref="Settings{TSettings}"/>, by <see cref="Kinds.TableKinds.ReadSettings"/> when the spec loads.
+    /// </summary>
+    [JsonExtensionData]
+    public JsonObject? KindKeys { get; set; }
 
-    public TimeToEventSettings? TimeToEvent { get; init; }
+    /// <summary>The settings object of the table's kind as its module read it; null when the spec has none.</summary>
+    [JsonIgnore]
+    public object? KindSettings { get; internal set; }
 
-    public ResponderSettings? Responders { get; init; }
-
-    public SubgroupSettings? Subgroups { get; init; }
-
-    public CategoricalByVisitSettings? CategoricalByVisit { get; init; }
+    /// <summary>
+    /// The kind's typed settings, e.g. <c>table.Settings&lt;ContinuousSettings&gt;()</c>: as the spec gives them, or the
+    /// kind's defaults where its settings are optional; a located spec error where they are required and absent.
+    /// </summary>
+    public TSettings Settings<TSettings>() where TSettings : class =>
+        KindSettings as TSettings ?? Kinds.TableKinds.DefaultSettings<TSettings>(this);
 
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;

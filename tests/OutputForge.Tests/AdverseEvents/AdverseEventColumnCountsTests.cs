@@ -1,5 +1,5 @@
 using OutputForge.Analysis;
-using OutputForge.Analysis.AdverseEvents;
+using OutputForge.Kinds.AdverseEvents;
 using OutputForge.Analysis.Summaries;
 
 namespace OutputForge.Tests.AdverseEvents;

@@ -1,5 +1,5 @@
 using System.Text;
-using OutputForge.Analysis.Responders;
+using OutputForge.Kinds.Responders;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;

@@ -1,4 +1,4 @@
-using OutputForge.Analysis.Responders;
+using OutputForge.Kinds.Responders;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;

@@ -1,5 +1,5 @@
 using System.Text.Json;
-using OutputForge.Analysis.CategoricalByVisit;
+using OutputForge.Kinds.CategoricalByVisit;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;

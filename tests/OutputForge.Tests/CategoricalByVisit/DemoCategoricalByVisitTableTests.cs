@@ -1,4 +1,4 @@
-using OutputForge.Analysis.CategoricalByVisit;
+using OutputForge.Kinds.CategoricalByVisit;
 using OutputForge.Data;
 using OutputForge.Spec;
 using OutputForge.Tests.EndToEnd;

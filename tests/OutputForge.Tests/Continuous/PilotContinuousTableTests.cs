@@ -1,4 +1,4 @@
-using OutputForge.Analysis.Continuous;
+using OutputForge.Kinds.Continuous;
 using OutputForge.Tests.Oracles;
 
 namespace OutputForge.Tests.Continuous;

@@ -105,7 +105,7 @@ public sealed class PooledDemoStudyTests
         Assert.Equal(PooledSpecSet.TableCount, tables.Count);
         var specs = tables.Select(t => JsonNode.Parse(File.ReadAllText(Path.Combine(Path.GetDirectoryName(studyFile)!, t)))!).ToList();
         Assert.Equal(60, specs.Select(s => s["id"]!.GetValue<string>()).Distinct().Count());
-        Assert.Equal(OutputForge.Analysis.TableAnalyses.Kinds.Order(StringComparer.Ordinal),
+        Assert.Equal(OutputForge.Kinds.TableKinds.Names.Order(StringComparer.Ordinal),
             specs.Select(s => s["kind"]!.GetValue<string>()).Distinct().Order(StringComparer.Ordinal));
         Assert.False(Directory.Exists(folder.File("output")));
 

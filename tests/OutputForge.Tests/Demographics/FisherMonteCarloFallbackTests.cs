@@ -54,7 +54,7 @@ public sealed class FisherMonteCarloFallbackTests
         folder.Write("data/adsl.csv", adsl.ToString());
         var package = OutputForge.Spec.SpecLoader.Load(folder.Path);
         var data = OutputForge.Data.StudyData.Load(package.Study, folder.File("data"));
-        return OutputForge.Analysis.TableAnalyses.For(package.Tables[0]).Analyze(package.Study, package.Tables[0], data);
+        return OutputForge.Kinds.TableKinds.For(package.Tables[0]).Analysis.Analyze(package.Study, package.Tables[0], data);
     }
 
     private static OutputForge.Results.StatisticValue PValue(OutputForge.Results.TableResult result) =>

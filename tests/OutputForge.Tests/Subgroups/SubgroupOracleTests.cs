@@ -1,5 +1,5 @@
-using OutputForge.Analysis.Responders;
-using OutputForge.Analysis.Subgroups;
+using OutputForge.Kinds.Responders;
+using OutputForge.Kinds.Subgroups;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;

@@ -1,5 +1,5 @@
 using System.Text;
-using OutputForge.Analysis.Subgroups;
+using OutputForge.Kinds.Subgroups;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;

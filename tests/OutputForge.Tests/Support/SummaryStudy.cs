@@ -65,7 +65,7 @@ public sealed class SummaryStudy : IDisposable
     {
         var package = OutputForge.Spec.SpecLoader.Load(Folder);
         var data = OutputForge.Data.StudyData.Load(package.Study, DataFolder);
-        return OutputForge.Analysis.TableAnalyses.For(package.Tables[0]).Analyze(package.Study, package.Tables[0], data);
+        return OutputForge.Kinds.TableKinds.For(package.Tables[0]).Analysis.Analyze(package.Study, package.Tables[0], data);
     }
 
     /// <summary>The laid-out text of a cell, as every renderer shows it.</summary>

@@ -1,4 +1,4 @@
-using OutputForge.Analysis.TimeToEvent;
+using OutputForge.Kinds.TimeToEvent;
 using OutputForge.Tests.Oracles;
 
 namespace OutputForge.Tests.TimeToEvent;

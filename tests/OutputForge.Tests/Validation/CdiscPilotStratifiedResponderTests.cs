@@ -1,5 +1,5 @@
 using System.Text.Json;
-using OutputForge.Analysis.Responders;
+using OutputForge.Kinds.Responders;
 using OutputForge.Data;
 using OutputForge.Results;
 using OutputForge.Spec;

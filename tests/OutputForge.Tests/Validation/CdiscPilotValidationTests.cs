@@ -147,7 +147,7 @@ public sealed class CdiscPilotValidationTests
         var run = new RunFacts(DateTimeOffset.UnixEpoch, "test", new Dictionary<string, string> { ["adsl"] = "adsl.csv" });
         return package.Tables.ToDictionary(t => t.Id, t =>
         {
-            var result = TableAnalyses.For(t).Analyze(package.Study, t, data);
+            var result = OutputForge.Kinds.TableKinds.For(t).Analysis.Analyze(package.Study, t, data);
             return (result, TableLayoutBuilder.Build(result, "CDISCPILOT01", run, PageSettings.Default).Document);
         });
     }

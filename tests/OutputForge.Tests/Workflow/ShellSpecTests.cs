@@ -28,12 +28,6 @@ public sealed class ShellSpecTests
     }
 
     [Fact]
-    public void Every_table_kind_has_a_stand_in()
-    {
-        Assert.Equal(OutputForge.Analysis.TableAnalyses.Kinds.Order(StringComparer.Ordinal), ShellStandIns.Kinds.Order(StringComparer.Ordinal));
-    }
-
-    [Fact]
     public void An_arm_in_two_groups_is_a_located_spec_error_in_shells_too()
     {
         using var mini = new MiniStudy(study: StudyWithArms.Replace("\"arms\": [", "\"groups\": [{ \"label\": \"A\", \"arms\": [\"Active\"] }, { \"label\": \"B\", \"arms\": [\"Active\", \"Placebo\"] }], \"arms\": ["));

@@ -18,7 +18,7 @@ public sealed class ShellStandInTests
         var table = package.Tables.Single(t => t.Id == id);
 
         var records = ShellData.For(package.Study, table);
-        var result = TableAnalyses.For(table).Analyze(package.Study, table, records.ToStudyData());
+        var result = OutputForge.Kinds.TableKinds.For(table).Analysis.Analyze(package.Study, table, records.ToStudyData());
 
         var notEstimable = result.Rows.SelectMany(r => r.Cells.SelectMany(c => c.Values
                 .Where(v => v.NotEstimableReason is not null).Select(v => $"{r.Key} {c.Column} {v.Statistic}: {v.NotEstimableReason}")))
@@ -33,7 +33,7 @@ public sealed class ShellStandInTests
             _ => [],
         };
         Assert.Equal(expected, notEstimable.Select(n => n[..n.IndexOf(':')]));
-        var perArm = ShellStandIns.For(table.Kind)!.SubjectsPerArm(table);
+        var perArm = OutputForge.Kinds.TableKinds.Find(table.Kind)!.StandIn.SubjectsPerArm(table);
         Assert.All(result.Columns.Where(c => c.SubjectCount is not null), c => Assert.Equal(perArm * (c.Key == ResultKeys.Total ? 3 : 1), c.SubjectCount));
     }
 }

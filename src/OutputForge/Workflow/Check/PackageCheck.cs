@@ -33,7 +33,7 @@ public static class PackageCheck
         package = package with { Tables = TableSelection.Select(package.Tables, options.Tables) };
         try
         {
-            TemplateSet.Load(study.Folder);
+            TemplateSet.Load(study.Folder, package.Folders);
         }
         catch (TemplateException e)
         {
@@ -51,7 +51,8 @@ public static class PackageCheck
             report.Add(new CheckProblem(CheckSeverity.Error, folder, "", "no such data folder", "give --data the folder with the CSV files"));
             return report;
         }
-        var datasets = ReadDatasets(study, folder, options.DataOptions, report);
+        var readOptions = options.DataOptions with { ReadableFolders = package.Folders.Folders };
+        var datasets = ReadDatasets(study, folder, readOptions, report);
         if (!datasets.TryGetValue("adsl", out var adsl))
         {
             return report;
@@ -85,7 +86,7 @@ public static class PackageCheck
                 $"the tables' own checks (endpoint values, record selection) were not made because of the {which} above",
                 "fix the errors above and run check again"));
         }
-        SpecDataChecks.Run(package, datasets, complete ? StudyData.Load(study, folder, options.DataOptions, _ => { }) : null, report);
+        SpecDataChecks.Run(package, datasets, complete ? StudyData.Load(study, folder, readOptions, _ => { }) : null, report);
         return report;
     }
 
@@ -106,6 +107,7 @@ public static class PackageCheck
             }
             try
             {
+                DatasetFileScope.Check(path, folder, options.ReadableFolders);
                 datasets[name] = CsvDatasetReader.Read(name, path, options, warning => report.Add(new CheckProblem(CheckSeverity.Warning, path, "",
                     warning, "a run would print this warning in every table's footnotes; check that it is expected")));
             }

@@ -1,4 +1,3 @@
-using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Spec;
 
@@ -31,7 +30,7 @@ public static class SpecDataChecks
             }
             try
             {
-                var result = TableAnalyses.For(table).Analyze(study, table, data);
+                var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, data);
                 foreach (var warning in result.Warnings)
                 {
                     report.Add(new CheckProblem(CheckSeverity.Warning, table.Source.File, "", $"table {table.Id}: {warning}",

@@ -9,14 +9,10 @@ namespace OutputForge.Workflow.Shells;
 /// statistic that is not estimable may change its cell's shape), and are never shown.
 /// </summary>
 /// <remarks>
-/// A new table kind gets shells by one class implementing this interface and one line in
-/// <see cref="ShellStandIns"/>.
+/// Every table kind has one, in its folder, named in its line of <see cref="Kinds.TableKinds"/>.
 /// </remarks>
 public interface IShellStandIn
 {
-    /// <summary>The spec's "kind" value this stand-in serves.</summary>
-    string Kind { get; }
-
     /// <summary>How many stand-in subjects each arm needs; most kinds do with <see cref="ShellData.SubjectsPerArm"/>.</summary>
     int SubjectsPerArm(Spec.TableSpec table) => ShellData.SubjectsPerArm;
 

@@ -1,4 +1,3 @@
-using OutputForge.Analysis;
 using OutputForge.Layout;
 using OutputForge.Spec;
 using OutputForge.Templates;
@@ -19,7 +18,7 @@ public static class ShellBuilder
         PageSettings page, TemplateSet templates)
     {
         var records = ShellData.For(study, table);
-        var result = TableAnalyses.For(table).Analyze(study, table, records.ToStudyData()) with { Warnings = [], Figure = null };
+        var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, records.ToStudyData()) with { Warnings = [], Figure = null };
         var laidOut = Pipeline.TableLayOut.Build(study, table, result, studyLine, run, page, NumberDisplay.Placeholders, templates,
             document => ShellTemplateValues.For(study, table, result, document, run));
         return (laidOut, records.Assumptions);

@@ -18,7 +18,7 @@ public static class ShellData
     /// <summary>Ten per arm: no expected count is below 5 when split five and five, and no statistic is inestimable.</summary>
     public const int SubjectsPerArm = 10;
 
-    public static bool Supports(string kind) => ShellStandIns.For(kind) is not null;
+    public static bool Supports(string kind) => Kinds.TableKinds.Find(kind) is not null;
 
     public static ShellRecords For(StudySpec study, TableSpec table)
     {
@@ -31,7 +31,7 @@ public static class ShellData
         var wherePointer = table.Subset is null ? $"/populations/{table.Population}/where" : "/subset";
         var whereSource = table.Subset is null ? study.Source : table.Source;
 
-        var standIn = ShellStandIns.For(table.Kind);
+        var standIn = Kinds.TableKinds.Find(table.Kind)?.StandIn;
         var perArm = standIn?.SubjectsPerArm(table) ?? SubjectsPerArm;
         var subjects = new List<ShellSubject>();
         var records = new ShellRecords(study, table, subjects);

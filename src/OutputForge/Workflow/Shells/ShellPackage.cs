@@ -16,15 +16,16 @@ public static class ShellPackage
     public static IReadOnlyList<string> Write(string specPath, string outputFolder, IReadOnlyList<ITableRenderer> renderers,
         IReadOnlyList<string>? tables, IRunLog log, DateTimeOffset? runTime = null)
     {
+        using var outputLock = OutputLock.Acquire(outputFolder);
         var package = SpecLoader.Load(specPath);
         var study = package.Study;
-        var templates = TemplateSet.Load(study.Folder);
+        var templates = TemplateSet.Load(study.Folder, package.Folders);
         var run = new RunFacts(runTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
         var page = PackageRunner.PageFrom(study.Page);
         var selected = TableSelection.Select(package.Tables, tables);
         foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
         {
-            log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", ShellStandIns.Kinds)})");
+            log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", Kinds.TableKinds.Names)})");
         }
         var shells = new List<LaidOutTable>();
         foreach (var table in selected.Where(t => ShellData.Supports(t.Kind)))

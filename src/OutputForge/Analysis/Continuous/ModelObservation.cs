@@ -1,4 +1,0 @@
-namespace OutputForge.Analysis.Continuous;
-
-/// <summary>One observation of the ANCOVA: subject, arm, the analysed value (change or value) and the record it came from.</summary>
-internal sealed record ModelObservation(string Subject, TreatmentArm Arm, int Row, double Response);

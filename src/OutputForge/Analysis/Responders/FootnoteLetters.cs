@@ -1,9 +1,0 @@
-namespace OutputForge.Analysis.Responders;
-
-/// <summary>Hands out footnote letters in the order the rows that cite them appear ([a], [b], ...).</summary>
-public sealed class FootnoteLetters(char first)
-{
-    private char _next = first;
-
-    public string Next() => $"[{_next++}]";
-}

@@ -1,0 +1,225 @@
+using System.Globalization;
+using OutputForge.Analysis;
+using OutputForge.Analysis.Summaries;
+using OutputForge.Data;
+using OutputForge.Naming;
+using OutputForge.Results;
+using OutputForge.Spec;
+using OutputForge.Stats;
+
+namespace OutputForge.Kinds.AdverseEvents;
+
+/// <summary>
+/// Adverse events by system organ class and preferred term: subjects with at least one event,
+/// n (%) of the population per arm, each subject counted once per row whatever its number of
+/// events; optionally the number of events [E], a by-severity breakdown (each subject once per row,
+/// at its maximum severity), a frequency threshold on terms, and Fisher's exact test of each active
+/// arm against the control. Row keys: "any", "soc:{class}", "soc:{class}/pt:{term}", each
+/// followed by "/severity:{value}" for the severity rows.
+/// </summary>
+public sealed class AdverseEventAnalysis : ITableAnalysis
+{
+    public const string AnyKey = "any";
+
+    public VariableReads Reads(StudySpec study, TableSpec table)
+    {
+        var settings = table.Settings<AdverseEventsSettings>();
+        return PopulationSelection.Reads(study, table, new VariableReads())
+            .Add(settings.Dataset, [AdamConformance.SubjectVariable, settings.SocVariable, settings.TermVariable])
+            .AddCondition(settings.Dataset, settings.Where)
+            .Add(settings.Dataset, settings.Severity?.Variable);
+    }
+
+    public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
+    {
+        var settings = table.Settings<AdverseEventsSettings>();
+        var selection = PopulationSelection.Select(study, table, data);
+        var warnings = new List<string>(selection.Warnings);
+        var records = AdverseEventRecords.Read(study, table, data, selection, warnings);
+        var columns = SummaryColumns.For(selection, study, settings.Total);
+        var control = selection.Control;
+        var active = settings.Test == "fisher" ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
+        var resultColumns = SummaryColumns.ToResultColumns(columns);
+        resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value [a]", null)));
+        var context = new RowContext(settings, columns, selection, active, control,
+            settings.Severity?.Levels ?? [], resultColumns.Select(c => c.Key).ToList());
+
+        var sortColumn = SortColumn(settings, selection, table.Source);
+        var classes = records.GroupBy(r => r.Soc, StringComparer.Ordinal)
+            .Select(g => (Soc: g.Key, Records: g.ToList(), Terms: g.GroupBy(r => r.Term, StringComparer.Ordinal)
+                .Select(t => (Term: t.Key, Records: t.ToList()))
+                .Where(t => Passes(t.Records, settings.Threshold, selection, columns, table.Source))
+                .ToList()))
+            .Where(c => c.Terms.Count > 0)
+            .ToList();
+
+        var rows = new List<ResultRow>();
+        rows.AddRange(context.Rows(AnyKey, settings.AnyLabel, 0, records));
+        if (settings.SocRows)
+        {
+            foreach (var socClass in Sorted(classes, c => c.Soc, c => c.Records, settings.Sort.By, sortColumn))
+            {
+                rows.Add(SummaryRows.Blank($"blank:{socClass.Soc}", context.ColumnKeys));
+                var socKey = $"soc:{socClass.Soc}";
+                rows.AddRange(context.Rows(socKey, socClass.Soc, 0, socClass.Records));
+                foreach (var term in Sorted(socClass.Terms, t => t.Term, t => t.Records, settings.Sort.By, sortColumn))
+                {
+                    rows.AddRange(context.Rows($"{socKey}/pt:{term.Term}", term.Term, 1, term.Records));
+                }
+            }
+        }
+        else
+        {
+            var terms = classes.SelectMany(c => c.Terms.Select(t => (Key: $"soc:{c.Soc}/pt:{t.Term}", t.Term, t.Records))).ToList();
+            rows.Add(SummaryRows.Blank("blank:terms", context.ColumnKeys));
+            foreach (var term in Sorted(terms, t => t.Term, t => t.Records, settings.Sort.By, sortColumn))
+            {
+                rows.AddRange(context.Rows(term.Key, term.Term, 1, term.Records));
+            }
+        }
+
+        warnings.AddRange(context.Warnings.Distinct());
+        warnings.AddRange(SummaryRows.NotEstimableWarnings(rows));
+        var notes = Notes(settings, selection, control, active.Count > 0);
+        if (context.NeitherArmHasTheEvent)
+        {
+            notes.Insert(1, "Where neither arm of a comparison has the event, only one table fits the margins and the p-value is 1.");
+        }
+        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, notes,
+            warnings, table.Footnotes, new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", settings.Dataset]),
+            settings.Percent.Decimals, settings.PValueFloor, SummaryColumns.StyleOf(settings.Percent));
+    }
+
+    public static string PValueKey(TreatmentArm arm) => $"p-value-{arm.Key}";
+
+    /// <summary>The arms whose count orders rows by frequency: one arm, or all of them ("total").</summary>
+    private static IReadOnlySet<TreatmentArm> SortColumn(AdverseEventsSettings settings, PopulationSelection selection, SpecSource source)
+    {
+        if (settings.Sort.Column == ResultKeys.Total)
+        {
+            return selection.Arms.ToHashSet();
+        }
+        var arm = selection.Arms.FirstOrDefault(a => a.Value == settings.Sort.Column) ?? throw new SpecException(source.Problem("/adverseEvents/sort/column",
+            $"'{settings.Sort.Column}' is neither 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(settings.Sort.Column, selection.Arms.Select(a => a.Value).ToList())}"));
+        return new HashSet<TreatmentArm> { arm };
+    }
+
+    private static IEnumerable<T> Sorted<T>(IEnumerable<T> items, Func<T, string> name, Func<T, List<AdverseEventRecord>> records,
+        string by, IReadOnlySet<TreatmentArm> arms)
+    {
+        var byName = StringComparer.OrdinalIgnoreCase;
+        return by == "frequency"
+            ? items.OrderByDescending(i => records(i).Where(r => arms.Contains(r.Arm)).Select(r => r.Subject).Distinct(StringComparer.Ordinal).Count())
+                .ThenBy(name, byName).ThenBy(name, StringComparer.Ordinal)
+            : items.OrderBy(name, byName).ThenBy(name, StringComparer.Ordinal);
+    }
+
+    /// <summary>
+    /// Whether a term meets the threshold: at least the given percentage of subjects in any arm, in
+    /// the total, or in one arm. Compared exactly, as 100 n &gt;= threshold x N in decimals.
+    /// </summary>
+    private static bool Passes(List<AdverseEventRecord> records, AdverseEventThresholdSpec? threshold, PopulationSelection selection,
+        IReadOnlyList<SummaryColumn> columns, SpecSource source)
+    {
+        if (threshold is null)
+        {
+            return true;
+        }
+        bool Meets(IReadOnlySet<TreatmentArm> arms)
+        {
+            var n = records.Where(r => arms.Contains(r.Arm)).Select(r => r.Subject).Distinct(StringComparer.Ordinal).Count();
+            var denominator = arms.Sum(selection.Count);
+            return denominator > 0 && 100m * n >= (decimal)threshold.Percent * denominator;
+        }
+        return threshold.In switch
+        {
+            "any-arm" => selection.Arms.Any(a => Meets(new HashSet<TreatmentArm> { a })),
+            "total" => Meets(selection.Arms.ToHashSet()),
+            _ => Meets(new HashSet<TreatmentArm>
+            {
+                selection.Arms.FirstOrDefault(a => a.Value == threshold.In) ?? throw new SpecException(source.Problem("/adverseEvents/threshold/in",
+                    $"'{threshold.In}' is neither 'any-arm', 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(threshold.In, selection.Arms.Select(a => a.Value).ToList())}")),
+            }),
+        };
+    }
+
+    private static List<string> Notes(AdverseEventsSettings settings, PopulationSelection selection, TreatmentArm control, bool tested)
+    {
+        var notes = new List<string>();
+        if (tested)
+        {
+            notes.Add($"[a] Two-sided p-value from Fisher's exact test of each arm against {control.Label} (subjects with vs without the event), unstratified.");
+        }
+        notes.Add($"N = number of subjects in each column ({selection.Label}); n (%) = subjects with at least one event, percentages of N. A subject is counted once per row, whatever the number of events.");
+        if (settings.Events)
+        {
+            notes.Add("[E] = number of events.");
+        }
+        if (settings.Severity is { } severity)
+        {
+            notes.Add($"Severity rows: each subject is counted once per row, at the maximum severity of its events in that row ({string.Join(" < ", severity.Levels.Select(l => l.Label ?? l.Value))}){(settings.Events ? "; [E] is given on the rows above them only" : string.Empty)}.");
+        }
+        if (settings.Where is not null)
+        {
+            notes.Add($"Events counted: {settings.Where}.");
+        }
+        if (settings.Threshold is { } threshold)
+        {
+            var where = threshold.In switch { "any-arm" => "any arm", "total" => "all arms combined", _ => threshold.In };
+            notes.Add(string.Create(CultureInfo.InvariantCulture,
+                $"Preferred terms reported by at least {threshold.Percent:0.###}% of subjects in {where}; a system organ class row counts all of its events, including terms not shown."));
+        }
+        notes.Add(settings.Sort.By == "frequency"
+            ? $"Sorted by decreasing number of subjects in {(settings.Sort.Column == ResultKeys.Total ? "all arms combined" : settings.Sort.Column)}, then alphabetically."
+            : "Sorted alphabetically.");
+        return notes;
+    }
+
+    /// <summary>Builds a row (and its severity rows) from the records it counts.</summary>
+    private sealed class RowContext(AdverseEventsSettings settings, IReadOnlyList<SummaryColumn> columns, PopulationSelection selection,
+        IReadOnlyList<TreatmentArm> active, TreatmentArm control, IReadOnlyList<LevelSpec> severities, List<string> columnKeys)
+    {
+        public List<string> ColumnKeys { get; } = columnKeys;
+        public List<string> Warnings { get; } = [];
+        public bool NeitherArmHasTheEvent { get; private set; }
+
+        public IEnumerable<ResultRow> Rows(string key, string label, int indent, IReadOnlyCollection<AdverseEventRecord> records)
+        {
+            var counts = AdverseEventCounts.OfColumns(records, columns, severities.Count);
+            var cells = columns.Select(c => CountCells.CountPercent(c.Key, counts[c.Key].Subjects, c.N, settings.Percent,
+                settings.Events ? counts[c.Key].Events : null)).ToList();
+            foreach (var arm in active)
+            {
+                cells.Add(PValue(arm, label, counts));
+            }
+            yield return new ResultRow(key, label, indent, cells);
+            for (var level = 0; level < severities.Count; level++)
+            {
+                var severity = severities[level];
+                // A class's severity rows sit as deep as its terms' own, so that they do not read as terms.
+                yield return new ResultRow($"{key}/severity:{severity.Value}", severity.Label ?? severity.Value, key == AnyKey ? 1 : 2,
+                    // No [E] here: a subject counted at its maximum severity may have events of other severities,
+                    // so an event count beside it would not describe the subjects counted.
+                    columns.Select(c => CountCells.CountPercent(c.Key, counts[c.Key].SubjectsAtMaximumSeverity[level], c.N, settings.Percent)).ToList());
+            }
+        }
+
+        private ResultCell PValue(TreatmentArm arm, string label, Dictionary<string, AdverseEventCounts> counts)
+        {
+            var withEvent = counts[arm.Key].Subjects;
+            var controlWithEvent = counts[control.Key].Subjects;
+            var test = FisherExactTest.TwoByTwo(withEvent, selection.Count(arm) - withEvent, controlWithEvent, selection.Count(control) - controlWithEvent);
+            if (withEvent + controlWithEvent == 0)
+            {
+                // Neither arm has the event (it occurs in another arm only): one table fits the margins and p is 1,
+                // which the method note states once rather than a warning per row.
+                NeitherArmHasTheEvent = true;
+            }
+            else
+            {
+                Warnings.AddRange(test.Notes.Select(n => $"{label}, {arm.Label} vs {control.Label}: {n}"));
+            }
+            return CellFactory.PValueOf(PValueKey(arm), test);
+        }
+    }
+}

@@ -1,0 +1,92 @@
+using System.Text.RegularExpressions;
+using OutputForge.Analysis;
+using OutputForge.Stats;
+
+namespace OutputForge.Kinds.Responders;
+
+/// <summary>
+/// One active arm against the control, stratified: the 2 x 2 table of each stratum, the common risk
+/// difference (Mantel-Haenszel with Sato's variance, or the stratified Miettinen-Nurminen score
+/// interval), the Cochran-Mantel-Haenszel test, optionally the Breslow-Day test, and the
+/// Mantel-Haenszel relative risk and odds ratio. Strata without subjects of one of the two arms carry
+/// no information on the comparison: they are left out, and named in <see cref="Notes"/>.
+/// </summary>
+public sealed partial record StratifiedComparison(
+    TreatmentArm Arm,
+    IntervalResult Difference,
+    TestResult Test,
+    TestResult? Homogeneity,
+    IntervalResult? RelativeRisk,
+    IntervalResult? OddsRatio,
+    int StrataUsed,
+    IReadOnlyList<string> Notes)
+{
+    public static StratifiedComparison Compute(TreatmentArm arm, TreatmentArm control, IReadOnlyList<ResponderSubject> subjects,
+        ResponderStrata strata, ResponderStratification spec, double level, bool withRelativeRisk, OddsRatioIntervalMethod? oddsRatioMethod)
+    {
+        var notes = new List<string>();
+        var used = new List<StratumCounts>();
+        var usedNames = new List<string>();
+        // One pass sorts the two arms' subjects into their strata, rather than one scan of all subjects per stratum.
+        var ofStratum = new Dictionary<string, (List<ResponderSubject> Active, List<ResponderSubject> Reference)>(StringComparer.Ordinal);
+        foreach (var stratum in strata.Levels)
+        {
+            ofStratum.TryAdd(stratum, ([], []));
+        }
+        foreach (var subject in subjects)
+        {
+            if (!subject.InDenominator || !strata.StratumOfSubject.TryGetValue(subject.Subject, out var value)
+                || !ofStratum.TryGetValue(value, out var lists))
+            {
+                continue;
+            }
+            if (subject.Arm == arm)
+            {
+                lists.Active.Add(subject);
+            }
+            if (subject.Arm == control)
+            {
+                lists.Reference.Add(subject);
+            }
+        }
+        foreach (var stratum in strata.Levels)
+        {
+            var (active, reference) = ofStratum[stratum];
+            if (active.Count == 0 || reference.Count == 0)
+            {
+                var count = active.Count + reference.Count;
+                notes.Add(count == 0
+                    ? $"{arm.Label} vs {control.Label}: stratum {stratum} has no subjects in these two arms and was left out."
+                    : $"{arm.Label} vs {control.Label}: stratum {stratum} ({(count == 1 ? "1 subject" : $"{count} subjects")}) has no subjects of {(active.Count == 0 ? arm.Label : control.Label)} and was left out.");
+                continue;
+            }
+            used.Add(new StratumCounts(active.Count(s => s.Responded), active.Count, reference.Count(s => s.Responded), reference.Count));
+            usedNames.Add(stratum);
+        }
+        var difference = spec.Difference == "miettinen-nurminen"
+            ? StratifiedMiettinenNurminen.Compute(used, level)
+            : MantelHaenszelRiskDifference.Compute(used, level);
+        var test = CochranMantelHaenszelTest.Compute(used, spec.Test == "cmh-corrected");
+        var homogeneity = spec.Homogeneity ? BreslowDayTest.Compute(used) : null;
+        var relativeRisk = withRelativeRisk ? MantelHaenszelRelativeRisk.Compute(used, level) : null;
+        var oddsRatio = oddsRatioMethod switch
+        {
+            null => null,
+            OddsRatioIntervalMethod.Woolf => MantelHaenszelOddsRatio.Compute(used, level),
+            _ => throw new ArgumentOutOfRangeException(nameof(oddsRatioMethod), oddsRatioMethod, "Unknown odds ratio interval."),
+        };
+        var prefix = $"{arm.Label} vs {control.Label}: ";
+        foreach (var note in difference.Notes.Concat(test.Notes).Concat(homogeneity?.Notes ?? []).Concat(relativeRisk?.Notes ?? []).Concat(oddsRatio?.Notes ?? []))
+        {
+            var named = prefix + StratumNumber().Replace(note, m => $"Stratum {usedNames[int.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture) - 1]} ", 1);
+            if (!notes.Contains(named, StringComparer.Ordinal))
+            {
+                notes.Add(named);
+            }
+        }
+        return new StratifiedComparison(arm, difference, test, homogeneity, relativeRisk, oddsRatio, used.Count, notes);
+    }
+
+    [GeneratedRegex(@"^Stratum (\d+) ")]
+    private static partial Regex StratumNumber();
+}

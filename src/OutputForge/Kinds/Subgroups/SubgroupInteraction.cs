@@ -1,0 +1,80 @@
+using OutputForge.Kinds.Responders;
+using OutputForge.Stats;
+
+namespace OutputForge.Kinds.Subgroups;
+
+/// <summary>
+/// The treatment-by-subgroup interaction test of one active arm against the control over the levels
+/// of one subgroup variable, on the subjects of those two arms only. "likelihood-ratio" compares the
+/// logistic models response ~ arm + subgroup + arm:subgroup and response ~ arm + subgroup (deviance
+/// difference on (levels - 1) degrees of freedom); both models are categorical, so the cell counts
+/// determine the likelihood and each cell is expanded to its responders and non-responders.
+/// "breslow-day" tests the homogeneity of the odds ratios over the levels (Breslow and Day 1980),
+/// "breslow-day-tarone" with Tarone's (1985) correction. Levels where either arm has no subjects in
+/// the denominator carry no information on the interaction and are left out, with a note.
+/// </summary>
+internal static class SubgroupInteraction
+{
+    public static TestResult Compute(string method, IReadOnlyList<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)> cells,
+        List<string> notes)
+    {
+        var used = new List<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)>();
+        foreach (var cell in cells)
+        {
+            if (cell.Active.Denominator == 0 || cell.Control.Denominator == 0)
+            {
+                notes.Add($"level {cell.Level.Label} was left out of the interaction test: an arm has no subjects in it");
+                continue;
+            }
+            used.Add(cell);
+        }
+        var name = method == "likelihood-ratio" ? LogisticLikelihoodRatioTest.MethodName
+            : method == "breslow-day" ? BreslowDayTest.MethodName : BreslowDayTest.TaroneMethodName;
+        if (used.Count < 2)
+        {
+            return TestResult.NotEstimable(name, "fewer than two levels have subjects in both arms");
+        }
+        if (method != "likelihood-ratio")
+        {
+            var strata = used.Select(c => new StratumCounts(c.Active.Responders, c.Active.Denominator, c.Control.Responders, c.Control.Denominator)).ToList();
+            var test = BreslowDayTest.Compute(strata, taroneCorrection: method == "breslow-day-tarone");
+            // The test numbers strata 1..K in the order given; say which levels they are.
+            notes.AddRange(test.Notes.Select(n => RenameStrata(n, used)));
+            return test;
+        }
+        var response = new List<int>();
+        var arm = new List<int>();
+        var level = new List<int>();
+        for (var k = 0; k < used.Count; k++)
+        {
+            Expand(used[k].Control, 0, k, response, arm, level);
+            Expand(used[k].Active, 1, k, response, arm, level);
+        }
+        var armLevels = new[] { "control", "active" };
+        var levelNames = used.Select(c => c.Level.Label).ToList();
+        var (reducedX, reducedColumns) = TwoFactorDesign.Build(arm, armLevels, level, levelNames, interaction: false);
+        var (fullX, fullColumns) = TwoFactorDesign.Build(arm, armLevels, level, levelNames, interaction: true);
+        var reduced = LogisticRegression.Fit(response, reducedX, reducedColumns);
+        var full = LogisticRegression.Fit(response, fullX, fullColumns);
+        return LogisticLikelihoodRatioTest.Compute(reduced, full);
+    }
+
+    private static void Expand(ResponderCounts counts, int armIndex, int levelIndex, List<int> response, List<int> arm, List<int> level)
+    {
+        for (var i = 0; i < counts.Denominator; i++)
+        {
+            response.Add(i < counts.Responders ? 1 : 0);
+            arm.Add(armIndex);
+            level.Add(levelIndex);
+        }
+    }
+
+    private static string RenameStrata(string note, IReadOnlyList<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)> used)
+    {
+        for (var k = used.Count; k >= 1; k--)
+        {
+            note = note.Replace($"Stratum {k} ", $"Level {used[k - 1].Level.Label} ", StringComparison.Ordinal);
+        }
+        return note.TrimEnd('.');
+    }
+}
