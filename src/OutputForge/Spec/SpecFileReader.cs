@@ -160,7 +160,7 @@ internal static class SpecFileReader
             case "pattern" when evaluationPath.EndsWith("/propertyNames", StringComparison.Ordinal):
                 return KeyPatternProblem(pointer, keywordNode?.GetValue<string>(), source);
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal):
-                return source.Problem(pointer, "expected a CSV file name in the data folder (no folders), ending in .csv");
+                return source.Problem(pointer, "expected a data file name in the data folder (no folders), ending in .csv, .xpt, .json or .ndjson");
             default:
                 return source.Problem(pointer, message);
         }

@@ -73,6 +73,20 @@ public sealed class CheckMatchesRunTests
         Assert.Contains("--tables: no table id matches '9.*' (ids: 1)", both.CheckOutput);
     }
 
+    [Theory]
+    [InlineData("xpt")]
+    [InlineData("json")]
+    public void Check_reads_every_data_format_a_run_reads(string format)
+    {
+        using var folder = new TempFolder();
+        Assert.Equal(0, WorkflowDemoFixture.Run(["demo", "--out", folder.Path, "--data-format", format, "--no-tables", "--quiet"]).ExitCode);
+
+        var (code, output, error) = WorkflowDemoFixture.Run(["check", "--spec", folder.File("specs/demo"), "--data", folder.File("data")]);
+
+        Assert.True(code == 0, output + error);
+        Assert.Contains("check: 0 errors", output);
+    }
+
     /// <summary>Options of run that only shape the outputs; every other option of run changes what it reads, and check must take it.</summary>
     private static readonly string[] OutputOnlyOptions = ["--out", "--format", "--quiet", "--verbose", "--timestamp", "--combined"];
 

@@ -108,7 +108,7 @@ public static class PackageCheck
             try
             {
                 DatasetFileScope.Check(path, folder, options.ReadableFolders);
-                datasets[name] = CsvDatasetReader.Read(name, path, options, warning => report.Add(new CheckProblem(CheckSeverity.Warning, path, "",
+                datasets[name] = DatasetFiles.Read(name, path, options, warning => report.Add(new CheckProblem(CheckSeverity.Warning, path, "",
                     warning, "a run would print this warning in every table's footnotes; check that it is expected")));
             }
             catch (DataException e)
