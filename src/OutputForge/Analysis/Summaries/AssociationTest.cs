@@ -4,24 +4,24 @@ using OutputForge.Stats;
 namespace OutputForge.Analysis.Summaries;
 
 /// <summary>
-/// The test of a levels x arms table that a spec names ("chi-square", "likelihood-ratio" or "fisher"), with its
+/// The test of a levels x arms table that a spec names (chi-square, likelihood-ratio or Fisher), with its
 /// warnings: the test's own notes (empty rows or columns left out) and, for the chi-square tests, Cochran's
 /// (1954) caution when expected counts fall below 5.
 /// </summary>
 public static class AssociationTest
 {
     /// <param name="monteCarlo">Fisher's exact test's fallback beyond exact enumeration (<see cref="ExactTestFallback"/>); null: NE.</param>
-    public static (TestResult Test, List<string> Warnings) Run(string choice, int[,] table, string what, Stats.Exact.FisherMonteCarloSettings? monteCarlo = null)
+    public static (TestResult Test, List<string> Warnings) Run(SummaryTest choice, int[,] table, string what, Stats.Exact.FisherMonteCarloSettings? monteCarlo = null)
     {
         var warnings = new List<string>();
         TestResult test;
-        if (choice == "fisher")
+        if (choice == SummaryTest.Fisher)
         {
             test = FisherExactTest.Compute(table, monteCarlo);
         }
         else
         {
-            test = choice == "likelihood-ratio" ? LikelihoodRatioChiSquareTest.Compute(table) : PearsonChiSquareTest.Compute(table);
+            test = choice == SummaryTest.LikelihoodRatio ? LikelihoodRatioChiSquareTest.Compute(table) : PearsonChiSquareTest.Compute(table);
             var expected = ContingencyTable.Diagnose(WithoutEmptyLines(table));
             if (test.IsEstimable && expected.CellsBelowFive > 0)
             {
