@@ -19,13 +19,19 @@ public static class PackageRunner
         var prepared = RunPreparation.Prepare(request, outputLock.Folder, clock, log);
         var selected = prepared.Selected;
         clock.StartStep();
-        var workbook = request.Combined && selected.Count > 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
+        // With --tables the combined files still cover every table of the folder: the kept tables are rebuilt, and used only
+        // where they come out byte for byte as the files kept in the folder (KeptTablesForCombined).
+        var keptForCombined = request.Combined && request.Tables is not null
+            ? prepared.Package.Tables.Where(t => !selected.Contains(t)).ToList()
+            : [];
+        var workbook = request.Combined && selected.Count > 0 && keptForCombined.Count == 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
             ? new CombinedWorkbookBuilder(selected.Select(t => t.Id).ToList(), prepared.Facts.RunTime)
             : null;
+        var builder = new TableBuilder(request, prepared);
         BuiltTable[] built;
         try
         {
-            built = TableRunLoop.BuildAll(selected, new TableBuilder(request, prepared), log, workbook);
+            built = TableRunLoop.BuildAll(selected, builder, log, workbook);
         }
         catch
         {
@@ -33,6 +39,14 @@ public static class PackageRunner
             throw;
         }
         log.Detail($"tables: {built.Length} built in {clock.StepMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        var keptLaidOut = keptForCombined.Count == 0
+            ? []
+            : KeptTablesForCombined.Rebuild(keptForCombined, request.OutputFolder, prepared.Facts,
+                (table, keptRun) =>
+                {
+                    var kept = builder.Build(table, keptRun);
+                    return (kept.Table, kept.Files);
+                });
         log.Detail(CollectorFacts.Describe());
         foreach (var table in built)
         {
@@ -42,7 +56,7 @@ public static class PackageRunner
             }
         }
 
-        var files = RunDelivery.Deliver(request, prepared, built, workbook, log);
+        var files = RunDelivery.Deliver(request, prepared, built, keptLaidOut, workbook, log);
         log.Detail(CollectorFacts.Describe());
         foreach (var table in built.Select(b => b.Table))
         {

@@ -11,8 +11,9 @@ namespace OutputForge.Pipeline;
 internal static class RunDelivery
 {
     /// <summary>The full paths of the files the output folder now holds.</summary>
+    /// <param name="keptLaidOut">The kept tables of a run with --tables, rebuilt for the combined files only.</param>
     public static IReadOnlyList<string> Deliver(RunRequest request, PreparedRun prepared, IReadOnlyList<BuiltTable> built,
-        CombinedWorkbookBuilder? workbook, IRunLog log)
+        IReadOnlyList<LaidOutTable> keptLaidOut, CombinedWorkbookBuilder? workbook, IRunLog log)
     {
         var writing = new StageTimes();
         var laidOut = built.Select(b => (b.Table, b.Warnings)).ToList();
@@ -34,7 +35,7 @@ internal static class RunDelivery
             {
                 if (request.Combined && laidOut.Count > 0)
                 {
-                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), prepared.Facts.RunTime, workbook);
+                    combined = CombinedOutputs.Render(request.Renderers, [.. laidOut.Select(t => t.Table), .. keptLaidOut], prepared.Facts.RunTime, workbook);
                 }
             },
             () => results = ResultsJson(request, prepared, laidOut));

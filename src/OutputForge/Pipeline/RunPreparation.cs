@@ -8,7 +8,7 @@ namespace OutputForge.Pipeline;
 
 /// <summary>
 /// The first part of a run, in the order its errors are reported: specs, templates, the data folder (kept apart from the
-/// output folder), the datasets, the digests of every input, the selected tables and the run's facts.
+/// output folder), the selected tables, the datasets, the digests of every input and the run's facts.
 /// </summary>
 internal static class RunPreparation
 {
@@ -18,8 +18,10 @@ internal static class RunPreparation
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder, package.Folders);
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.ElapsedMilliseconds:0} ms");
-        var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
+        var dataFolder = PackageInputs.DataFolder(package, request.DataFolder);
         OutputPlace.CheckApart(request.OutputFolder, lockedOutputFolder, dataFolder, study.Folder);
+        // The selection is a command-line choice: a pattern that matches no table stops the run before any data is read.
+        var selected = TableSelection.Select(package.Tables, request.Tables);
         var dataWarnings = new List<string>();
         clock.StartStep();
         var data = StudyData.Load(study, dataFolder, request.DataOptions with { ReadableFolders = package.Folders.Folders }, dataWarnings.Add);
@@ -30,28 +32,11 @@ internal static class RunPreparation
         clock.StartStep();
         var inputs = RunInputs.Read(package, data);
         log.Detail($"inputs: SHA-256 digests of the spec and data files in {clock.StepMilliseconds:0} ms");
-        var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var facts = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
         {
             DataDigests = inputs.Data.Where(d => d.Dataset is not null)
                 .ToDictionary(d => d.Dataset!, d => FileDigest.Short(d.Sha256), StringComparer.Ordinal),
         };
         return new PreparedRun(package, templates, dataFolder, data, dataWarnings, inputs, selected, facts);
-    }
-
-    private static string DefaultDataFolder(SpecPackage package)
-    {
-        var study = package.Study;
-        if (study.Data.Folder is null)
-        {
-            throw new SpecException(study.Source.Problem("/data",
-                "no data folder: give --data on the command line or data.folder in the study spec"));
-        }
-        var folder = Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
-        if (!package.Folders.Allows(folder))
-        {
-            throw new SpecException(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder) + ", or give --data"));
-        }
-        return folder;
     }
 }

@@ -16,10 +16,12 @@ internal sealed class TableBuilder(RunRequest request, PreparedRun prepared)
     private readonly string _studyLine = StudyLine.Of(prepared.Study);
     private readonly PageSettings _page = PageSetup.From(prepared.Study.Page);
 
-    public BuiltTable Build(TableSpec table)
+    public BuiltTable Build(TableSpec table) => Build(table, prepared.Facts);
+
+    /// <summary>Builds the table as a run with <paramref name="run"/>'s facts would (a kept table rebuilt with its own run time).</summary>
+    public BuiltTable Build(TableSpec table, RunFacts run)
     {
         var study = prepared.Study;
-        var run = prepared.Facts;
         var times = new StageTimes();
         var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, prepared.Data);
         times.Lap("analysis");
