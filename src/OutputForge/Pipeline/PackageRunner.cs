@@ -222,7 +222,7 @@ public static class PackageRunner
         {
             files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
         }
-        return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
+        return new BuiltTable(laidOut, TableNotes.Of(result).Warnings, manifest, files, times);
     }
 
     private static string DefaultDataFolder(SpecPackage package)

@@ -1,0 +1,50 @@
+using System.Globalization;
+using OutputForge.Results;
+
+namespace OutputForge.Layout;
+
+/// <summary>
+/// The one wording of every <see cref="NoteKind"/>: a note's kind, subject and values become its sentence here and
+/// nowhere else, so that a change of wording reaches every table kind. Footnote letters are added by
+/// <see cref="TableNotes"/>, the "Warning: " prefix by the table layout.
+/// </summary>
+public static class NoteWording
+{
+    /// <param name="rowLabel">The displayed label of a row by its key (for notes whose subject names a row).</param>
+    public static string Word(ResultNote note, Func<string, string> rowLabel) => note.Kind switch
+    {
+        NoteKind.Denominators => Denominators(note),
+        NoteKind.AcrossArmsTest => "Two-sided p-value across the treatment arms (Total not included): " +
+            string.Join("; ", note.List<string>("methods").Zip(note.List<string>("subjects"))
+                .GroupBy(t => t.First, StringComparer.Ordinal)
+                .Select(g => $"{g.Key} for {string.Join(", ", g.Select(t => t.Second))}")) + ".",
+        NoteKind.SmallExpectedCounts => string.Create(CultureInfo.InvariantCulture,
+            $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected counts are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
+        NoteKind.TestNotEstimable => $"{Subject(note.Subject)}{note.Text("method")} not estimable: {note.Text("reason")}.",
+        NoteKind.MethodRemark => Subject(note.Subject) + note.Text("text"),
+        NoteKind.NotEstimable => $"NE (not estimable) in \"{rowLabel(note.Subject.Row!)}\", column {note.Subject.Column}: {note.Text("reason")}.",
+        NoteKind.Text => Subject(note.Subject) + note.Text("text"),
+        _ => throw new ArgumentOutOfRangeException(nameof(note), note.Kind, "a note kind without wording"),
+    };
+
+    /// <summary>"Age (years): ", "Nausea, QF-217 10 mg vs Placebo: ": what the note is about, then the comparison.</summary>
+    private static string Subject(NoteSubject subject)
+    {
+        var parts = new List<string>();
+        if (subject.What is { } what)
+            parts.Add(what);
+        if (subject.Arm is { } arm)
+            parts.Add(subject.Control is { } control ? $"{arm} vs {control}" : arm);
+        return parts.Count == 0 ? string.Empty : string.Join(", ", parts) + ": ";
+    }
+
+    private static string Denominators(ResultNote note)
+    {
+        var text = $"N = number of subjects in each column ({note.Text("population")}); percentages are of N.";
+        if (note.OptionalText("armVariable") is { } variable)
+            text += $" Columns are the arms of {variable}.";
+        if (note.Flag("withValue"))
+            text += " n = number of subjects with a value.";
+        return text;
+    }
+}
