@@ -18,6 +18,17 @@ public static class NoteWording
             string.Join("; ", note.List<string>("methods").Zip(note.List<string>("subjects"))
                 .GroupBy(t => t.First, StringComparer.Ordinal)
                 .Select(g => $"{g.Key} for {string.Join(", ", g.Select(t => t.Second))}")) + ".",
+        NoteKind.PairwiseEventTest => $"Two-sided p-value from {note.Text("method")} of each arm against {note.Text("control")} (subjects with vs without the event), unstratified.",
+        NoteKind.SingleTableFits => "Where neither arm of a comparison has the event, only one table fits the margins and the p-value is 1.",
+        NoteKind.EventDenominators => $"N = number of subjects in each column ({note.Text("population")}); n (%) = subjects with at least one event, percentages of N. A subject is counted once per row, whatever the number of events.",
+        NoteKind.EventCounts => "[E] = number of events.",
+        NoteKind.SeverityRows => $"Severity rows: each subject is counted once per row, at the maximum severity of its events in that row ({string.Join(" < ", note.List<string>("levels"))}){(note.Flag("withEvents") ? "; [E] is given on the rows above them only" : string.Empty)}.",
+        NoteKind.EventsCounted => $"Events counted: {note.Text("condition")}.",
+        NoteKind.TermThreshold => string.Create(CultureInfo.InvariantCulture,
+            $"Preferred terms reported by at least {note.Number("percent"):0.###}% of subjects in {Place(note.Text("in"))}; a system organ class row counts all of its events, including terms not shown."),
+        NoteKind.RowOrder => note.OptionalText("byFrequencyIn") is { } column
+            ? $"Sorted by decreasing number of subjects in {(column == "total" ? "all arms combined" : column)}, then alphabetically."
+            : "Sorted alphabetically.",
         NoteKind.SmallExpectedCounts => string.Create(CultureInfo.InvariantCulture,
             $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected counts are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
         NoteKind.TestNotEstimable => $"{Subject(note.Subject)}{note.Text("method")} not estimable: {note.Text("reason")}.",
@@ -25,6 +36,14 @@ public static class NoteWording
         NoteKind.NotEstimable => $"NE (not estimable) in \"{rowLabel(note.Subject.Row!)}\", column {note.Subject.Column}: {note.Text("reason")}.",
         NoteKind.Text => Subject(note.Subject) + note.Text("text"),
         _ => throw new ArgumentOutOfRangeException(nameof(note), note.Kind, "a note kind without wording"),
+    };
+
+    /// <summary>Where a count is taken: "any arm", "all arms combined" or the arm named.</summary>
+    private static string Place(string where) => where switch
+    {
+        "any-arm" => "any arm",
+        "total" => "all arms combined",
+        _ => where,
     };
 
     /// <summary>"Age (years): ", "Nausea, QF-217 10 mg vs Placebo: ": what the note is about, then the comparison.</summary>

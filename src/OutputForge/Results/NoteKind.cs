@@ -10,6 +10,22 @@ public enum NoteKind
     Denominators,
     /// <summary>The tests across the treatment arms of a summary table, grouped by method. Values: methods and subjects (parallel lists: the method of each tested block or variable).</summary>
     AcrossArmsTest,
+    /// <summary>Each arm tested against the control on subjects with vs without an event. Values: method, control.</summary>
+    PairwiseEventTest,
+    /// <summary>Where neither arm of a comparison has the event, one table fits the margins and p is 1.</summary>
+    SingleTableFits,
+    /// <summary>What N and n (%) of an event table are. Values: population.</summary>
+    EventDenominators,
+    /// <summary>What [E] is.</summary>
+    EventCounts,
+    /// <summary>How severity rows count subjects. Values: levels (in increasing severity), withEvents.</summary>
+    SeverityRows,
+    /// <summary>The condition selecting the events counted. Values: condition.</summary>
+    EventsCounted,
+    /// <summary>The threshold a preferred term must reach to be shown. Values: percent, in ("any-arm", "total" or an arm).</summary>
+    TermThreshold,
+    /// <summary>The order of the rows. Values: byFrequencyIn ("total" or an arm) when by frequency, none when alphabetical.</summary>
+    RowOrder,
     /// <summary>Expected counts below 5 in a chi-square test (Cochran 1954). Values: below, cells, smallest.</summary>
     SmallExpectedCounts,
     /// <summary>A test gave no result. Values: method, reason.</summary>
