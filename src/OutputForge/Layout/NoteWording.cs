@@ -29,6 +29,11 @@ public static class NoteWording
         NoteKind.RowOrder => note.OptionalText("byFrequencyIn") is { } column
             ? $"Sorted by decreasing number of subjects in {(column == "total" ? "all arms combined" : column)}, then alphabetically."
             : "Sorted alphabetically.",
+        NoteKind.VisitDenominators => $"N = number of subjects in the {note.Text("population")}; n = subjects with a value. Values are summarized over the subjects with a record at the visit.",
+        NoteKind.AncovaModel => Ancova(note),
+        NoteKind.DoseResponseTest => $"Dose-response test: the same model with treatment entered as the number {note.Text("dose")} instead of a factor; two-sided t test of its slope (slope per unit of {note.Text("dose")} kept in results.json).",
+        NoteKind.ModelNotFitted => $"{note.Subject.Visit}: the {note.Text("model")} could not be fitted: {note.Text("reason")}.",
+        NoteKind.ArmNotInModel => $"{note.Subject.Visit}: no subject of {note.Subject.Arm} has {note.Text("response")} and all model covariates; it has no LS mean.",
         NoteKind.SmallExpectedCounts => string.Create(CultureInfo.InvariantCulture,
             $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected counts are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
         NoteKind.TestNotEstimable => $"{Subject(note.Subject)}{note.Text("method")} not estimable: {note.Text("reason")}.",
@@ -55,6 +60,24 @@ public static class NoteWording
         if (subject.Arm is { } arm)
             parts.Add(subject.Control is { } control ? $"{arm} vs {control}" : arm);
         return parts.Count == 0 ? string.Empty : string.Join(", ", parts) + ": ";
+    }
+
+    private static string Ancova(ResultNote note)
+    {
+        var response = note.Text("response");
+        var covariates = note.List<string>("covariates");
+        var factors = note.List<string>("factors");
+        var terms = new List<string> { "treatment (factor)" };
+        terms.AddRange(covariates.Select(c => $"{c} (covariate)"));
+        terms.AddRange(factors.Select(f => $"{f} (factor)"));
+        var excluded = note.List<string>("excludedVisits").Zip(note.List<int>("excludedCounts"), (visit, count) => $"{visit}: {count}").ToList();
+        var balance = factors.Count > 0
+            ? $"LS means at the observed mean of {(covariates.Count > 0 ? string.Join(", ", covariates) : "no covariate")} with the levels of {string.Join(", ", factors)} weighted equally"
+            : covariates.Count > 0 ? $"LS means at the observed mean of {string.Join(", ", covariates)}" : "LS means";
+        return $"ANCOVA (general linear model, least squares) of {response} with {string.Join(", ", terms)}, fitted at each visit separately " +
+            $"on the subjects with {response} and every model variable; {balance}. Differences are each arm minus {note.Text("control")} " +
+            $"(or as labelled), with {LevelText.Of(note.Number("level"))} CIs and two-sided p-values from the t distribution on the residual degrees of freedom." +
+            (excluded.Count > 0 ? $" Subjects with a value but a missing covariate, left out of the model: {string.Join("; ", excluded)}." : string.Empty);
     }
 
     private static string Denominators(ResultNote note)

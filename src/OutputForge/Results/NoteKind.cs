@@ -26,6 +26,16 @@ public enum NoteKind
     TermThreshold,
     /// <summary>The order of the rows. Values: byFrequencyIn ("total" or an arm) when by frequency, none when alphabetical.</summary>
     RowOrder,
+    /// <summary>What N and n of a by-visit summary are. Values: population.</summary>
+    VisitDenominators,
+    /// <summary>The analysis of covariance of a continuous endpoint. Values: response, covariates, factors, control, level, excludedVisits and excludedCounts (parallel lists).</summary>
+    AncovaModel,
+    /// <summary>The dose-response test of a continuous endpoint. Values: dose (the numeric dose variable).</summary>
+    DoseResponseTest,
+    /// <summary>A model could not be fitted; the subject names the visit. Values: model, reason.</summary>
+    ModelNotFitted,
+    /// <summary>No subject of an arm has the response and every covariate, so the arm has no LS mean. Values: response.</summary>
+    ArmNotInModel,
     /// <summary>Expected counts below 5 in a chi-square test (Cochran 1954). Values: below, cells, smallest.</summary>
     SmallExpectedCounts,
     /// <summary>A test gave no result. Values: method, reason.</summary>
