@@ -90,6 +90,7 @@ public sealed class StudyData
                     throw new DataException(path, null, null,
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
+                DatasetFileScope.Check(path, folder, options.ReadableFolders);
                 opened[i] = CsvFileParts.Open(name, path, options);
             }
             catch (Exception e)

@@ -20,12 +20,15 @@ internal static class SpecFileReader
         AllowTrailingCommas = true,
     };
 
+    /// <summary>The largest spec file read: specs are a few kilobytes; 16 MB is far beyond any real one.</summary>
+    public const long MaxSpecBytes = 16 << 20;
+
     public static T Read<T>(string file, string schemaName, Action<T, SpecSource> attach)
     {
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(file);
+            bytes = Files.RegularFile.ReadAllBytes(file, MaxSpecBytes, "a spec file may hold", problem => new SpecException(new SpecProblem(file, null, null, "$", problem)));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -54,7 +57,7 @@ internal static class SpecFileReader
         using (document)
         {
             var source = new SpecSource(file, JsonPositionMap.Build(bytes));
-            var problems = Validate(document.RootElement, schemaName, source);
+            var problems = SpecText.Problems(document.RootElement, source) is { Count: > 0 } text ? text : Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
                 throw new SpecException(problems);
