@@ -34,6 +34,17 @@ public static class NoteWording
         NoteKind.DoseResponseTest => $"Dose-response test: the same model with treatment entered as the number {note.Text("dose")} instead of a factor; two-sided t test of its slope (slope per unit of {note.Text("dose")} kept in results.json).",
         NoteKind.ModelNotFitted => $"{note.Subject.Visit}: the {note.Text("model")} could not be fitted: {note.Text("reason")}.",
         NoteKind.ArmNotInModel => $"{note.Subject.Visit}: no subject of {note.Subject.Arm} has {note.Text("response")} and all model covariates; it has no LS mean.",
+        NoteKind.TimeUnits => $"Time in {note.Text("unit")}; {note.Text("censor")} = 1 marks a censored time. Percentages are of the subjects analysed.",
+        NoteKind.KaplanMeierMedian => $"Kaplan-Meier product-limit estimate; {Level(note)} CI of the median by the method of Brookmeyer and Crowley with the log-log transformation. NE: not reached (the curve or its confidence limit does not fall to 50%).",
+        NoteKind.KaplanMeierAtTimes => note.Flag("cumulative")
+            ? $"100 x (1 - S(t)) from the Kaplan-Meier curve with the log-log {Level(note)} CI of S(t), complemented; NE beyond the arm's last observed time."
+            : $"100 x S(t) from the Kaplan-Meier curve with the log-log {Level(note)} CI (Greenwood variance); NE beyond the arm's last observed time.",
+        NoteKind.LogRankTest => $"Two-sided p-value of the log-rank test, {Stratification(note)}, of each arm against {note.Text("control")} (those two arms only).",
+        NoteKind.CoxHazardRatio => $"Hazard ratio (arm vs {note.Text("control")}) from a Cox proportional hazards model with treatment as the only covariate, {Stratification(note)}, fitted to the two arms compared; {note.Text("ties")} method for tied times; Wald {Level(note)} CI. " +
+            (note.Flag("cumulative") ? $"A hazard ratio above 1 means the event comes sooner than on {note.Text("control")}." : $"A hazard ratio below 1 means a lower event rate than on {note.Text("control")}."),
+        NoteKind.NoStratumValue => NoStratumValue((int)note.Number("subjects"), note.List<string>("variables")),
+        NoteKind.StratumAddsNothing => $"{note.Subject.Arm} vs {note.Subject.Control}, {note.Subject.What}: stratum {Stratum(note.Subject)} {StratumReason(note.Text("reason"))} and adds nothing to the test.",
+        NoteKind.NoHazardRatio => $"{note.Subject.Arm} vs {note.Subject.Control}: the Cox model gives no hazard ratio: {note.Text("reason")}.",
         NoteKind.SmallExpectedCounts => string.Create(CultureInfo.InvariantCulture,
             $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected counts are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
         NoteKind.TestNotEstimable => $"{Subject(note.Subject)}{note.Text("method")} not estimable: {note.Text("reason")}.",
@@ -42,6 +53,26 @@ public static class NoteWording
         NoteKind.Text => Subject(note.Subject) + note.Text("text"),
         _ => throw new ArgumentOutOfRangeException(nameof(note), note.Kind, "a note kind without wording"),
     };
+
+    private static string Level(ResultNote note) => LevelText.Of(note.Number("level"));
+
+    /// <summary>"stratified by STRAT1R and STRAT2R", or "unstratified".</summary>
+    private static string Stratification(ResultNote note) => note.List<string>("strata") is { Count: > 0 } strata
+        ? $"stratified by {string.Join(" and ", strata)}"
+        : "unstratified";
+
+    /// <summary>A stratum named by its values, as the reader of the table knows it: 'F / &lt;65'.</summary>
+    private static string Stratum(NoteSubject subject) => $"'{string.Join(" / ", subject.Stratum ?? [])}'";
+
+    private static string StratumReason(string code) => code switch
+    {
+        "one-group-only" => "has subjects of one group only",
+        "no-events" => "has no events",
+        _ => throw new ArgumentOutOfRangeException(nameof(code), code, "unknown stratum reason"),
+    };
+
+    private static string NoStratumValue(int subjects, IReadOnlyList<string> variables) =>
+        $"{subjects} subject{(subjects == 1 ? " has" : "s have")} no value of {string.Join(", ", variables)} and {(subjects == 1 ? "is" : "are")} left out of the whole table.";
 
     /// <summary>Where a count is taken: "any arm", "all arms combined" or the arm named.</summary>
     private static string Place(string where) => where switch

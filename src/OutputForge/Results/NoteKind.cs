@@ -36,6 +36,22 @@ public enum NoteKind
     ModelNotFitted,
     /// <summary>No subject of an arm has the response and every covariate, so the arm has no LS mean. Values: response.</summary>
     ArmNotInModel,
+    /// <summary>The time unit and the censoring flag of a time-to-event table. Values: unit, censor.</summary>
+    TimeUnits,
+    /// <summary>The Kaplan-Meier median and its interval. Values: level.</summary>
+    KaplanMeierMedian,
+    /// <summary>The Kaplan-Meier estimates at fixed times. Values: level, cumulative (the probability of the event rather than of its absence).</summary>
+    KaplanMeierAtTimes,
+    /// <summary>The log-rank test of each arm against the control. Values: strata (the stratification variables; empty when unstratified), control.</summary>
+    LogRankTest,
+    /// <summary>The Cox model hazard ratio. Values: strata, control, ties, level, cumulative.</summary>
+    CoxHazardRatio,
+    /// <summary>Subjects without a value of a stratification variable, left out. Values: subjects, variables.</summary>
+    NoStratumValue,
+    /// <summary>A stratum (subject: its values) that adds nothing to a stratified method. Values: reason ("one-group-only", "no-events").</summary>
+    StratumAddsNothing,
+    /// <summary>The Cox model gives no hazard ratio for a comparison. Values: reason.</summary>
+    NoHazardRatio,
     /// <summary>Expected counts below 5 in a chi-square test (Cochran 1954). Values: below, cells, smallest.</summary>
     SmallExpectedCounts,
     /// <summary>A test gave no result. Values: method, reason.</summary>
