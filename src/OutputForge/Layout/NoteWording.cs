@@ -42,11 +42,42 @@ public static class NoteWording
         NoteKind.LogRankTest => $"Two-sided p-value of the log-rank test, {Stratification(note)}, of each arm against {note.Text("control")} (those two arms only).",
         NoteKind.CoxHazardRatio => $"Hazard ratio (arm vs {note.Text("control")}) from a Cox proportional hazards model with treatment as the only covariate, {Stratification(note)}, fitted to the two arms compared; {note.Text("ties")} method for tied times; Wald {Level(note)} CI. " +
             (note.Flag("cumulative") ? $"A hazard ratio above 1 means the event comes sooner than on {note.Text("control")}." : $"A hazard ratio below 1 means a lower event rate than on {note.Text("control")}."),
-        NoteKind.NoStratumValue => NoStratumValue((int)note.Number("subjects"), note.List<string>("variables")),
+        NoteKind.NoStratumValue => NoStratumValue((int)note.Number("subjects"), note.List<string>("variables"), note.OptionalText("leftOutOf")),
+        NoteKind.ProportionInterval => $"{note.Text("method")} {Level(note)} confidence interval for the proportion of responders.",
+        NoteKind.DifferenceInterval => $"Difference in proportions of responders (each arm minus {note.Text("control")}), in percentage points, with the {note.Text("method")} {Level(note)} confidence interval.",
+        NoteKind.UnstratifiedTest => UnstratifiedTest(note),
+        NoteKind.ResponderDenominators => note.Text("missing") switch
+        {
+            "non-responder" => $"N = number of subjects in the {note.Text("population")}; percentages are of N. Subjects with no assessment are counted as non-responders.",
+            "observed" => $"N = subjects in the {note.Text("population")}; percentages are of the subjects with a record (observed cases: records as {note.Text("dataset")} has them, " +
+                $"including its derived records, {note.Text("derivation")} not blank, where the endpoint selects them); subjects without a record are left out.",
+            _ => $"N = number of subjects in the {note.Text("population")}; percentages are of the subjects evaluated. Subjects with no assessment are excluded.",
+        },
+        NoteKind.StratifiedDifference => note.Flag("scoreInterval")
+            ? $"Common difference (arm minus {note.Text("control")}), weights n1 n2 / (n1 + n2); stratified Miettinen-Nurminen score {Level(note)} CI (Miettinen and Nurminen 1985); estimate: the score's root, equal to the weighted difference."
+            : $"Mantel-Haenszel common difference (arm minus {note.Text("control")}), weights n1 n2 / (n1 + n2); {Level(note)} CI from Sato's variance (Sato 1989).",
+        NoteKind.CmhTest => $"Two-sided p-value of the Cochran-Mantel-Haenszel test{(note.Flag("corrected") ? " with continuity correction" : "")}, each arm against {note.Text("control")}.",
+        NoteKind.HomogeneityTest => "Breslow-Day test (Tarone's correction) of equal odds ratios; strata where all or none responded are left out.",
+        NoteKind.RelativeRisk => note.Flag("stratified")
+            ? $"Mantel-Haenszel relative risk of response (each arm / {note.Text("control")}), {Level(note)} CI from the Greenland-Robins variance."
+            : $"Relative risk of response (each arm / {note.Text("control")}), log (Katz) {Level(note)} CI.",
+        NoteKind.OddsRatio => note.Flag("stratified")
+            ? $"Mantel-Haenszel odds ratio of response (each arm to {note.Text("control")}), {note.Text("method")} {Level(note)} CI."
+            : $"Odds ratio of response (each arm to {note.Text("control")}), {note.Text("method")} {Level(note)} CI.",
+        NoteKind.StrataDefinition => $"Strata: each combination of {string.Join(" / ", note.List<string>("variables"))} values (ADSL); each comparison uses its two arms only.",
+        NoteKind.EmptyStrata => note.List<string>("strata") is var empty
+            ? $"Empty {(empty.Count == 1 ? "stratum" : "strata")} (no subject of the population): {string.Join("; ", empty)}."
+            : string.Empty,
+        NoteKind.SingleSubjectStrata => note.List<string>("strata") is var single
+            ? $"{(single.Count == 1 ? "Stratum" : "Strata")} with one subject in the population: {string.Join("; ", single)}."
+            : string.Empty,
+        NoteKind.DroppedStratum => (int)note.Number("subjects") is var n && n == 0
+            ? $"{note.Subject.Arm} vs {note.Subject.Control}: stratum {string.Join(" / ", note.Subject.Stratum ?? [])} has no subjects in these two arms and was left out."
+            : $"{note.Subject.Arm} vs {note.Subject.Control}: stratum {string.Join(" / ", note.Subject.Stratum ?? [])} ({(n == 1 ? "1 subject" : $"{n} subjects")}) has no subjects of {note.Text("withoutArm")} and was left out.",
         NoteKind.StratumAddsNothing => $"{note.Subject.Arm} vs {note.Subject.Control}, {note.Subject.What}: stratum {Stratum(note.Subject)} {StratumReason(note.Text("reason"))} and adds nothing to the test.",
         NoteKind.NoHazardRatio => $"{note.Subject.Arm} vs {note.Subject.Control}: the Cox model gives no hazard ratio: {note.Text("reason")}.",
         NoteKind.SmallExpectedCounts => string.Create(CultureInfo.InvariantCulture,
-            $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected counts are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
+            $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected {(note.Flag("ofCells") ? "cell counts" : "counts")} are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
         NoteKind.TestNotEstimable => $"{Subject(note.Subject)}{note.Text("method")} not estimable: {note.Text("reason")}.",
         NoteKind.MethodRemark => Subject(note.Subject) + note.Text("text"),
         NoteKind.NotEstimable => $"NE (not estimable) in \"{rowLabel(note.Subject.Row!)}\", column {note.Subject.Column}: {note.Text("reason")}.",
@@ -71,8 +102,25 @@ public static class NoteWording
         _ => throw new ArgumentOutOfRangeException(nameof(code), code, "unknown stratum reason"),
     };
 
-    private static string NoStratumValue(int subjects, IReadOnlyList<string> variables) =>
-        $"{subjects} subject{(subjects == 1 ? " has" : "s have")} no value of {string.Join(", ", variables)} and {(subjects == 1 ? "is" : "are")} left out of the whole table.";
+    private static string NoStratumValue(int subjects, IReadOnlyList<string> variables, string? leftOutOf)
+    {
+        var (names, what) = leftOutOf == "stratified-analysis"
+            ? (string.Join(" / ", variables), "the stratified analysis")
+            : (string.Join(", ", variables), "the whole table");
+        return $"{subjects} subject{(subjects == 1 ? " has" : "s have")} no value of {names} and {(subjects == 1 ? "is" : "are")} left out of {what}.";
+    }
+
+    private static string UnstratifiedTest(ResultNote note)
+    {
+        if (!note.Flag("automatic"))
+            return $"Two-sided p-value from {note.Text("method")}, unstratified.";
+        var methods = note.List<string>("methods");
+        var used = methods.Distinct(StringComparer.Ordinal).ToList();
+        var detail = used.Count == 1
+            ? $"; {used[0]} was used for every comparison"
+            : "; " + string.Join("; ", methods.Zip(note.List<string>("arms"), (method, arm) => $"{method} for {arm} vs {note.Text("control")}"));
+        return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
+    }
 
     /// <summary>Where a count is taken: "any arm", "all arms combined" or the arm named.</summary>
     private static string Place(string where) => where switch

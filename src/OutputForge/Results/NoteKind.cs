@@ -46,13 +46,39 @@ public enum NoteKind
     LogRankTest,
     /// <summary>The Cox model hazard ratio. Values: strata, control, ties, level, cumulative.</summary>
     CoxHazardRatio,
-    /// <summary>Subjects without a value of a stratification variable, left out. Values: subjects, variables.</summary>
+    /// <summary>Subjects without a value of a stratification variable, left out (of the whole table, or with leftOutOf "stratified-analysis" of that analysis). Values: subjects, variables, leftOutOf.</summary>
     NoStratumValue,
     /// <summary>A stratum (subject: its values) that adds nothing to a stratified method. Values: reason ("one-group-only", "no-events").</summary>
     StratumAddsNothing,
     /// <summary>The Cox model gives no hazard ratio for a comparison. Values: reason.</summary>
     NoHazardRatio,
-    /// <summary>Expected counts below 5 in a chi-square test (Cochran 1954). Values: below, cells, smallest.</summary>
+    /// <summary>The interval of each arm's proportion of responders. Values: method, level.</summary>
+    ProportionInterval,
+    /// <summary>The difference in proportions and its interval. Values: method, level, control.</summary>
+    DifferenceInterval,
+    /// <summary>The unstratified test of each arm against the control. Values: method; or automatic with methods and arms (parallel lists) and control.</summary>
+    UnstratifiedTest,
+    /// <summary>What N and the percentages of a responder table are, by its missing-data rule. Values: population, missing, dataset, derivation.</summary>
+    ResponderDenominators,
+    /// <summary>The stratified common difference. Values: scoreInterval (stratified Miettinen-Nurminen rather than Mantel-Haenszel with Sato's variance), control, level.</summary>
+    StratifiedDifference,
+    /// <summary>The Cochran-Mantel-Haenszel test. Values: corrected, control.</summary>
+    CmhTest,
+    /// <summary>The Breslow-Day test of equal odds ratios.</summary>
+    HomogeneityTest,
+    /// <summary>The relative risk. Values: stratified, control, level.</summary>
+    RelativeRisk,
+    /// <summary>The odds ratio. Values: stratified, method (the interval's), control, level.</summary>
+    OddsRatio,
+    /// <summary>What the strata are. Values: variables.</summary>
+    StrataDefinition,
+    /// <summary>Combinations of the stratification values without a subject of the population. Values: strata.</summary>
+    EmptyStrata,
+    /// <summary>Strata with one subject in the population. Values: strata.</summary>
+    SingleSubjectStrata,
+    /// <summary>A stratum (subject: its values, and the comparison) left out because it lacks subjects of one or both arms. Values: subjects; withoutArm when it has subjects of one arm.</summary>
+    DroppedStratum,
+    /// <summary>Expected counts below 5 in a chi-square test (Cochran 1954). Values: below, cells, smallest; ofCells (a 2 x 2 comparison's wording, "expected cell counts").</summary>
     SmallExpectedCounts,
     /// <summary>A test gave no result. Values: method, reason.</summary>
     TestNotEstimable,
