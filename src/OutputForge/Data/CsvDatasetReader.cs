@@ -157,6 +157,12 @@ public static class CsvDatasetReader
                     continue;
                 }
                 var utf8 = reader.GetSpan(c);
+                if (utf8.Length == 1 && utf8[0] == (byte)'.')
+                {
+                    // "." alone is the missing value of transport-file dumps (docs/spec-reference.md, "Data formats").
+                    columns[c].AddMissing();
+                    continue;
+                }
                 if (columns[c].TryAddCanonical(utf8))
                 {
                     continue;

@@ -91,7 +91,16 @@ public sealed class StudyData
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
                 DatasetFileScope.Check(path, folder, options.ReadableFolders);
-                opened[i] = CsvFileParts.Open(name, path, options);
+                if (DatasetFiles.IsCsv(fileName))
+                {
+                    opened[i] = CsvFileParts.Open(name, path, options);
+                }
+                else
+                {
+                    // XPT and Dataset-JSON files are read whole here, streamed, on this file's core.
+                    var warnings = new List<string>();
+                    outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add), warnings, null);
+                }
             }
             catch (Exception e)
             {

@@ -156,7 +156,7 @@ internal static class SpecFileReader
             case "type":
                 return source.Problem(pointer, $"expected {Describe(keywordNode)}: {message}");
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal):
-                return source.Problem(pointer, "expected a CSV file name in the data folder (no folders), ending in .csv");
+                return source.Problem(pointer, "expected a data file name in the data folder (no folders), ending in .csv, .xpt, .json or .ndjson");
             default:
                 return source.Problem(pointer, message);
         }

@@ -121,6 +121,11 @@ public static class BadInputCases
 
     public static IEnumerable<BadInputCase> All()
     {
+        foreach (var item in DataFormatBadInputCases.All())
+        {
+            yield return item;
+        }
+
         // JSON syntax
         yield return T("table: missing closing brace", "  }\n}", "  }\n", "invalid JSON");
         yield return T("table: text after the end", "  }\n}", "  }\n}\nmore", "invalid JSON");
@@ -152,7 +157,7 @@ public static class BadInputCases
         yield return T("id with a slash", "\"id\": \"1\"", "\"id\": \"a/b\"", "$.id");
         yield return T("id with a device name character", "\"id\": \"1\"", "\"id\": \"1:2\"", "$.id");
         yield return S("dataset file in another folder", "\"adsl\": \"adsl.csv\"", "\"adsl\": \"../adsl.csv\"", "$.data.datasets.adsl", "no folders");
-        yield return S("dataset file not csv", "\"adsl\": \"adsl.csv\"", "\"adsl\": \"adsl.xpt\"", "$.data.datasets.adsl", "ending in .csv");
+        yield return S("dataset file of an unknown format", "\"adsl\": \"adsl.csv\"", "\"adsl\": \"adsl.sas7bdat\"", "$.data.datasets.adsl", "ending in .csv, .xpt, .json or .ndjson");
         yield return S("dataset name in upper case", "\"adeff\": \"adeff.csv\"", "\"ADEFF\": \"adeff.csv\"", "$.data.datasets");
         yield return T("kind misspelt", "\"kind\": \"responders\"", "\"kind\": \"responder\"", "$.kind", "expected one of \"responders\"");
         yield return T("proportion method misspelt", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"statistics\": { \"proportionInterval\": \"wilsn\" },", "$.statistics.proportionInterval", "\"wilson\"");
