@@ -76,6 +76,21 @@ public static class NoteWording
             : $"{note.Subject.Arm} vs {note.Subject.Control}: stratum {string.Join(" / ", note.Subject.Stratum ?? [])} ({(n == 1 ? "1 subject" : $"{n} subjects")}) has no subjects of {note.Text("withoutArm")} and was left out.",
         NoteKind.StratumAddsNothing => $"{note.Subject.Arm} vs {note.Subject.Control}, {note.Subject.What}: stratum {Stratum(note.Subject)} {StratumReason(note.Text("reason"))} and adds nothing to the test.",
         NoteKind.NoHazardRatio => $"{note.Subject.Arm} vs {note.Subject.Control}: the Cox model gives no hazard ratio: {note.Text("reason")}.",
+        NoteKind.SubgroupCounts => note.Flag("nonResponders")
+            ? $"n/N (%) = responders / subjects of the {note.Text("population")} in the arm and subgroup; subjects with no assessment are counted as non-responders. Endpoint: {note.Text("endpoint")}."
+            : $"n/N (%) = responders / subjects evaluated in the arm and subgroup; subjects with no assessment are excluded. Endpoint: {note.Text("endpoint")}.",
+        NoteKind.SubgroupEffect => SubgroupEffect(note),
+        NoteKind.SubgroupInteraction => note.Text("method") switch
+        {
+            "breslow-day" => $"Breslow-Day test of homogeneity of the odds ratios (arm vs {note.Text("control")}) across the levels of the subgroup variable.",
+            "breslow-day-tarone" => $"Breslow-Day test with Tarone's correction of homogeneity of the odds ratios (arm vs {note.Text("control")}) across the levels of the subgroup variable.",
+            _ => $"Treatment-by-subgroup interaction: likelihood-ratio test of logistic regression models response ~ arm + subgroup + arm:subgroup vs response ~ arm + subgroup, fitted to the subjects of the arm and {note.Text("control")}; no p-value under separation or non-convergence (reason under Warning).",
+        },
+        NoteKind.SubgroupLevels => "Subgroup levels: " + string.Join("; ", note.List<string>("labels").Zip(note.List<string>("variables"), note.List<string>("orders"))
+            .Select(v => $"{v.First} ({v.Second}), {v.Third switch { "spec" => "levels in the order of the spec", "alphabetical" => "levels in alphabetical order", var by => $"levels ordered by {by}" }}")) + ".",
+        NoteKind.InNoSubgroup => InNoSubgroup(note),
+        NoteKind.EffectNotEstimated => $"{Subject(note.Subject)}{Measure(note.Text("measure"))} not estimated: {note.Text("reason")}.",
+        NoteKind.NoPValue => $"{Subject(note.Subject)}no p-value: {note.Text("reason")}.",
         NoteKind.SmallExpectedCounts => string.Create(CultureInfo.InvariantCulture,
             $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected {(note.Flag("ofCells") ? "cell counts" : "counts")} are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
         NoteKind.TestNotEstimable => $"{Subject(note.Subject)}{note.Text("method")} not estimable: {note.Text("reason")}.",
@@ -84,6 +99,36 @@ public static class NoteWording
         NoteKind.Text => Subject(note.Subject) + note.Text("text"),
         _ => throw new ArgumentOutOfRangeException(nameof(note), note.Kind, "a note kind without wording"),
     };
+
+    private static string Measure(string measure) => measure switch
+    {
+        "odds-ratio" => "odds ratio",
+        "relative-risk" => "relative risk",
+        _ => "difference",
+    };
+
+    private static string SubgroupEffect(ResultNote note)
+    {
+        var control = note.Text("control");
+        var measure = note.Text("measure") switch
+        {
+            "odds-ratio" => $"Odds ratio of response (arm vs {control}) with the Woolf (logit) {Level(note)} confidence interval; not estimable when a cell of the 2 x 2 table is zero.",
+            "relative-risk" => $"Relative risk of response (arm vs {control}) with the Katz (log) {Level(note)} confidence interval; not estimable when an arm has no responders.",
+            _ => $"Difference in proportions of responders (arm minus {control}), in percentage points, with the {note.Text("method")} {Level(note)} confidence interval.",
+        };
+        return string.Create(CultureInfo.InvariantCulture,
+            $"{measure} NE where an arm compared has fewer than {note.Number("minimum")} subjects in the subgroup, or where the method gives no estimate (reason under Warning).");
+    }
+
+    private static string InNoSubgroup(ResultNote note)
+    {
+        var n = (int)note.Number("subjects");
+        var (name, label) = (note.Subject.Parameter, note.Subject.What);
+        var unlisted = note.List<string>("unlistedValues");
+        return unlisted.Count == 0
+            ? $"{n} subject{(n == 1 ? " has" : "s have")} no value of {name} and {(n == 1 ? "is" : "are")} in no {label} subgroup."
+            : $"{n} subject{(n == 1 ? " has" : "s have")} a value of {name} that the spec does not list ({string.Join(", ", unlisted.Select(v => $"'{v}'"))}) and {(n == 1 ? "is" : "are")} in no {label} subgroup.";
+    }
 
     private static string Level(ResultNote note) => LevelText.Of(note.Number("level"));
 

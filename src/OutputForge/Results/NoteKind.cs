@@ -78,6 +78,20 @@ public enum NoteKind
     SingleSubjectStrata,
     /// <summary>A stratum (subject: its values, and the comparison) left out because it lacks subjects of one or both arms. Values: subjects; withoutArm when it has subjects of one arm.</summary>
     DroppedStratum,
+    /// <summary>What n/N (%) of a subgroup table are. Values: nonResponders (the missing-data rule), population, endpoint.</summary>
+    SubgroupCounts,
+    /// <summary>The effect of each arm vs the control within a subgroup, and when it is NE. Values: measure ("difference", "odds-ratio", "relative-risk"), method, control, level, minimum.</summary>
+    SubgroupEffect,
+    /// <summary>The treatment-by-subgroup interaction test. Values: method ("likelihood-ratio", "breslow-day", "breslow-day-tarone"), control.</summary>
+    SubgroupInteraction,
+    /// <summary>How the levels of each subgroup variable are ordered. Values: labels, variables, orders ("spec", "alphabetical" or the ordering variable; parallel lists).</summary>
+    SubgroupLevels,
+    /// <summary>Subjects in no subgroup of a variable (subject: its label and name). Values: subjects; unlistedValues when they have values the spec does not list.</summary>
+    InNoSubgroup,
+    /// <summary>A subgroup's effect was not estimated. Values: measure, reason.</summary>
+    EffectNotEstimated,
+    /// <summary>A test gave no p-value. Values: reason.</summary>
+    NoPValue,
     /// <summary>Expected counts below 5 in a chi-square test (Cochran 1954). Values: below, cells, smallest; ofCells (a 2 x 2 comparison's wording, "expected cell counts").</summary>
     SmallExpectedCounts,
     /// <summary>A test gave no result. Values: method, reason.</summary>

@@ -1,5 +1,6 @@
 using OutputForge.Analysis;
 using OutputForge.Kinds.Responders;
+using OutputForge.Results;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Subgroups;
@@ -32,11 +33,8 @@ internal sealed record SubgroupMeasure(string Name, string Label, string Method,
         _ => ProportionDifferenceInterval.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, DifferenceMethod, Level),
     };
 
-    /// <summary>The footnote describing the measure.</summary>
-    public string Note(string controlLabel, string levelText) => Name switch
-    {
-        "odds-ratio" => $"Odds ratio of response (arm vs {controlLabel}) with the Woolf (logit) {levelText} confidence interval; not estimable when a cell of the 2 x 2 table is zero.",
-        "relative-risk" => $"Relative risk of response (arm vs {controlLabel}) with the Katz (log) {levelText} confidence interval; not estimable when an arm has no responders.",
-        _ => $"Difference in proportions of responders (arm minus {controlLabel}), in percentage points, with the {Method} {levelText} confidence interval.",
-    };
+    /// <summary>The footnote describing the measure, and when a subgroup's effect is NE.</summary>
+    public ResultNote Note(string id, string controlLabel, int minimumPerArm) =>
+        ResultNote.Footnote(id, NoteKind.SubgroupEffect, ("measure", Name), ("method", Method), ("control", controlLabel), ("level", Level),
+            ("minimum", minimumPerArm));
 }
