@@ -25,9 +25,9 @@ public static class NoteWording
         NoteKind.SeverityRows => $"Severity rows: each subject is counted once per row, at the maximum severity of its events in that row ({string.Join(" < ", note.List<string>("levels"))}){(note.Flag("withEvents") ? "; [E] is given on the rows above them only" : string.Empty)}.",
         NoteKind.EventsCounted => $"Events counted: {note.Text("condition")}.",
         NoteKind.TermThreshold => string.Create(CultureInfo.InvariantCulture,
-            $"Preferred terms reported by at least {note.Number("percent"):0.###}% of subjects in {Place(note.Text("in"))}; a system organ class row counts all of its events, including terms not shown."),
-        NoteKind.RowOrder => note.OptionalText("byFrequencyIn") is { } column
-            ? $"Sorted by decreasing number of subjects in {(column == "total" ? "all arms combined" : column)}, then alphabetically."
+            $"Preferred terms reported by at least {note.Number("percent"):0.###}% of subjects in {Place(note.Text("place"), note.Text("arm"))}; a system organ class row counts all of its events, including terms not shown."),
+        NoteKind.RowOrder => note.OptionalText("place") is { } place
+            ? $"Sorted by decreasing number of subjects in {Place(place, note.Text("arm"))}, then alphabetically."
             : "Sorted alphabetically.",
         NoteKind.VisitDenominators => $"N = number of subjects in the {note.Text("population")}; n = subjects with a value. Values are summarized over the subjects with a record at the visit.",
         NoteKind.AncovaModel => Ancova(note),
@@ -168,11 +168,11 @@ public static class NoteWording
     }
 
     /// <summary>Where a count is taken: "any arm", "all arms combined" or the arm named.</summary>
-    private static string Place(string where) => where switch
+    private static string Place(string place, string arm) => place switch
     {
         "any-arm" => "any arm",
         "total" => "all arms combined",
-        _ => where,
+        _ => arm,
     };
 
     /// <summary>"Age (years): ", "Nausea, QF-217 10 mg vs Placebo: ": what the note is about, then the comparison.</summary>

@@ -22,9 +22,9 @@ public enum NoteKind
     SeverityRows,
     /// <summary>The condition selecting the events counted. Values: condition.</summary>
     EventsCounted,
-    /// <summary>The threshold a preferred term must reach to be shown. Values: percent, in ("any-arm", "total" or an arm).</summary>
+    /// <summary>The threshold a preferred term must reach to be shown. Values: percent, place ("any-arm", "total" or "arm"), arm (the arm's value when place is "arm").</summary>
     TermThreshold,
-    /// <summary>The order of the rows. Values: byFrequencyIn ("total" or an arm) when by frequency, none when alphabetical.</summary>
+    /// <summary>The order of the rows. Values: place ("total" or "arm") and arm when by frequency; none when alphabetical.</summary>
     RowOrder,
     /// <summary>What N and n of a by-visit summary are. Values: population.</summary>
     VisitDenominators,

@@ -37,7 +37,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         var records = AdverseEventRecords.Read(study, table, data, selection, warnings);
         var columns = SummaryColumns.For(selection, study, settings.Total);
         var control = selection.Control;
-        var active = settings.Test == "fisher" ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
+        var active = settings.Test == SummaryTest.Fisher ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
         var resultColumns = SummaryColumns.ToResultColumns(columns);
         resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value", null) { NoteRefs = [PairwiseTestNote] }));
         var context = new RowContext(settings, columns, selection, active, control,
@@ -96,20 +96,21 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
     /// <summary>The arms whose count orders rows by frequency: one arm, or all of them ("total").</summary>
     private static IReadOnlySet<TreatmentArm> SortColumn(AdverseEventsSettings settings, PopulationSelection selection, SpecSource source)
     {
-        if (settings.Sort.Column == ResultKeys.Total)
+        var column = settings.Sort.Column;
+        if (column.Kind == ArmChoiceKind.Total)
         {
             return selection.Arms.ToHashSet();
         }
-        var arm = selection.Arms.FirstOrDefault(a => a.Value == settings.Sort.Column) ?? throw new SpecException(source.Problem("/adverseEvents/sort/column",
-            $"'{settings.Sort.Column}' is neither 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(settings.Sort.Column, selection.Arms.Select(a => a.Value).ToList())}"));
+        var arm = selection.Arms.FirstOrDefault(a => a.Value == column.Text) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, "/adverseEvents/sort/column",
+            $"'{column.Text}' is neither 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(column.Text, selection.Arms.Select(a => a.Value).ToList())}"));
         return new HashSet<TreatmentArm> { arm };
     }
 
     private static IEnumerable<T> Sorted<T>(IEnumerable<T> items, Func<T, string> name, Func<T, List<AdverseEventRecord>> records,
-        string by, IReadOnlySet<TreatmentArm> arms)
+        LevelSorting by, IReadOnlySet<TreatmentArm> arms)
     {
         var byName = StringComparer.OrdinalIgnoreCase;
-        return by == "frequency"
+        return by == LevelSorting.Frequency
             ? items.OrderByDescending(i => records(i).Where(r => arms.Contains(r.Arm)).Select(r => r.Subject).Distinct(StringComparer.Ordinal).Count())
                 .ThenBy(name, byName).ThenBy(name, StringComparer.Ordinal)
             : items.OrderBy(name, byName).ThenBy(name, StringComparer.Ordinal);
@@ -132,14 +133,14 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             var denominator = arms.Sum(selection.Count);
             return denominator > 0 && 100m * n >= (decimal)threshold.Percent * denominator;
         }
-        return threshold.In switch
+        return threshold.In.Kind switch
         {
-            "any-arm" => selection.Arms.Any(a => Meets(new HashSet<TreatmentArm> { a })),
-            "total" => Meets(selection.Arms.ToHashSet()),
+            ArmChoiceKind.AnyArm => selection.Arms.Any(a => Meets(new HashSet<TreatmentArm> { a })),
+            ArmChoiceKind.Total => Meets(selection.Arms.ToHashSet()),
             _ => Meets(new HashSet<TreatmentArm>
             {
-                selection.Arms.FirstOrDefault(a => a.Value == threshold.In) ?? throw new SpecException(source.Problem("/adverseEvents/threshold/in",
-                    $"'{threshold.In}' is neither 'any-arm', 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(threshold.In, selection.Arms.Select(a => a.Value).ToList())}")),
+                selection.Arms.FirstOrDefault(a => a.Value == threshold.In.Text) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, "/adverseEvents/threshold/in",
+                    $"'{threshold.In.Text}' is neither 'any-arm', 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(threshold.In.Text, selection.Arms.Select(a => a.Value).ToList())}")),
             }),
         };
     }
@@ -167,13 +168,22 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         }
         if (settings.Threshold is { } threshold)
         {
-            notes.Add(ResultNote.Footnote("threshold", NoteKind.TermThreshold, ("percent", threshold.Percent), ("in", threshold.In)));
+            notes.Add(ResultNote.Footnote("threshold", NoteKind.TermThreshold, ("percent", threshold.Percent),
+                ("place", PlaceOf(threshold.In)), ("arm", threshold.In.Text)));
         }
-        notes.Add(settings.Sort.By == "frequency"
-            ? ResultNote.Footnote("order", NoteKind.RowOrder, ("byFrequencyIn", settings.Sort.Column))
+        notes.Add(settings.Sort.By == LevelSorting.Frequency
+            ? ResultNote.Footnote("order", NoteKind.RowOrder, ("place", PlaceOf(settings.Sort.Column)), ("arm", settings.Sort.Column.Text))
             : ResultNote.Footnote("order", NoteKind.RowOrder));
         return notes;
     }
+
+    /// <summary>Where a count is taken, as a note says it: "any-arm", "total" or "arm" (the arm then in the note's "arm").</summary>
+    private static string PlaceOf(ArmChoice choice) => choice.Kind switch
+    {
+        ArmChoiceKind.AnyArm => "any-arm",
+        ArmChoiceKind.Total => "total",
+        _ => "arm",
+    };
 
     /// <summary>Builds a row (and its severity rows) from the records it counts.</summary>
     private sealed class RowContext(AdverseEventsSettings settings, IReadOnlyList<SummaryColumn> columns, PopulationSelection selection,

@@ -21,7 +21,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
             .AddCondition(endpoint.Dataset, endpoint.Response)
             .Add(VariableReads.SubjectLevel, table.Settings<ResponderSettings>().Stratified?.Strata ?? []);
         // Observed cases count the records the dataset derived, where it marks them.
-        return endpoint.Missing == "observed" ? reads.AddOptional(endpoint.Dataset, ObservedCases.DerivationVariable) : reads;
+        return endpoint.Missing == MissingResponse.Observed ? reads.AddOptional(endpoint.Dataset, ObservedCases.DerivationVariable) : reads;
     }
 
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
@@ -31,8 +31,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         var selection = PopulationSelection.Select(study, table, data);
         var records = EndpointRecords.Select(table, data);
         var response = records.CompileResponse(table);
-        var missingAreNonResponders = endpoint.Missing == "non-responder";
-        var observedCases = endpoint.Missing == "observed";
+        var missingAreNonResponders = endpoint.Missing == MissingResponse.NonResponder;
+        var observedCases = endpoint.Missing == MissingResponse.Observed;
 
         var counts = selection.Arms.ToDictionary(a => a, a => Count(selection.ArmOfSubject, a, records, response, missingAreNonResponders));
         var columns = selection.Arms.Select(a => new ResultColumn(a.Key, a.Label, selection.Count(a))).ToList();
@@ -44,8 +44,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
             columnCounts.Add((ResultKeys.Total, total));
         }
 
-        var proportionMethod = MethodCatalog.ProportionMethod(statistics.ProportionInterval);
-        var differenceMethod = MethodCatalog.DifferenceMethod(statistics.DifferenceInterval);
+        var proportionMethod = statistics.ProportionInterval;
+        var differenceMethod = statistics.DifferenceInterval;
         var level = statistics.Level;
         var decimals = statistics.PercentDecimals;
         var control = selection.Control;
@@ -111,7 +111,12 @@ public sealed class ResponderAnalysis : ITableAnalysis
         };
         notes.AddRange(extra?.Notes ?? []);
         notes.Add(ResultNote.Footnote("denominators", NoteKind.ResponderDenominators, ("population", selection.Label),
-            ("missing", endpoint.Missing), ("dataset", endpoint.Dataset), ("derivation", ObservedCases.DerivationVariable)));
+            ("missing", endpoint.Missing switch
+            {
+                MissingResponse.NonResponder => "non-responder",
+                MissingResponse.Observed => "observed",
+                _ => "exclude",
+            }), ("dataset", endpoint.Dataset), ("derivation", ObservedCases.DerivationVariable)));
         var warnings = new List<ResultNote>();
         warnings.AddRange(extra?.Warnings ?? []);
         warnings.AddRange(SmallCountWarnings(comparisons, statistics.Test, control));
@@ -135,8 +140,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         }
         var control = selection.Control;
         var actives = selection.Arms.Where(a => !a.IsControl).ToList();
-        var withRelativeRisk = settings.Ratios.Contains("relative-risk");
-        OddsRatioIntervalMethod? oddsMethod = settings.Ratios.Contains("odds-ratio") ? OddsRatioIntervalMethods.Parse(settings.OddsRatioInterval) : null;
+        var withRelativeRisk = settings.Ratios.Contains(RatioMeasure.RelativeRisk);
+        OddsRatioIntervalMethod? oddsMethod = settings.Ratios.Contains(RatioMeasure.OddsRatio) ? settings.OddsRatioInterval : null;
         ResponderStrata? strata = null;
         var stratified = new List<StratifiedComparison>();
         var population = new Dictionary<string, int>(StringComparer.Ordinal);
@@ -212,25 +217,25 @@ public sealed class ResponderAnalysis : ITableAnalysis
                 : CellFactory.Empty(column.Key)).ToList());
 
     /// <summary>The unstratified test's footnote: the test the spec names, or (with "auto") the test each comparison used.</summary>
-    private static ResultNote TestNote(IReadOnlyList<ResponderComparison> comparisons, string choice, TreatmentArm control) =>
-        choice != "auto"
+    private static ResultNote TestNote(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control) =>
+        choice != TableTest.Auto
             ? ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("method", NamedTest(choice)))
             : ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("automatic", true),
                 ("methods", comparisons.Select(c => c.Test.Method).ToList()), ("arms", comparisons.Select(c => c.Arm.Label).ToList()),
                 ("control", control.Label));
 
-    private static string NamedTest(string choice) => choice switch
+    private static string NamedTest(TableTest choice) => choice switch
     {
-        "fisher" => "Fisher's exact test",
-        "yates" => "Pearson's chi-square test with Yates' continuity correction",
-        "likelihood-ratio" => "the likelihood-ratio chi-square test",
+        TableTest.Fisher => "Fisher's exact test",
+        TableTest.Yates => "Pearson's chi-square test with Yates' continuity correction",
+        TableTest.LikelihoodRatio => "the likelihood-ratio chi-square test",
         _ => "Pearson's chi-square test",
     };
 
-    private static IEnumerable<ResultNote> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, string choice, TreatmentArm control)
+    private static IEnumerable<ResultNote> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
     {
         // Every large-sample test the spec forces gets Cochran's caution; "auto" switches to Fisher instead.
-        if (choice is "auto" or "fisher")
+        if (choice is TableTest.Auto or TableTest.Fisher)
         {
             yield break;
         }

@@ -32,7 +32,7 @@ public sealed class StratifiedAndRatioRows
             result._rows.Add(new ResultRow("stratified", $"Stratified by {string.Join(" and ", strata.Variables)}", 1,
                 columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
             var spec = settings.Stratified!;
-            var mn = spec.Difference == "miettinen-nurminen";
+            var mn = spec.Difference == StratifiedDifference.MiettinenNurminen;
             var differenceMethod = mn ? StratifiedMiettinenNurminen.MethodName : "Mantel-Haenszel, Sato variance";
             var d = ResponderNotes.StratifiedDifference;
             result._rows.Add(Row("stratified-difference", "Difference in proportions, %", indent, columns, stratified,
@@ -43,7 +43,7 @@ public sealed class StratifiedAndRatioRows
             var e = ResponderNotes.Cmh;
             result._rows.Add(Row("cmh-p-value", "CMH p-value", indent, columns, stratified, c => WithStrata(CellFactory.PValueOf(c.Arm.Key, c.Test), c.StrataUsed))
                 with { NoteRefs = [e] });
-            result._notes.Add(ResultNote.Footnote(e, NoteKind.CmhTest, ("corrected", spec.Test == "cmh-corrected"), ("control", control.Label)));
+            result._notes.Add(ResultNote.Footnote(e, NoteKind.CmhTest, ("corrected", spec.Test == StratifiedTest.CmhCorrected), ("control", control.Label)));
             if (spec.Homogeneity)
             {
                 var f = ResponderNotes.Homogeneity;
@@ -52,9 +52,9 @@ public sealed class StratifiedAndRatioRows
                 result._notes.Add(ResultNote.Footnote(f, NoteKind.HomogeneityTest));
             }
         }
-        var oddsMethod = OddsRatioIntervalMethods.Parse(settings.OddsRatioInterval);
+        var oddsMethod = settings.OddsRatioInterval;
         var ratioDecimals = settings.RatioDecimals;
-        if (settings.Ratios.Contains("relative-risk"))
+        if (settings.Ratios.Contains(RatioMeasure.RelativeRisk))
         {
             var g = ResponderNotes.RelativeRisk;
             var method = strata is null ? "Katz log" : "Mantel-Haenszel, Greenland-Robins";
@@ -64,7 +64,7 @@ public sealed class StratifiedAndRatioRows
                 with { Level = level, NoteRefs = [g] });
             result._notes.Add(ResultNote.Footnote(g, NoteKind.RelativeRisk, ("stratified", ofStrata), ("control", control.Label), ("level", level)));
         }
-        if (settings.Ratios.Contains("odds-ratio"))
+        if (settings.Ratios.Contains(RatioMeasure.OddsRatio))
         {
             var h = ResponderNotes.OddsRatio;
             var describe = OddsRatioIntervalMethods.Describe(oddsMethod, strata is not null);

@@ -42,7 +42,7 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         var selection = PopulationSelection.Select(study, table, data);
         var records = EndpointRecords.Select(table, data);
         var response = records.CompileResponse(table);
-        var missingAreNonResponders = endpoint.Missing == "non-responder";
+        var missingAreNonResponders = endpoint.Missing == MissingResponse.NonResponder;
         var measure = SubgroupMeasure.From(settings.Measure, statistics.DifferenceInterval, statistics.Level, statistics.PercentDecimals, settings.RatioDecimals);
         var level = MethodCatalog.LevelText(statistics.Level);
         var control = selection.Control;
@@ -80,7 +80,7 @@ public sealed class SubgroupAnalysis : ITableAnalysis
                 warnings.AddRange(effect.Notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark, what, ("text", n))));
                 if (!effect.IsEstimable)
                 {
-                    warnings.Add(ResultNote.Warning(NoteKind.EffectNotEstimated, what, ("measure", measure.Name), ("reason", effect.NotEstimableReason!)));
+                    warnings.Add(ResultNote.Warning(NoteKind.EffectNotEstimated, what, ("measure", measure.Code), ("reason", effect.NotEstimableReason!)));
                 }
             }
             plot.Add(new ForestPlotRow(label, indent, effects));
@@ -111,7 +111,12 @@ public sealed class SubgroupAnalysis : ITableAnalysis
             ResultNote.Footnote("counts", NoteKind.SubgroupCounts, ("nonResponders", missingAreNonResponders), ("population", selection.Label),
                 ("endpoint", endpoint.Label ?? endpoint.Response!)),
             measure.Note(EffectNote, control.Label, settings.MinimumPerArm),
-            ResultNote.Footnote(InteractionNote, NoteKind.SubgroupInteraction, ("method", settings.Interaction), ("control", control.Label)),
+            ResultNote.Footnote(InteractionNote, NoteKind.SubgroupInteraction, ("method", settings.Interaction switch
+            {
+                InteractionTest.BreslowDay => "breslow-day",
+                InteractionTest.BreslowDayTarone => "breslow-day-tarone",
+                _ => "likelihood-ratio",
+            }), ("control", control.Label)),
             ResultNote.Footnote("levels", NoteKind.SubgroupLevels, ("labels", variables.Select(v => v.Label).ToList()),
                 ("variables", variables.Select(v => v.Name).ToList()), ("orders", variables.Select(v => v.Order).ToList())),
         };
@@ -153,7 +158,7 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         return measure.Compute(active, control);
     }
 
-    private static ResultRow InteractionRow(SubgroupVariable variable, string variableKey, string method, PopulationSelection selection,
+    private static ResultRow InteractionRow(SubgroupVariable variable, string variableKey, InteractionTest method, PopulationSelection selection,
         EndpointRecords records, Expressions.Condition response, bool missingAreNonResponders, IReadOnlyList<ResultColumn> columns,
         IReadOnlyList<TreatmentArm> active, TreatmentArm control, List<ResultNote> warnings)
     {
