@@ -161,9 +161,9 @@ public static class NoteWording
             return $"Two-sided p-value from {note.Text("method")}, unstratified.";
         var methods = note.List<string>("methods");
         var used = methods.Distinct(StringComparer.Ordinal).ToList();
-        var detail = used.Count == 1
+        var detail = used.Count == 1 && note.Flag("allTested")
             ? $"; {used[0]} was used for every comparison"
-            : "; " + string.Join("; ", methods.Zip(note.List<string>("arms"), (method, arm) => $"{method} for {arm} vs {note.Text("control")}"));
+            : string.Concat(methods.Zip(note.List<string>("arms"), (method, arm) => $"; {method} for {arm} vs {note.Text("control")}"));
         return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
     }
 

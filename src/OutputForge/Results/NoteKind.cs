@@ -56,7 +56,7 @@ public enum NoteKind
     ProportionInterval,
     /// <summary>The difference in proportions and its interval. Values: method, level, control.</summary>
     DifferenceInterval,
-    /// <summary>The unstratified test of each arm against the control. Values: method; or automatic with methods and arms (parallel lists) and control.</summary>
+    /// <summary>The unstratified test of each arm against the control. Values: method; or automatic with methods and arms of the comparisons tested (parallel lists), allTested and control.</summary>
     UnstratifiedTest,
     /// <summary>What N and the percentages of a responder table are, by its missing-data rule. Values: population, missing, dataset, derivation.</summary>
     ResponderDenominators,

@@ -35,6 +35,11 @@ internal static class SpecFileReader
         {
             throw new SpecException(new SpecProblem(file, null, null, "$", $"cannot read the spec file ({e.Message})") { Code = SpecProblemCode.UnreadableFile });
         }
+        if (bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]))
+        {
+            // A UTF-8 byte-order mark, as some editors write: accepted, as in the data files.
+            bytes = bytes[3..];
+        }
         JsonDocument document;
         try
         {
@@ -53,11 +58,19 @@ internal static class SpecFileReader
                 message = message[..cut];
             }
             throw new SpecException(new SpecProblem(file, (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1,
-                e.Path ?? "$", $"invalid JSON: {message.TrimEnd('.')}") { Code = SpecProblemCode.InvalidJson });
+                JsonPositionMap.FailurePath(bytes), $"invalid JSON: {Describe(bytes, message.TrimEnd('.'))}") { Code = SpecProblemCode.InvalidJson });
         }
         using (document)
         {
-            var source = new SpecSource(file, JsonPositionMap.Build(bytes));
+            var positions = JsonPositionMap.Build(bytes);
+            if (positions.DuplicateKeys.Count > 0)
+            {
+                // The readers keep the last of two equal keys without a word: a spec saying two things is refused.
+                throw new SpecException(positions.DuplicateKeys.Select(d => new SpecProblem(file, d.Line, d.Column,
+                    JsonPositionMap.ToJsonPath(d.Pointer),
+                    $"the key '{LastSegment(d.Pointer)}' is given twice in this object (first on line {d.FirstLine}); keep one") { Code = SpecProblemCode.InvalidJson }).ToList());
+            }
+            var source = new SpecSource(file, positions);
             var problems = SpecText.Problems(document.RootElement, source) is { Count: > 0 } text ? text : Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
@@ -76,6 +89,23 @@ internal static class SpecFileReader
                 throw new SpecException(source.Problem(PointerOf(e.Path), e.Message));
             }
         }
+    }
+
+    private static string LastSegment(string pointer) =>
+        pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
+
+    /// <summary>The parser's description of a syntax error, in the spec writer's terms where it is cryptic.</summary>
+    private static string Describe(byte[] bytes, string message)
+    {
+        if (message.Contains("maximum configured depth", StringComparison.OrdinalIgnoreCase))
+        {
+            return "the objects and arrays are nested more than 64 levels deep";
+        }
+        if (bytes.Length >= 2 && ((bytes[0] == 0xFF && bytes[1] == 0xFE) || (bytes[0] == 0xFE && bytes[1] == 0xFF)))
+        {
+            return "the file is UTF-16 encoded (it starts with a UTF-16 byte-order mark); save it as UTF-8";
+        }
+        return message;
     }
 
     /// <summary>"/statistics/test" for the reader's "$.statistics.test" (and "/tables/0" for "$.tables[0]").</summary>

@@ -75,7 +75,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 if (column.Kind != Expressions.VariableKind.Number)
                 {
                     throw new SpecException(table.Source.Problem(pointer + "/type",
-                        $"{spec.Variable} is not numeric in {Path.GetFileName(adsl.File)}, so it cannot be summarized as continuous (use \"categorical\")"));
+                        $"{spec.Variable} is not numeric in {Path.GetFileName(adsl.File)}{(column.TextEvidence is { } evidence ? $" ({evidence} is not a number)" : "")}, so it cannot be summarized as continuous (use \"categorical\")"));
                 }
                 var (continuousRows, armValues, continuousWarnings) = ContinuousSummary.Summarize(spec, settings, column, subjects,
                     selection.Arms, columns, table.Source, pointer);

@@ -216,13 +216,21 @@ public sealed class ResponderAnalysis : ITableAnalysis
                 ? cell(comparison)
                 : CellFactory.Empty(column.Key)).ToList());
 
-    /// <summary>The unstratified test's footnote: the test the spec names, or (with "auto") the test each comparison used.</summary>
-    private static ResultNote TestNote(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control) =>
-        choice != TableTest.Auto
-            ? ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("method", NamedTest(choice)))
-            : ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("automatic", true),
-                ("methods", comparisons.Select(c => c.Test.Method).ToList()), ("arms", comparisons.Select(c => c.Arm.Label).ToList()),
-                ("control", control.Label));
+    /// <summary>
+    /// The unstratified test's footnote: the test the spec names, or (with "auto") the test each comparison used; a
+    /// comparison without a p-value (NE, e.g. against an arm without subjects) used no test and is not named.
+    /// </summary>
+    private static ResultNote TestNote(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
+    {
+        if (choice != TableTest.Auto)
+        {
+            return ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("method", NamedTest(choice)));
+        }
+        var tested = comparisons.Where(c => c.Test.IsEstimable).ToList();
+        return ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("automatic", true),
+            ("methods", tested.Select(c => c.Test.Method).ToList()), ("arms", tested.Select(c => c.Arm.Label).ToList()),
+            ("allTested", tested.Count == comparisons.Count), ("control", control.Label));
+    }
 
     private static string NamedTest(TableTest choice) => choice switch
     {
