@@ -140,24 +140,30 @@ internal sealed class MmrmLikelihood
             var crossResiduals = pattern.CrossResiduals(e.Residuals);
             var d = d1.Select(pattern.Sub).ToArray();
             var b = d.Select(dj => a * dj * a).ToArray();
+            // Products formed once per parameter, so that each pair (j, l) costs only an O(m^2) trace of a product.
+            var traceMatrix = pattern.PhiTraceMatrix(phiTraces);
+            var da = d.Select(dj => dj * a).ToArray();
+            var dg = d.Select(dj => dj * g).ToArray();
+            var daT = d.Select(dj => dj * a * traceMatrix).ToArray();
             var count = pattern.SubjectCount;
             for (var j = 0; j < q; j++)
             {
-                traceAD[j] += count * (a * d[j]).Trace();
-                traceDG[j] += (d[j] * g).Trace();
+                traceAD[j] += count * TraceOfProduct(a, d[j]);
+                traceDG[j] += TraceOfProduct(d[j], g);
                 pattern.ContractXX(b[j], m[j]);
                 pattern.ContractCross(b[j], crossResiduals, xvu[j]);
                 for (var l = j; l < q; l++)
                 {
-                    traceBD[j, l] += count * (b[j] * d[l]).Trace();
-                    traceDADG[j, l] += (d[j] * a * d[l] * g).Trace();
-                    traceFPhi[j, l] += pattern.ContractTraces(b[j] * d[l] * a, phiTraces);
+                    traceBD[j, l] += count * TraceOfProduct(b[j], d[l]);
+                    traceDADG[j, l] += TraceOfProduct(da[j], dg[l]);
+                    // tr(Phi Q_jl) = sum_ab (B_j D_l A)_ab T_ab = tr(B_j D_l A T).
+                    traceFPhi[j, l] += TraceOfProduct(b[j], daT[l]);
                     if (d2 is not null)
                     {
                         var djl = pattern.Sub(d2[j, l]);
-                        traceAD2[j, l] += count * (a * djl).Trace();
-                        traceD2G[j, l] += (djl * g).Trace();
-                        traceAD2APhi[j, l] += pattern.ContractTraces(a * djl * a, phiTraces);
+                        traceAD2[j, l] += count * TraceOfProduct(a, djl);
+                        traceD2G[j, l] += TraceOfProduct(djl, g);
+                        traceAD2APhi[j, l] += TraceOfProduct(a * djl * a, traceMatrix);
                     }
                 }
             }
@@ -245,6 +251,20 @@ internal sealed class MmrmLikelihood
             }
         }
         return (qMatrices, rMatrices);
+    }
+
+    /// <summary>tr(U V) = sum_ab U_ab V_ba without forming the product.</summary>
+    private static double TraceOfProduct(Matrix<double> u, Matrix<double> v)
+    {
+        var sum = 0.0;
+        for (var a = 0; a < u.RowCount; a++)
+        {
+            for (var b = 0; b < u.ColumnCount; b++)
+            {
+                sum += u[a, b] * v[b, a];
+            }
+        }
+        return sum;
     }
 
     /// <summary>Cholesky succeeds and every pivot is clearly positive.</summary>

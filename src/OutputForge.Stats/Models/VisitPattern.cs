@@ -46,6 +46,8 @@ internal sealed class VisitPattern
         var xr = rows.Select(r => x.Row(r).ToArray()).ToArray();
         _subjects.Add(rows);
         _subjectX.Add(xr);
+        // Design rows are mostly zeros (one visit's indicators among many), so only non-zero cells are visited.
+        var nonZero = xr.Select(row => Enumerable.Range(0, p).Where(u => row[u] != 0).ToArray()).ToArray();
         for (var a = 0; a < M; a++)
         {
             for (var b = a; b < M; b++)
@@ -54,27 +56,23 @@ internal sealed class VisitPattern
                 var xy = _xy[a * M + b];
                 var xa = xr[a];
                 var xb = xr[b];
-                for (var u = 0; u < p; u++)
+                foreach (var u in nonZero[a])
                 {
-                    if (a == b)
+                    xy[u] += xa[u] * y[rows[b]];
+                    foreach (var v in nonZero[b])
                     {
-                        xy[u] += xa[u] * y[rows[b]];
-                        if (xa[u] == 0)
+                        xx[u * p + v] += xa[u] * xb[v];
+                        if (a != b)
                         {
-                            continue;
-                        }
-                        for (var v = 0; v < p; v++)
-                        {
-                            xx[u * p + v] += xa[u] * xa[v];
+                            xx[v * p + u] += xa[u] * xb[v];
                         }
                     }
-                    else
+                }
+                if (a != b)
+                {
+                    foreach (var u in nonZero[b])
                     {
-                        xy[u] += xa[u] * y[rows[b]] + xb[u] * y[rows[a]];
-                        for (var v = 0; v < p; v++)
-                        {
-                            xx[u * p + v] += xa[u] * xb[v] + xb[u] * xa[v];
-                        }
+                        xy[u] += xb[u] * y[rows[a]];
                     }
                 }
             }
@@ -162,6 +160,13 @@ internal sealed class VisitPattern
         }
         return t;
     }
+
+    /// <summary>
+    /// The m x m symmetric matrix T with T_ab = tr(Phi sum_i x_ia x_ib'), so that sum_ab C_ab T_ab =
+    /// <see cref="ContractTraces"/>(C) = tr(C T) for any C.
+    /// </summary>
+    public Matrix<double> PhiTraceMatrix(double[] phiTraces) =>
+        Matrix<double>.Build.Dense(M, M, (a, b) => a == b ? phiTraces[a * M + a] : 0.5 * phiTraces[Math.Min(a, b) * M + Math.Max(a, b)]);
 
     /// <summary>sum_ab C_ab tr(Phi sum_i x_ia x_ib') for any C, from <see cref="PhiTraces"/>.</summary>
     public double ContractTraces(Matrix<double> c, double[] phiTraces)
