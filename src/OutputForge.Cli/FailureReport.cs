@@ -44,6 +44,11 @@ public static class FailureReport
             error.WriteLine($"outputforge: error: {e.Message}");
             return ExitCodes.OutputError;
         }
+        catch (UsageException e)
+        {
+            error.WriteLine($"outputforge: error: {e.Message}");
+            return ExitCodes.Usage;
+        }
         catch (RunException e)
         {
             error.WriteLine($"outputforge: error: {e.Message}");

@@ -14,6 +14,14 @@ public sealed class LogRankStrataTests
     }
 
     [Fact]
+    public void Notes_name_a_stratum_as_the_caller_names_it()
+    {
+        var data = new SurvivalData([1.0, 2, 3, 4, 5, 6], [true, true, true, true, true, false]);
+        var test = LogRankTest.Compute(data, [0, 1, 0, 1, 0, 0], [0, 0, 0, 0, 1, 1], ["'EU'", "'US'"]);
+        Assert.Contains(test.Notes, n => n.Contains("stratum 'US' has subjects of one group only"));
+    }
+
+    [Fact]
     public void Stratifying_on_a_stratum_without_events_gives_the_unstratified_result_of_the_others()
     {
         // Hand reasoning: a stratum with no events contributes no terms to O - E or V.

@@ -26,6 +26,12 @@ public static class DemoCommand
         {
             Description = "Extra copies of the itch-score records in adeff.csv (parameters ITCHC01, ...) to enlarge the data for speed measurements; no demo table reads them.",
         };
+        var dataFormat = new Option<string>("--data-format")
+        {
+            Description = "Format of the study's data files: csv, xpt (XPT version 5 transport) or json (CDISC Dataset-JSON 1.1).",
+            DefaultValueFactory = _ => DemoDataFormat.Csv,
+        };
+        dataFormat.AcceptOnlyFromAmong([.. DemoDataFormat.All]);
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
         var verbose = CommonOptions.Verbose();
@@ -33,7 +39,7 @@ public static class DemoCommand
         var combined = CommonOptions.Combined();
         var command = new Command("demo", "Write the invented demo study QF217-301 and produce all its tables.")
         {
-            output, subjects, size, noTables, loadCopies, formats, quiet, verbose, timestamp, combined,
+            output, subjects, size, dataFormat, noTables, loadCopies, formats, quiet, verbose, timestamp, combined,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
@@ -45,7 +51,8 @@ public static class DemoCommand
             var root = parse.GetValue(output)!;
             var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
             var dataFolder = Path.Combine(root, "data");
-            var studyFile = DemoPackageWriter.Write(root, DemoSizeOption.Options(parse.GetValue(size), parse.GetValue(subjects), parse.GetValue(loadCopies)));
+            var studyFile = DemoPackageWriter.Write(root, DemoSizeOption.Options(parse.GetValue(size), parse.GetValue(subjects), parse.GetValue(loadCopies)),
+                parse.GetValue(dataFormat)!);
             log.Info($"wrote the demo study's data to {dataFolder} and its specs to {Path.GetDirectoryName(studyFile)}");
             if (parse.GetValue(noTables))
             {

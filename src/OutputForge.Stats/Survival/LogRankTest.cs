@@ -16,7 +16,9 @@ public static class LogRankTest
     /// <param name="data">The observations' times and event flags.</param>
     /// <param name="group">Group index (0..k-1) of each observation.</param>
     /// <param name="stratum">Stratum index of each observation, or null for an unstratified test.</param>
-    public static TestResult Compute(SurvivalData data, IReadOnlyList<int> group, IReadOnlyList<int>? stratum = null)
+    /// <param name="stratumNames">How the notes name each stratum index (e.g. its values); the index itself when null.</param>
+    public static TestResult Compute(SurvivalData data, IReadOnlyList<int> group, IReadOnlyList<int>? stratum = null,
+        IReadOnlyList<string>? stratumNames = null)
     {
         var method = stratum is null ? Method : StratifiedMethod;
         if (group.Count != data.Count || (stratum is not null && stratum.Count != data.Count))
@@ -40,9 +42,10 @@ public static class LogRankTest
             var eventsHere = rows.Count(i => data.Events[i]);
             if (stratum is not null && (groupsHere < 2 || eventsHere == 0))
             {
+                var name = stratumNames?[rows.Key] ?? rows.Key.ToString(System.Globalization.CultureInfo.InvariantCulture);
                 notes.Add(groupsHere < 2
-                    ? $"stratum {rows.Key} has subjects of one group only and adds nothing to the test"
-                    : $"stratum {rows.Key} has no events and adds nothing to the test");
+                    ? $"stratum {name} has subjects of one group only and adds nothing to the test"
+                    : $"stratum {name} has no events and adds nothing to the test");
             }
             AddStratum(data, rows.ToList(), group, indexOf, observedMinusExpected, variance);
         }

@@ -157,6 +157,12 @@ public static class CsvDatasetReader
                     continue;
                 }
                 var utf8 = reader.GetSpan(c);
+                if (utf8.Length == 1 && utf8[0] == (byte)'.')
+                {
+                    // "." alone is the missing value of transport-file dumps (docs/spec-reference.md, "Data formats").
+                    columns[c].AddMissing();
+                    continue;
+                }
                 if (columns[c].TryAddCanonical(utf8))
                 {
                     continue;
@@ -172,8 +178,14 @@ public static class CsvDatasetReader
                     throw new DataException(path, line, header[c],
                         FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
                 }
-                // Control characters are single bytes below 0x20 in UTF-8: look for them only when such a byte is present.
-                if (utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 && ControlCharacters.IndexIn(value) >= 0)
+                if (value.Length > Layout.DocumentText.MaxLength)
+                {
+                    throw new DataException(path, line, header[c], Layout.DocumentText.TooLong(value.Length));
+                }
+                // Control characters are single bytes below 0x20 in UTF-8, noncharacters start with a byte from 0xEF to
+                // 0xF4: look for them only when such a byte is present.
+                if ((utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 || utf8.IndexOfAnyInRange((byte)0xEF, (byte)0xF4) >= 0)
+                    && ControlCharacters.IndexIn(value) >= 0)
                 {
                     value = HandleControlCharacter(path, line, header[c], value, options, ref replaced);
                 }
@@ -195,7 +207,7 @@ public static class CsvDatasetReader
         {
             var at = ControlCharacters.IndexIn(value);
             throw new DataException(path, line, variable,
-                $"the value holds the control character U+{(int)value[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
+                $"the value holds {ControlCharacters.Describe(value, at)} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
         }
         replaced++;
         return ControlCharacters.Replace(value);

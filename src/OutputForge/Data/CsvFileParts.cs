@@ -90,7 +90,7 @@ public sealed class CsvFileParts
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(path);
+            bytes = Files.RegularFile.ReadAllBytes(path, Files.RegularFile.SizeLimit, Files.RegularFile.SizeLimitReason, problem => new DataException(path, null, null, problem));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {

@@ -49,6 +49,19 @@ public sealed class DataColumn : IVariable
     public VariableKind Kind { get; }
     public int Length => _length;
 
+    /// <summary>The variable's label as the file gives it (XPT and Dataset-JSON files carry one; CSV has none).</summary>
+    public string? Label { get; internal set; }
+
+    /// <summary>
+    /// The special missing value of a missing number read from an XPT file, where it is not the plain '.': '_' or
+    /// 'A'-'Z' (for .A-.Z); null for any other row. The value is missing all the same.
+    /// </summary>
+    public char? MissingLetter(int row) => _missingLetters is not null && _missingLetters.TryGetValue(row, out var letter) ? letter : null;
+
+    private IReadOnlyDictionary<int, char>? _missingLetters;
+
+    internal void KeepMissingLetters(IReadOnlyDictionary<int, char>? letters) => _missingLetters = letters;
+
     /// <summary>For a text column whose first values were numbers: the first value that is not (for messages).</summary>
     public string? TextEvidence { get; init; }
 

@@ -25,12 +25,18 @@ public sealed class Dataset : IVariableSource
 
     public int RowCount { get; }
 
+    /// <summary>The dataset's label as the file gives it (XPT and Dataset-JSON files carry one; CSV has none).</summary>
+    public string? Label { get; init; }
+
     /// <summary>The SHA-256 (lower-case hex) of the file's bytes as read, or null for a dataset built in memory.</summary>
     public string? ContentSha256 { get; internal set; }
 
     public IReadOnlyList<DataColumn> Columns { get; }
 
-    /// <summary>The line of the file on which each row starts (1-based; line 1 is the header).</summary>
+    /// <summary>
+    /// The line of the file on which each row starts (1-based; line 1 is the header). For an XPT or Dataset-JSON
+    /// file, which has no lines in that sense, the row's own number (1-based), named "row" in the readers' messages.
+    /// </summary>
     public IReadOnlyList<int> LineOfRow { get; }
 
     string IVariableSource.SourceName => $"dataset {Name} ({Path.GetFileName(File)})";

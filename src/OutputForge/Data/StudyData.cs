@@ -90,7 +90,17 @@ public sealed class StudyData
                     throw new DataException(path, null, null,
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
-                opened[i] = CsvFileParts.Open(name, path, options);
+                DatasetFileScope.Check(path, folder, options.ReadableFolders);
+                if (DatasetFiles.IsCsv(fileName))
+                {
+                    opened[i] = CsvFileParts.Open(name, path, options);
+                }
+                else
+                {
+                    // XPT and Dataset-JSON files are read whole here, streamed, on this file's core.
+                    var warnings = new List<string>();
+                    outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add), warnings, null);
+                }
             }
             catch (Exception e)
             {

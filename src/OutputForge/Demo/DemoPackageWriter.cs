@@ -7,7 +7,10 @@ namespace OutputForge.Demo;
 public static class DemoPackageWriter
 {
     /// <summary>Returns the study file's path under <paramref name="root"/>.</summary>
-    public static string Write(string root, DemoStudyOptions options)
+    public static string Write(string root, DemoStudyOptions options) => Write(root, options, DemoDataFormat.Csv);
+
+    /// <summary>Writes the data in <paramref name="dataFormat"/> (<see cref="DemoDataFormat"/>); returns the study file's path.</summary>
+    public static string Write(string root, DemoStudyOptions options, string dataFormat)
     {
         var full = Path.GetFullPath(root).TrimEnd(Path.DirectorySeparatorChar);
         var parent = Path.GetDirectoryName(full) ?? throw new DemoStudyException($"{root}: cannot write into the root folder");
@@ -18,6 +21,7 @@ public static class DemoPackageWriter
             var studyFile = DemoSpecFiles.Write(staging);
             if (options.Pooled is { } pooled)
                 studyFile = PooledSpecSet.Write(staging, pooled.WeeklyParameters);
+            DemoDataFormat.Convert(Path.Combine(staging, "data"), Path.Combine(staging, "specs"), dataFormat);
             foreach (var file in Directory.GetFiles(staging, "*", SearchOption.AllDirectories).Order(StringComparer.Ordinal))
             {
                 var target = Path.Combine(full, Path.GetRelativePath(staging, file));

@@ -18,8 +18,16 @@ namespace OutputForge.Expressions;
 /// </summary>
 public sealed class ConditionParser
 {
+    /// <summary>The deepest nesting of '(' and 'not' read: a real condition nests a few levels; a deeper one would exhaust the stack.</summary>
+    public const int MaxNesting = 100;
+
+    /// <summary>The most tests joined by 'and' and 'or' in one condition (each join deepens the tree that evaluates it).</summary>
+    public const int MaxJoins = 1_000;
+
     private readonly List<Token> _tokens;
     private int _next;
+    private int _nesting;
+    private int _joins;
 
     private ConditionParser(string text)
     {
@@ -65,6 +73,7 @@ public sealed class ConditionParser
         while (Peek().Kind == TokenKind.Or)
         {
             var op = Take();
+            Join(op);
             left = new OrNode(left, ParseAnd(), op.Position);
         }
         return left;
@@ -76,9 +85,26 @@ public sealed class ConditionParser
         while (Peek().Kind == TokenKind.And)
         {
             var op = Take();
+            Join(op);
             left = new AndNode(left, ParseSingle(), op.Position);
         }
         return left;
+    }
+
+    private void Nest(Token token)
+    {
+        if (++_nesting > MaxNesting)
+        {
+            throw new ConditionSyntaxException($"the condition nests '(' and 'not' more than {MaxNesting} levels deep", token.Position);
+        }
+    }
+
+    private void Join(Token token)
+    {
+        if (++_joins > MaxJoins)
+        {
+            throw new ConditionSyntaxException($"the condition joins more than {MaxJoins} tests with 'and' and 'or'", token.Position);
+        }
     }
 
     private ConditionNode ParseSingle()
@@ -88,11 +114,16 @@ public sealed class ConditionParser
         {
             case TokenKind.Not:
                 Take();
-                return new NotNode(ParseSingle(), token.Position);
+                Nest(token);
+                var negated = new NotNode(ParseSingle(), token.Position);
+                _nesting--;
+                return negated;
             case TokenKind.OpenParen:
                 Take();
+                Nest(token);
                 var inner = ParseOr();
                 Expect(TokenKind.CloseParen, "')'");
+                _nesting--;
                 return inner;
             case TokenKind.Identifier:
                 return ParseTest();

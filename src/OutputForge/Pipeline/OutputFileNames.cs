@@ -9,6 +9,12 @@ public static class OutputFileNames
     /// <summary>Base name of the combined document and workbook (all tables of a run).</summary>
     public const string Combined = "all-tables";
 
+    /// <summary>
+    /// The longest table id: table numbers are short ("14.2.1.1"); 64 characters keep every file named after the id
+    /// ("shell-" + id + "-forest.png") far inside the 255 a file name may hold, with room for the folder's path.
+    /// </summary>
+    public const int MaxTableIdLength = 64;
+
     public static string ForTable(string tableId, string extension)
     {
         if (tableId.Length == 0 || tableId.Any(c => !(char.IsAsciiLetterOrDigit(c) || c is '.' or '-' or '_')) || tableId.StartsWith('.'))

@@ -25,12 +25,13 @@ public static class PackageRunner
         using var outputLock = OutputLock.Acquire(request.OutputFolder);
         var package = SpecLoader.Load(request.SpecPath, request.AllowedFolders);
         var study = package.Study;
-        var templates = TemplateSet.Load(study.Folder);
+        var templates = TemplateSet.Load(study.Folder, package.Folders);
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
         var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
+        OutputPlace.CheckApart(request.OutputFolder, outputLock.Folder, dataFolder, study.Folder);
         var dataWarnings = new List<string>();
         var reading = Stopwatch.StartNew();
-        var data = StudyData.Load(study, dataFolder, request.DataOptions, dataWarnings.Add);
+        var data = StudyData.Load(study, dataFolder, request.DataOptions with { ReadableFolders = package.Folders.Folders }, dataWarnings.Add);
         log.Detail($"data: {data.Datasets.Count} datasets, {data.Datasets.Sum(d => File.Exists(d.File) ? new FileInfo(d.File).Length : 0) / 1e6:0.0} MB read in {reading.Elapsed.TotalMilliseconds:0} ms");
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
@@ -205,6 +206,11 @@ public static class PackageRunner
         var laidOut = TableLayOut.Build(study, table, result, studyLine, run, page, NumberDisplay.Values, context.Templates,
             document => TemplateValues.For(study, table, result, document, run));
         times.Lap("layout");
+        if (DocumentText.FirstProblem(laidOut.Document) is { } problem)
+        {
+            // Each source is checked where it is read; this catches text assembled from several pieces.
+            throw new SpecException(table.Source.Problem(string.Empty, $"the laid-out table cannot be written: {problem}"));
+        }
         var files = new List<(string, byte[])>();
         foreach (var renderer in request.Renderers)
         {

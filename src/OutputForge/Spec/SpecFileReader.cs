@@ -20,12 +20,15 @@ internal static class SpecFileReader
         AllowTrailingCommas = true,
     };
 
+    /// <summary>The largest spec file read: specs are a few kilobytes; 16 MB is far beyond any real one.</summary>
+    public const long MaxSpecBytes = 16 << 20;
+
     public static T Read<T>(string file, string schemaName, Action<T, SpecSource> attach)
     {
         byte[] bytes;
         try
         {
-            bytes = File.ReadAllBytes(file);
+            bytes = Files.RegularFile.ReadAllBytes(file, MaxSpecBytes, "a spec file may hold", problem => new SpecException(new SpecProblem(file, null, null, "$", problem)));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
@@ -54,7 +57,7 @@ internal static class SpecFileReader
         using (document)
         {
             var source = new SpecSource(file, JsonPositionMap.Build(bytes));
-            var problems = Validate(document.RootElement, schemaName, source);
+            var problems = SpecText.Problems(document.RootElement, source) is { Count: > 0 } text ? text : Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
                 throw new SpecException(problems);
@@ -153,7 +156,7 @@ internal static class SpecFileReader
             case "type":
                 return source.Problem(pointer, $"expected {Describe(keywordNode)}: {message}");
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal):
-                return source.Problem(pointer, "expected a CSV file name in the data folder (no folders), ending in .csv");
+                return source.Problem(pointer, "expected a data file name in the data folder (no folders), ending in .csv, .xpt, .json or .ndjson");
             default:
                 return source.Problem(pointer, message);
         }

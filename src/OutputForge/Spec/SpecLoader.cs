@@ -147,6 +147,11 @@ public static class SpecLoader
         var ids = new Dictionary<string, TableSpec>(StringComparer.OrdinalIgnoreCase);
         foreach (var table in tables)
         {
+            if (table.Id.Length > Pipeline.OutputFileNames.MaxTableIdLength)
+            {
+                yield return table.Source.Problem("/id",
+                    $"the table id is {table.Id.Length} characters long; at most {Pipeline.OutputFileNames.MaxTableIdLength} fit, as it names the table's output files (table-<id>.docx, ...)");
+            }
             if (ids.TryGetValue(table.Id, out var first))
             {
                 yield return table.Source.Problem("/id", $"table id '{table.Id}' is already used by {first.Source.File}");

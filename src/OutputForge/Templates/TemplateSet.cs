@@ -1,4 +1,6 @@
 using System.Reflection;
+using OutputForge.Files;
+using OutputForge.Spec;
 using Scriban;
 using Scriban.Parsing;
 using Scriban.Runtime;
@@ -36,7 +38,14 @@ public sealed class TemplateSet : ITemplateLoader
     }
 
     /// <summary>The embedded defaults, overridden by the .sbn files in <paramref name="studyFolder"/>/templates (when given).</summary>
-    public static TemplateSet Load(string? studyFolder)
+    public static TemplateSet Load(string? studyFolder) => Load(studyFolder, studyFolder is null ? null : new SpecFolderPolicy(studyFolder));
+
+    /// <summary>
+    /// As <see cref="Load(string?)"/>, reading a template file only when it really lies (links followed) inside the
+    /// folders <paramref name="folders"/> allows: a link in templates/ cannot put another file of the machine into the
+    /// documents. A refused file is named, never shown.
+    /// </summary>
+    public static TemplateSet Load(string? studyFolder, SpecFolderPolicy? folders)
     {
         var set = new TemplateSet();
         var assembly = typeof(TemplateSet).Assembly;
@@ -49,7 +58,7 @@ public sealed class TemplateSet : ITemplateLoader
         if (folder is not null && Directory.Exists(folder))
         {
             foreach (var file in Directory.GetFiles(folder, "*.sbn").Order(StringComparer.Ordinal))
-                set._sources[Path.GetFileName(file)] = (File.ReadAllText(file), Path.GetRelativePath(studyFolder!, file).Replace('\\', '/'));
+                set._sources[Path.GetFileName(file)] = (ReadStudyTemplate(file, folders), Path.GetRelativePath(studyFolder!, file).Replace('\\', '/'));
         }
         foreach (var name in TemplateNames.All)
         {
@@ -84,7 +93,15 @@ public sealed class TemplateSet : ITemplateLoader
         context.PushGlobal(values);
         try
         {
-            return template.Render(context);
+            var output = template.Render(context);
+            foreach (var line in output.Split('\n'))
+            {
+                if (Layout.DocumentText.Problem(line) is { } problem)
+                {
+                    throw new TemplateException($"{SourceOf(name)}: template error: a line of the template's output cannot go into a table: {problem}");
+                }
+            }
+            return output;
         }
         catch (ScriptRuntimeException e) when (e.InnerException is TemplateException refused)
         {
@@ -146,6 +163,28 @@ public sealed class TemplateSet : ITemplateLoader
 
     ValueTask<string> ITemplateLoader.LoadAsync(TemplateContext context, SourceSpan callerSpan, string templatePath) =>
         new(_sources[templatePath].Text);
+
+    private static string ReadStudyTemplate(string file, SpecFolderPolicy? folders)
+    {
+        if (folders is not null && !folders.Allows(file))
+        {
+            throw new TemplateException($"{file}: the template is a symbolic link that leads outside the spec's folder {folders.SpecFolder}; " +
+                "templates are read only from inside the spec's folder tree (allow another folder with --allow-folder)");
+        }
+        try
+        {
+            var bytes = RegularFile.ReadAllBytes(file, OutputLimit, "a template may hold", problem => new TemplateException($"{file}: {problem}"));
+            return new System.Text.UTF8Encoding(false, true).GetString(bytes).TrimStart('\uFEFF');
+        }
+        catch (System.Text.DecoderFallbackException)
+        {
+            throw new TemplateException($"{file}: the template is not valid UTF-8; save it as UTF-8");
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new TemplateException($"{file}: cannot read the template ({e.Message})");
+        }
+    }
 
     private static string ReadResource(Assembly assembly, string resource)
     {

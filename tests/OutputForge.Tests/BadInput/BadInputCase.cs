@@ -17,6 +17,12 @@ public sealed record BadInputCase(string Name, string[] Expect)
     public byte[]? Adeff { get; init; }
     public string[] ExtraArguments { get; init; } = [];
 
+    /// <summary>Changes to the study's files that text edits cannot make (links, named pipes, new files).</summary>
+    public Action<MiniStudy>? Prepare { get; init; }
+
+    /// <summary>The output folder of the failing run, when it is not the study's usual one.</summary>
+    public Func<MiniStudy, string>? Out { get; init; }
+
     public override string ToString() => Name;
 
     public static byte[] Utf8(string text) => Encoding.UTF8.GetBytes(text);
@@ -40,6 +46,7 @@ public sealed record BadInputCase(string Name, string[] Expect)
         {
             File.WriteAllBytes(Path.Combine(study.DataFolder, "adeff.csv"), Adeff);
         }
+        Prepare?.Invoke(study);
     }
 
     private string Replace(string text, (string From, string To)[] edits, string file)

@@ -21,10 +21,111 @@ public static class BadInputCases
     private static BadInputCase E(string name, string content, params string[] expect) =>
         new(name, ["adeff.csv", .. expect]) { Adeff = Utf8(content) };
 
+    /// <summary>Creates a symbolic link at <paramref name="path"/> (replacing a file there).</summary>
+    private static void Link(string path, string target)
+    {
+        File.Delete(path);
+        File.CreateSymbolicLink(path, target);
+    }
+
+    /// <summary>Replaces <paramref name="path"/> with a named pipe that nothing writes.</summary>
+    private static void Fifo(string path)
+    {
+        File.Delete(path);
+        using var mkfifo = System.Diagnostics.Process.Start("mkfifo", [path]);
+        mkfifo.WaitForExit();
+    }
+
     private const string AdslHeader = "STUDYID,USUBJID,TRT01P,TRT01PN,ITTFL,AGE\n";
+
+    /// <summary>Delivery, sandbox, limits and run messages (issue 14): links, pipes, devices, sizes, output places.</summary>
+    private static IEnumerable<BadInputCase> DeliverySandboxAndLimits()
+    {
+        // sandbox: links that leave the allowed folders are refused, and the refused file's content is never shown
+        yield return new BadInputCase("template linked to a file outside the spec tree", ["title.sbn", "symbolic link", "outside the spec's folder"])
+        {
+            Prepare = s => { Directory.CreateDirectory(Path.Combine(s.Folder, "templates")); Link(Path.Combine(s.Folder, "templates", "title.sbn"), "/etc/passwd"); },
+        };
+        yield return new BadInputCase("table spec linked to a file outside the spec tree", ["study.json", "$.tables[0]", "outside the spec's folder", "(through a symbolic link)"])
+        {
+            Prepare = s => Link(Path.Combine(s.Folder, "t1.json"), "/etc/passwd"),
+        };
+        yield return new BadInputCase("data folder linked outside the spec tree", ["study.json", "$.data.folder", "outside the spec's folder"])
+        {
+            Study = [("\"folder\": \"data\"", "\"folder\": \"datalink\"")],
+            Prepare = s => Directory.CreateSymbolicLink(Path.Combine(s.Folder, "datalink"), Path.GetTempPath()),
+        };
+        yield return new BadInputCase("dataset linked outside the data folder", ["adeff.csv", "symbolic link that leads outside the data folder"])
+        {
+            Prepare = s => Link(Path.Combine(s.DataFolder, "adeff.csv"), "/etc/passwd"),
+        };
+
+        // limits: only regular files, of a size the machine can hold
+        yield return new BadInputCase("dataset is a named pipe", ["adeff.csv", "named pipe (FIFO), not a regular file"]) { Prepare = s => Fifo(Path.Combine(s.DataFolder, "adeff.csv")) };
+        yield return new BadInputCase("table spec is a named pipe", ["t1.json", "named pipe (FIFO), not a regular file"]) { Prepare = s => Fifo(Path.Combine(s.Folder, "t1.json")) };
+        yield return new BadInputCase("dataset linked to an endless device", ["adeff.csv", "character device, not a regular file"])
+        {
+            Prepare = s => Link(Path.Combine(s.DataFolder, "adeff.csv"), "/dev/zero"),
+            ExtraArguments = ["--allow-folder", "/dev"],
+        };
+        yield return T("30,000 nested parentheses", "ANL01FL = 'Y'", new string('(', 30_000) + "ANL01FL = 'Y'" + new string(')', 30_000),
+            "$.endpoint.where", "the text is 60,013 characters long");
+        yield return T("10,000 nested parentheses", "ANL01FL = 'Y'", new string('(', 10_000) + "ANL01FL = 'Y'" + new string(')', 10_000),
+            "$.endpoint.where", "nests '(' and 'not' more than 100 levels deep", "character 101");
+        yield return T("5,000 nested nots", "ANL01FL = 'Y'", string.Concat(Enumerable.Repeat("not ", 5_000)) + "ANL01FL = 'Y'",
+            "$.endpoint.where", "more than 100 levels deep", "character 401");
+        yield return T("1,100 tests joined by and", "ANL01FL = 'Y'", string.Join(" and ", Enumerable.Repeat("ANL01FL = 'Y'", 1_100)),
+            "$.endpoint.where", "joins more than 1000 tests");
+
+        yield return T("JSON nested 100 levels deep", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"x\": " + new string('[', 100) + new string(']', 100) + ",",
+            "invalid JSON", "64");
+
+        // text a document cannot hold: one rule for spec text, data values and template output, in every format
+        yield return T("title of 40,000 characters", "[\"Responders\"]", $"[\"{new string('L', 40_000)}\"]", "$.title[0]", "40,000 characters long, more than the 32,767");
+        yield return new BadInputCase("title of 40,000 characters as text", ["t1.json", "$.title[0]", "more than the 32,767"])
+        {
+            Table = [("[\"Responders\"]", $"[\"{new string('L', 40_000)}\"]")],
+            ExtraArguments = ["--format", "txt"],
+        };
+        yield return T("control character in a title", "[\"Responders\"]", "[\"Resp\\u0001onders\"]", "$.title[0]", "control character U+0001 at character 5");
+        yield return T("lone surrogate in a title", "[\"Responders\"]", "[\"Resp\\ud800onders\"]", "$.title[0]", "lone UTF-16 surrogate");
+        yield return T("noncharacter U+FFFE in a footnote", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"footnotes\": [\"a\\ufffe\"],", "$.footnotes[0]", "noncharacter U+FFFE");
+        yield return A("noncharacter U+FFFE in a data value", AdslHeader + "T1,T1-001,Placebo,0,Y,40\nT1\uFFFE,T1-002,Placebo,0,Y,51\n", "line 3", "variable STUDYID", "noncharacter U+FFFE at character 3");
+        yield return A("noncharacter U+10FFFF in a data value", AdslHeader + "T1\U0010FFFF,T1-001,Placebo,0,Y,40\n", "line 2", "noncharacter U+10FFFF");
+        yield return A("noncharacter U+FDD0 in a data value", AdslHeader + "T1\uFDD0,T1-001,Placebo,0,Y,40\n", "line 2", "noncharacter U+FDD0");
+        yield return A("data value of 40,000 characters", AdslHeader + new string('T', 40_000) + ",T1-001,Placebo,0,Y,40\n", "line 2", "variable STUDYID", "40,000 characters long, more than the 32,767");
+        yield return new BadInputCase("template doubling a text past the cell limit", ["title.sbn", "template error", "more than the 32,767"])
+        {
+            Prepare = s =>
+            {
+                Directory.CreateDirectory(Path.Combine(s.Folder, "templates"));
+                File.WriteAllText(Path.Combine(s.Folder, "templates", "title.sbn"), "{{ t = \"ab\" }}{{ for i in 1..15 }}{{ t = t + t }}{{ end }}{{ t }}\n");
+            },
+        };
+        yield return new BadInputCase("template writing a control character", ["title.sbn", "template error", "control character U+0007"])
+        {
+            Prepare = s =>
+            {
+                Directory.CreateDirectory(Path.Combine(s.Folder, "templates"));
+                File.WriteAllText(Path.Combine(s.Folder, "templates", "title.sbn"), "Table\u0007\n");
+            },
+        };
+
+        // run messages: what is actually wrong, and where
+        yield return T("table id of 265 characters", "\"id\": \"1\"", $"\"id\": \"{new string('9', 265)}\"", "$.id", "the table id is 265 characters long; at most 64 fit");
+        yield return new BadInputCase("output folder inside the data folder", ["--out", "is inside the data folder"]) { Out = s => Path.Combine(s.DataFolder, "out") };
+        yield return new BadInputCase("output folder holding the data and spec folders", ["--out", "holds the data folder"]) { Out = s => s.Folder };
+        yield return new BadInputCase("output folder name too long", ["the output folder's name is 300 bytes long; at most 195 fit"]) { Out = s => Path.Combine(s.Folder, new string('o', 300)) };
+        yield return new BadInputCase("output folder below a file", ["adsl.csv is a file, not a folder"]) { Out = s => Path.Combine(s.DataFolder, "adsl.csv", "out") };
+    }
 
     public static IEnumerable<BadInputCase> All()
     {
+        foreach (var item in DataFormatBadInputCases.All())
+        {
+            yield return item;
+        }
+
         // JSON syntax
         yield return T("table: missing closing brace", "  }\n}", "  }\n", "invalid JSON");
         yield return T("table: text after the end", "  }\n}", "  }\n}\nmore", "invalid JSON");
@@ -56,7 +157,7 @@ public static class BadInputCases
         yield return T("id with a slash", "\"id\": \"1\"", "\"id\": \"a/b\"", "$.id");
         yield return T("id with a device name character", "\"id\": \"1\"", "\"id\": \"1:2\"", "$.id");
         yield return S("dataset file in another folder", "\"adsl\": \"adsl.csv\"", "\"adsl\": \"../adsl.csv\"", "$.data.datasets.adsl", "no folders");
-        yield return S("dataset file not csv", "\"adsl\": \"adsl.csv\"", "\"adsl\": \"adsl.xpt\"", "$.data.datasets.adsl", "ending in .csv");
+        yield return S("dataset file of an unknown format", "\"adsl\": \"adsl.csv\"", "\"adsl\": \"adsl.sas7bdat\"", "$.data.datasets.adsl", "ending in .csv, .xpt, .json or .ndjson");
         yield return S("dataset name in upper case", "\"adeff\": \"adeff.csv\"", "\"ADEFF\": \"adeff.csv\"", "$.data.datasets");
         yield return T("kind misspelt", "\"kind\": \"responders\"", "\"kind\": \"responder\"", "$.kind", "expected one of \"responders\"");
         yield return T("proportion method misspelt", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"statistics\": { \"proportionInterval\": \"wilsn\" },", "$.statistics.proportionInterval", "\"wilson\"");
@@ -190,5 +291,10 @@ public static class BadInputCases
         yield return new BadInputCase("unknown format", ["unknown format 'pdf'"]) { ExtraArguments = ["--format", "pdf"] };
         yield return new BadInputCase("bad timestamp", ["--timestamp", "not an ISO 8601"]) { ExtraArguments = ["--timestamp", "yesterday"] };
         yield return new BadInputCase("bad control-character choice", ["--control-characters"]) { ExtraArguments = ["--control-characters", "strip"] };
+
+        foreach (var item in DeliverySandboxAndLimits())
+        {
+            yield return item;
+        }
     }
 }

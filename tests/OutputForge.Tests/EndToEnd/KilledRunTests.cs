@@ -53,8 +53,9 @@ public sealed class KilledRunTests
         process.WaitForExit();
 
         // Whenever the kill landed, the folder holds one whole package: the old one untouched, or
-        // (if the run got to the end first) the new one exactly as its manifest lists it.
-        var after = Snapshot(output);
+        // (if the run got to the end first) the new one exactly as its manifest lists it. A kill between the two
+        // renames of the swap leaves no output folder, and the whole old package set aside beside it.
+        var after = Snapshot(Directory.Exists(output) ? output : Directory.GetDirectories(folder.Path, ".output.previous-*").Single());
         if (!after.SequenceEqual(before))
         {
             using var manifest = System.Text.Json.JsonDocument.Parse(File.ReadAllText(Path.Combine(output, "manifest.json")));
@@ -67,5 +68,6 @@ public sealed class KilledRunTests
         // The next run clears what the killed one left behind and completes.
         Assert.Equal(0, OutputForge.Cli.Program.Run(["run", "--spec", studyFile, "--data", data, "--out", output, "--quiet", "--tables", "14.2.1.*"], new StringWriter()));
         Assert.Empty(Directory.GetDirectories(folder.Path, ".output.staging-*"));
+        Assert.Empty(Directory.GetDirectories(folder.Path, ".output.previous-*"));
     }
 }

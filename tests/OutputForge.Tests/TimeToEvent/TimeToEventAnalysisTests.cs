@@ -75,6 +75,17 @@ public sealed class TimeToEventAnalysisTests
     }
 
     [Fact]
+    public void A_stratum_that_adds_nothing_to_the_log_rank_test_is_named_by_its_value()
+    {
+        // Region C holds placebo subjects only: the log-rank note names it 'C', not by an index.
+        var adsl = Adsl.Replace("T1,T1-002,Placebo,0,Y,B", "T1,T1-002,Placebo,0,Y,C").Replace("T1,T1-008,Active,1,Y,", "T1,T1-008,Active,1,Y,B");
+        using var study = new MiniStudy(adsl: adsl, adeff: Adtte, table: Table("""{ "strata": ["REG"] }"""));
+        var result = Analyze(study);
+        Assert.Contains(result.Warnings, w => w.Contains("log-rank test: stratum 'C' has subjects of one group only"));
+        Assert.DoesNotContain(result.Warnings, w => w.Contains("stratum 2"));
+    }
+
+    [Fact]
     public void A_censoring_value_other_than_0_or_1_is_a_clear_error()
     {
         using var study = new MiniStudy(adsl: Adsl, adeff: Adtte.Replace("T1-001,TTE,2,0", "T1-001,TTE,2,2"), table: Table("{}"));

@@ -18,12 +18,15 @@ internal sealed record TimeToEventComparison(TreatmentArm Arm, TestResult LogRan
         var data = new SurvivalData(pair.Select(s => s.Time).ToList(), pair.Select(s => s.Event).ToList());
         var group = pair.Select(s => s.Arm == arm ? 1 : 0).ToList();
         IReadOnlyList<int>? strata = null;
+        IReadOnlyList<string>? names = null;
         if (stratified)
         {
             var levels = pair.Select(s => s.Stratum!).Distinct().Order(StringComparer.Ordinal).ToList();
             strata = pair.Select(s => levels.IndexOf(s.Stratum!)).ToList();
+            // The notes name a stratum by its values ("'F / <65'"), as the reader of the table knows it.
+            names = levels.Select(l => $"'{l}'").ToList();
         }
-        var logRank = LogRankTest.Compute(data, group, strata);
+        var logRank = LogRankTest.Compute(data, group, strata, names);
         var withoutEvents = new[] { arm, control }.Where(a => !pair.Any(s => s.Arm == a && s.Event)).ToList();
         if (withoutEvents.Count > 0)
         {

@@ -29,12 +29,17 @@ public static class PackageCheck
             report.Add(CheckProblem.FromSpec(study.Source.Problem("/data", "no data folder: give --data on the command line or data.folder in the study spec")));
             return report;
         }
+        if (dataFolder is null && !package.Folders.Allows(folder))
+        {
+            report.Add(CheckProblem.FromSpec(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder!) + ", or give --data")));
+            return report;
+        }
         if (!Directory.Exists(folder))
         {
             report.Add(new CheckProblem(CheckSeverity.Error, folder, "", "no such data folder", "give --data the folder with the CSV files"));
             return report;
         }
-        var datasets = ReadDatasets(study, folder, report);
+        var datasets = ReadDatasets(study, folder, package.Folders.Folders, report);
         if (!datasets.TryGetValue("adsl", out var adsl))
         {
             return report;
@@ -68,7 +73,7 @@ public static class PackageCheck
     private static string Kind(DataException problem) =>
         $"{problem.Variable ?? "file"}: {new string(problem.Message.Split(':').Last().Trim().TakeWhile(c => c != '\'').ToArray())}";
 
-    private static Dictionary<string, Dataset> ReadDatasets(StudySpec study, string folder, CheckReport report)
+    private static Dictionary<string, Dataset> ReadDatasets(StudySpec study, string folder, IReadOnlyList<string> allowedFolders, CheckReport report)
     {
         var datasets = new Dictionary<string, Dataset>(StringComparer.Ordinal);
         foreach (var (name, fileName) in study.Data.Datasets.OrderBy(d => d.Key == "adsl" ? 0 : 1).ThenBy(d => d.Key, StringComparer.Ordinal))
@@ -82,6 +87,7 @@ public static class PackageCheck
             }
             try
             {
+                DatasetFileScope.Check(path, folder, allowedFolders);
                 datasets[name] = CsvDatasetReader.Read(name, path);
             }
             catch (DataException e)

@@ -15,9 +15,10 @@ public static class ShellPackage
     public static IReadOnlyList<string> Write(string specPath, string outputFolder, IReadOnlyList<ITableRenderer> renderers,
         IReadOnlyList<string>? tables, IRunLog log)
     {
+        using var outputLock = OutputLock.Acquire(outputFolder);
         var package = SpecLoader.Load(specPath);
         var study = package.Study;
-        var templates = TemplateSet.Load(study.Folder);
+        var templates = TemplateSet.Load(study.Folder, package.Folders);
         var run = new RunFacts(DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
         var page = PackageRunner.PageFrom(study.Page);
         var selected = TableSelection.Select(study, package.Tables, tables);
