@@ -128,16 +128,15 @@ public sealed class MmrmEdgeTests
         var visitMean = new Dictionary<string, double> { ["W04"] = -1, ["W08"] = -2, ["W12"] = -3, ["W16"] = -4 };
         var flat = rows.Select(r => r with { Chg = visitMean[r.Visit] + shift[r.Subject] }).ToList();
         var fit = Fit(Data(flat), MmrmCovarianceStructure.CompoundSymmetry);
-        if (fit.IsEstimable)
-        {
-            Assert.NotEmpty(fit.Notes);
-            var lsMean = fit.LeastSquaresMean(new Dictionary<string, string> { ["ARM"] = "ACT" }, MmrmDegreesOfFreedom.KenwardRoger, 0.95);
-            Assert.True(lsMean.IsEstimable || lsMean.NotEstimableReason!.Length > 0);
-        }
-        else
-        {
-            Assert.False(string.IsNullOrEmpty(fit.NotEstimableReason));
-        }
+        Assert.True(fit.IsEstimable, fit.NotEstimableReason);
+        Assert.False(fit.Converged);
+        Assert.Contains(fit.Notes, n => n.Contains("did not converge"));
+        Assert.Contains(fit.Notes, n => n.Contains("edge of the parameter space"));
+        var kenwardRoger = fit.LeastSquaresMean(new Dictionary<string, string> { ["ARM"] = "ACT" }, MmrmDegreesOfFreedom.KenwardRoger, 0.95);
+        Assert.False(kenwardRoger.IsEstimable);
+        Assert.Contains("not positive definite", kenwardRoger.NotEstimableReason);
+        var satterthwaite = fit.Type3Tests(MmrmDegreesOfFreedom.Satterthwaite);
+        Assert.All(satterthwaite, t => Assert.False(t.IsEstimable));
     }
 
     [Fact]

@@ -32,7 +32,7 @@ public sealed class MmrmFit
         var what = method == MmrmEstimationMethod.RestrictedMaximumLikelihood ? "REML" : "maximum likelihood";
         if (!converged)
         {
-            _notes.Add($"The {what} fit with {Mmrm.Describe(covariance.Structure)} covariance did not converge in {iterations} iterations; results are from the last iterate.");
+            _notes.Add($"The {what} fit with {Mmrm.Describe(covariance.Structure)} covariance did not converge (stopped after {iterations} iterations); results are from the last iterate.");
         }
         var sigma = Sigma;
         var scale = Matrix<double>.Build.DenseOfDiagonalVector(sigma.Diagonal().Map(v => 1 / Math.Sqrt(v)));
