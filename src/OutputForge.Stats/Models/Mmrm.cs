@@ -1,5 +1,4 @@
 using MathNet.Numerics.LinearAlgebra;
-using MathNet.Numerics.LinearAlgebra.Factorization;
 
 namespace OutputForge.Stats.Models;
 
@@ -17,7 +16,6 @@ public static class Mmrm
 {
     public const int MaximumIterations = 200;
     private const int MaximumHalvings = 40;
-    private const double RankTolerance = 1e-10;
 
     public static MmrmFit Fit(MmrmData data, MmrmModel model)
     {
@@ -78,14 +76,11 @@ public static class Mmrm
             return NotEstimable($"{n} observations are too few for {p} fixed effects and {q} covariance parameters");
         }
         var x = design.ReferenceCoded;
-        var qr = x.QR(QRMethod.Thin);
-        for (var j = 0; j < p; j++)
+        var likelihood = new MmrmLikelihood(x, data.Response, subjectRows, data.Visit.LevelOfRow, covariance, restricted);
+        var (xtx, xty) = likelihood.OrdinaryCrossProducts();
+        if (FirstDependentColumn(xtx) is { } dependent)
         {
-            var norm = x.Column(j).L2Norm();
-            if (norm == 0 || Math.Abs(qr.R[j, j]) < RankTolerance * norm)
-            {
-                return NotEstimable($"the design is singular: {design.ColumnNames[j]} is not estimable (empty cell or collinear covariate)");
-            }
+            return NotEstimable($"the design is singular: {design.ColumnNames[dependent]} is not estimable (empty cell or collinear covariate)");
         }
         if (model.Structure == MmrmCovarianceStructure.Unstructured)
         {
@@ -112,8 +107,7 @@ public static class Mmrm
             }
         }
 
-        var likelihood = new MmrmLikelihood(x, data.Response, subjectRows, data.Visit.LevelOfRow, covariance, restricted);
-        var ols = qr.Solve(Vector<double>.Build.DenseOfEnumerable(data.Response));
+        var ols = xtx.Cholesky().Solve(xty);
         var empirical = PairwiseCovariance(Vector<double>.Build.DenseOfEnumerable(data.Response) - x * ols, subjectRows, data.Visit.LevelOfRow, visitCount);
         if (empirical.Diagonal().All(v => !(v > 0)))
         {
@@ -126,6 +120,46 @@ public static class Mmrm
         }
         var (final, iterations, converged) = Iterate(likelihood, start);
         return new MmrmFit(data, design, covariance, model.Method, likelihood, final, iterations, converged);
+    }
+
+    /// <summary>
+    /// The first column that is (numerically) a linear combination of the earlier ones, or null. The
+    /// Cholesky factor of X'X scaled to unit diagonal has L_jj^2 = 1 - R^2 of column j on the columns before
+    /// it (the squared |R_jj| / |x_j| of the QR decomposition); X'X comes from the pattern sums, so this
+    /// costs nothing per record. A column is dependent when it is zero or its R^2 exceeds 1 - 1e-12.
+    /// </summary>
+    private static int? FirstDependentColumn(Matrix<double> xtx)
+    {
+        var p = xtx.RowCount;
+        var l = Matrix<double>.Build.Dense(p, p);
+        for (var j = 0; j < p; j++)
+        {
+            if (!(xtx[j, j] > 0))
+            {
+                return j;
+            }
+            for (var k = 0; k <= j; k++)
+            {
+                var sum = xtx[j, k] / Math.Sqrt(xtx[j, j] * xtx[k, k]);
+                for (var i = 0; i < k; i++)
+                {
+                    sum -= l[j, i] * l[k, i];
+                }
+                if (k < j)
+                {
+                    l[j, k] = sum / l[k, k];
+                }
+                else if (sum < 1e-12)
+                {
+                    return j;
+                }
+                else
+                {
+                    l[j, j] = Math.Sqrt(sum);
+                }
+            }
+        }
+        return null;
     }
 
     private static MmrmEvaluation? StartingEvaluation(MmrmLikelihood likelihood, WithinSubjectCovariance covariance, Matrix<double> empirical)

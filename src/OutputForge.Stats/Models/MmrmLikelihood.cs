@@ -53,6 +53,20 @@ internal sealed class MmrmLikelihood
     public int ColumnCount => _p;
     public bool Restricted => _restricted;
 
+    /// <summary>X'X and X'y (ordinary least squares), from the same pattern sums with identity weights.</summary>
+    public (Matrix<double> XtX, Vector<double> XtY) OrdinaryCrossProducts()
+    {
+        var xtx = new double[_p * _p];
+        var xty = new double[_p];
+        foreach (var pattern in _patterns)
+        {
+            var identity = Matrix<double>.Build.DenseIdentity(pattern.Visits.Length);
+            pattern.ContractXX(identity, xtx);
+            pattern.ContractXY(identity, xty);
+        }
+        return (Matrix<double>.Build.Dense(_p, _p, xtx), Vector<double>.Build.DenseOfArray(xty));
+    }
+
     /// <summary>The log-likelihood at theta and, when asked, its gradient and expected and observed information; null where Sigma(theta) or X'V^-1 X is not positive definite.</summary>
     public MmrmEvaluation? Evaluate(Vector<double> theta, bool derivatives)
     {
@@ -177,7 +191,7 @@ internal sealed class MmrmLikelihood
             gradient[j] = -0.5 * traceP + 0.5 * traceDG[j];
             for (var l = j; l < q; l++)
             {
-                var tracePVPV = traceBD[j, l] - (_restricted ? 2 * traceFPhi[j, l] - (phiM[j] * phiM[l]).Trace() : 0);
+                var tracePVPV = traceBD[j, l] - (_restricted ? 2 * traceFPhi[j, l] - TraceOfProduct(phiM[j], phiM[l]) : 0);
                 expected[j, l] = expected[l, j] = 0.5 * tracePVPV;
                 var uPu = traceDADG[j, l] - xvuVectors[j].DotProduct(e.Phi * xvuVectors[l]);
                 var tracePD2 = traceAD2[j, l] - (_restricted ? traceAD2APhi[j, l] : 0);
@@ -256,12 +270,16 @@ internal sealed class MmrmLikelihood
     /// <summary>tr(U V) = sum_ab U_ab V_ba without forming the product.</summary>
     private static double TraceOfProduct(Matrix<double> u, Matrix<double> v)
     {
+        // Column-major storage: u[a, b] = uv[b * n + a], v[b, a] = vv[a * n + b].
+        var uv = u.AsColumnMajorArray() ?? u.ToColumnMajorArray();
+        var vv = v.AsColumnMajorArray() ?? v.ToColumnMajorArray();
+        var n = u.RowCount;
         var sum = 0.0;
-        for (var a = 0; a < u.RowCount; a++)
+        for (var a = 0; a < n; a++)
         {
-            for (var b = 0; b < u.ColumnCount; b++)
+            for (var b = 0; b < n; b++)
             {
-                sum += u[a, b] * v[b, a];
+                sum += uv[b * n + a] * vv[a * n + b];
             }
         }
         return sum;
