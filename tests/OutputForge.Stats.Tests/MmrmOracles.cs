@@ -14,6 +14,7 @@ internal static class MmrmOracles
 
     public static JsonElement Study => Document.Value.RootElement.GetProperty("study");
     public static JsonElement Pilot => Document.Value.RootElement.GetProperty("pilot");
+    public static JsonElement KenwardRogerCrossCheck => Document.Value.RootElement.GetProperty("krCrossCheck");
 
     public const string PilotFile = "data/cdiscpilot01/dataset-json/adqsadas.json";
 

@@ -243,6 +243,21 @@ public sealed class MmrmRTests
         SameType3(MmrmOracles.Study.GetProperty(structure).GetProperty("type3"), FitStudy(structure), structure);
 
     [Fact]
+    public void The_kenward_roger_oracle_path_reproduces_a_published_example()
+    {
+        // Before trusting it, the generator runs its gls + pbkrtest path on the sugar beets split plot of
+        // Halekoh and Hojsgaard (J Stat Softw 59(9), 2014; values recalled from memory and printed alike by
+        // pbkrtest 0.5.2's KRmodcomp): harvest effect F = 15.2 on 1 and 2.00 df, p = 0.0599.
+        var check = MmrmOracles.KenwardRogerCrossCheck;
+        var published = check.GetProperty("published");
+        var path = check.GetProperty("oraclePath");
+        Assert.Equal(published.GetProperty("F").GetDouble(), Math.Round(path.GetProperty("F").GetDouble(), 1));
+        Assert.Equal(published.GetProperty("ddf").GetDouble(), Math.Round(path.GetProperty("ddf").GetDouble(), 2));
+        Assert.Equal(published.GetProperty("p").GetDouble(), Math.Round(path.GetProperty("p").GetDouble(), 4));
+        EfficacyOracles.Close(check.GetProperty("KRmodcomp").GetProperty("ddf").GetDouble(), path.GetProperty("ddf").GetDouble(), 1e-4, "ddf against KRmodcomp");
+    }
+
+    [Fact]
     public void Compound_symmetry_kenward_roger_matches_the_random_intercept_model_of_lme4_and_pbkrtest()
     {
         // The same model written as a random subject intercept (lme4 1.1-31, REML) and analysed by emmeans
