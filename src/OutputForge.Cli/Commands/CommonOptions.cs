@@ -43,6 +43,27 @@ public static class CommonOptions
         DefaultValueFactory = _ => "refuse",
     };
 
+    /// <summary>
+    /// The tables --tables selects: null (every table) when the option is not given; a usage error when it is given with
+    /// nothing in it (e.g. --tables ''), which would otherwise run no table and still rewrite results.json and the manifest.
+    /// </summary>
+    public static bool TryTableSelection(ParseResult parse, Option<string[]> option, TextWriter error, out string[]? selected)
+    {
+        selected = null;
+        if (parse.GetResult(option) is null)
+        {
+            return true;
+        }
+        var values = parse.GetValue(option) ?? [];
+        if (values.All(v => v.Split(',').All(string.IsNullOrWhiteSpace)))
+        {
+            error.WriteLine("outputforge: error: --tables: the selection is empty; give table ids or patterns (e.g. --tables 14.2.1.1,'14.3.*'), or leave out --tables for every table");
+            return false;
+        }
+        selected = values;
+        return true;
+    }
+
     public static bool TryDataOptions(string? controlCharacters, TextWriter error, out Data.DataReadOptions options)
     {
         options = Data.DataReadOptions.Default;

@@ -41,12 +41,12 @@ public static class RunCommand
         {
             var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
             if (!valid || !CommonOptions.TryRunTime(parse.GetValue(timestamp), error, out var runTime)
-                || !CommonOptions.TryDataOptions(parse.GetValue(controlCharacters), error, out var dataOptions))
+                || !CommonOptions.TryDataOptions(parse.GetValue(controlCharacters), error, out var dataOptions)
+                || !CommonOptions.TryTableSelection(parse, tables, error, out var selected))
             {
                 return ExitCodes.Usage;
             }
             var log = CommonOptions.Log(error, parse.GetValue(quiet), parse.GetValue(verbose));
-            var selected = parse.GetValue(tables);
             PackageRunner.Run(new RunRequest(parse.GetValue(spec)!, parse.GetValue(data), parse.GetValue(output)!, renderers)
             {
                 RunTime = runTime,
@@ -54,7 +54,7 @@ public static class RunCommand
                 DataOptions = dataOptions,
                 AllowedFolders = parse.GetValue(allowFolder) ?? [],
                 CommandLine = ["outputforge", .. parse.Tokens.Select(t => t.Value)],
-                Tables = selected is { Length: > 0 } ? selected : null,
+                Tables = selected,
             }, log);
             return ExitCodes.Success;
         }));

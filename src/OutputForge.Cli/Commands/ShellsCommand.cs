@@ -31,12 +31,11 @@ public static class ShellsCommand
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
             var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
-            if (!valid)
+            if (!valid || !CommonOptions.TryTableSelection(parse, tables, error, out var selected))
             {
                 return ExitCodes.Usage;
             }
-            var selected = parse.GetValue(tables);
-            ShellPackage.Write(parse.GetValue(spec)!, parse.GetValue(output)!, renderers, selected is { Length: > 0 } ? selected : null,
+            ShellPackage.Write(parse.GetValue(spec)!, parse.GetValue(output)!, renderers, selected,
                 CommonOptions.Log(error, parse.GetValue(quiet), verbose: false));
             return ExitCodes.Success;
         }));

@@ -6,7 +6,8 @@ namespace OutputForge.Data;
 /// <summary>
 /// Reads one ADaM-style CSV file (a header row of variable names, RFC 4180 quoting, UTF-8) into a
 /// <see cref="Dataset"/> with typed columns. Every problem is a <see cref="DataException"/> naming
-/// the file, line and variable.
+/// the file, line and variable. Trailing blanks of a value are dropped (transport-file padding), so
+/// every key and text comparison (USUBJID, arms, PARAMCD, AVISIT, conditions) ignores them.
 /// </summary>
 public static class CsvDatasetReader
 {
@@ -114,11 +115,32 @@ public static class CsvDatasetReader
             {
                 warn(ReplacedWarning(path, replaced));
             }
-            return new Dataset(name, path, rows, columns.Select(c => c.Build()).ToList(), new ArraySegment<int>(lines, 0, rows));
+            var built = new List<DataColumn>(columns.Length);
+            DataException? first = null;
+            foreach (var column in columns)
+            {
+                try
+                {
+                    built.Add(column.Build(path));
+                }
+                catch (DataException e) when (first is null || e.Line < first.Line)
+                {
+                    // An unusable number: the one on the earliest line (then the leftmost column) is reported.
+                    first = e;
+                }
+                catch (DataException)
+                {
+                }
+            }
+            if (first is not null)
+            {
+                throw first;
+            }
+            return new Dataset(name, path, rows, built, new ArraySegment<int>(lines, 0, rows));
         }
         catch (CsvFormatException e)
         {
-            throw new DataException(path, e.LineNumber > 0 ? (int)e.LineNumber : null, null, DescribeMalformed(e.Message));
+            throw new DataException(path, e.LineNumber > 0 ? (int)e.LineNumber : null, null, DescribeMalformed(e));
         }
     }
 
@@ -173,6 +195,17 @@ public static class CsvDatasetReader
                     continue;
                 }
                 var value = reader.GetString(c);
+                if (value.EndsWith(' '))
+                {
+                    // Trailing blanks are the padding of fixed-length text in SAS transport files, not part of the value
+                    // (ADaM compares text without them): "S-001 " is subject S-001, and a value of blanks only is missing.
+                    value = value.TrimEnd(' ');
+                    if (value.Length == 0)
+                    {
+                        columns[c].AddMissing();
+                        continue;
+                    }
+                }
                 if (value.Length > MaxFieldLength)
                 {
                     throw new DataException(path, line, header[c],
@@ -223,12 +256,23 @@ public static class CsvDatasetReader
         return fields;
     }
 
-    /// <summary>Keeps the reader's own description of the fault, without the record and byte positions we report ourselves.</summary>
-    private static string DescribeMalformed(string message)
+    /// <summary>
+    /// The faults the CSV reader (CsvHelper 34, RFC 4180 mode) reports in malformed input. Its exception gives the record,
+    /// line and byte offset as properties but the fault only inside its message, so the fault is recognized by the
+    /// reader's fixed wording of it and our message says it in the same words, with the position we report ourselves.
+    /// </summary>
+    private static readonly string[] MalformedFaults =
+    [
+        "a quote inside an unquoted field",
+        "text after the closing quote of a quoted field",
+        "a quoted field that is never closed",
+        "a line break inside a quoted field",
+    ];
+
+    private static string DescribeMalformed(CsvFormatException e)
     {
-        var text = System.Text.RegularExpressions.Regex.Replace(message, @"^.*?\(line \d+\):\s*", string.Empty);
-        text = System.Text.RegularExpressions.Regex.Replace(text, @"\s*\(byte offset \d+\)", string.Empty).TrimEnd('.');
-        return $"malformed CSV: {text} (RFC 4180 quoting expected)";
+        var fault = MalformedFaults.FirstOrDefault(f => e.Message.Contains(f, StringComparison.Ordinal)) ?? "the record does not follow RFC 4180";
+        return $"malformed CSV: {fault} (RFC 4180 quoting expected)";
     }
 
     internal static void CheckHeader(string path, string[] header)

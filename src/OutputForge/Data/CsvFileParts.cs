@@ -173,7 +173,23 @@ public sealed class CsvFileParts
             warn(CsvDatasetReader.ReplacedWarning(_path, replaced));
         }
         var columns = new DataColumn[_header.Length];
-        Parallel.For(0, _header.Length, c => columns[c] = ColumnBuilder.Join(_columns.Select(part => part[c]).ToList()));
+        var errors = new DataException?[_header.Length];
+        Parallel.For(0, _header.Length, c =>
+        {
+            try
+            {
+                columns[c] = ColumnBuilder.Join(_columns.Select(part => part[c]).ToList(), _path);
+            }
+            catch (DataException e)
+            {
+                errors[c] = e;
+            }
+        });
+        // An unusable number: the one on the earliest line (then the leftmost column), as a reader from the start finds it.
+        if (errors.Where(e => e is not null).OrderBy(e => e!.Line).FirstOrDefault() is { } first)
+        {
+            throw first;
+        }
         var rows = _read.Sum(r => r.Rows);
         ColumnBuilder.MoveTogether(_columns.Select(part => part[0]).ToList(), _lines);
         return new Dataset(_name, _path, rows, columns, new ArraySegment<int>(_lines, 0, rows));

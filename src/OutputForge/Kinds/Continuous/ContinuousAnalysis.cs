@@ -43,9 +43,9 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         var selection = PopulationSelection.Select(study, table, data);
         var records = VisitRecords.Select(table, data);
         var dataset = records.Dataset;
-        var value = RecordVariable.Find(settings.Value, dataset, data, table.Source, "/continuous/value");
-        var baseline = settings.Baseline is null ? null : RecordVariable.Find(settings.Baseline, dataset, data, table.Source, "/continuous/baseline");
-        var change = settings.Change is null ? null : RecordVariable.Find(settings.Change, dataset, data, table.Source, "/continuous/change");
+        var value = Summarized(RecordVariable.Find(settings.Value, dataset, data, table.Source, "/continuous/value"), table.Source, "/continuous/value");
+        var baseline = settings.Baseline is null ? null : Summarized(RecordVariable.Find(settings.Baseline, dataset, data, table.Source, "/continuous/baseline"), table.Source, "/continuous/baseline");
+        var change = settings.Change is null ? null : Summarized(RecordVariable.Find(settings.Change, dataset, data, table.Source, "/continuous/change"), table.Source, "/continuous/change");
         // The model analyses the change from baseline, or the value itself for an endpoint without a baseline.
         var response = change ?? value;
         var model = settings.Model;
@@ -141,7 +141,11 @@ public sealed class ContinuousAnalysis : ITableAnalysis
 
     private static RecordVariable Numeric(RecordVariable variable, SpecSource source, string pointer, string hint) =>
         variable.IsNumeric ? variable : throw new SpecException(source.Problem(pointer,
-            $"{variable.Name} in {variable.DatasetFile} is not numeric; {hint}"));
+            $"{variable.Name} in {variable.DatasetFile} is not numeric{variable.NotNumericEvidence}; {hint}"));
+
+    /// <summary>A summarized variable must hold numbers (a text value would silently leave the summaries); an empty column has n = 0.</summary>
+    private static RecordVariable Summarized(RecordVariable variable, SpecSource source, string pointer) =>
+        variable.IsNumeric || variable.IsEmpty ? variable : Numeric(variable, source, pointer, "a continuous summary needs numbers");
 
     private static void AddSummary(List<ResultRow> rows, string key, string label, RecordVariable variable,
         Dictionary<TreatmentArm, List<(string Subject, int Row)>> subjectsOf, IReadOnlyList<ResultColumn> columns, int d)

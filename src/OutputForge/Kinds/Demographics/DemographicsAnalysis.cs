@@ -46,7 +46,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
         var subjects = SubjectRows.Of(adsl, selection);
         var columns = SummaryColumns.For(selection, study, settings.Total);
         var resultColumns = SummaryColumns.ToResultColumns(columns);
-        var tested = settings.Variables.Any(v => v.Test != "none");
+        var tested = settings.Variables.Any(v => v.Test != SummaryTest.None);
         if (tested)
         {
             resultColumns.Add(new ResultColumn(PValueColumn, "p-value [a]", null));
@@ -64,22 +64,22 @@ public sealed class DemographicsAnalysis : ITableAnalysis
             {
                 throw new SpecException(table.Source.Problem(pointer + "/variable", $"{spec.Variable} is summarized twice in this table"));
             }
-            var column = adsl.Find(spec.Variable) ?? throw new SpecException(table.Source.Problem(pointer + "/variable",
+            var column = adsl.Find(spec.Variable) ?? throw new SpecException(table.Source.Problem(SpecProblemCode.UnknownVariable, pointer + "/variable",
                 $"ADSL has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.Columns.Select(c => c.Name).ToList())}"));
             List<ResultRow> blockRows;
             TestResult? test = null;
-            if (spec.Type == "continuous")
+            if (spec.Type == DemographicVariableType.Continuous)
             {
                 if (column.Kind != Expressions.VariableKind.Number)
                 {
                     throw new SpecException(table.Source.Problem(pointer + "/type",
-                        $"{spec.Variable} is not numeric in {Path.GetFileName(adsl.File)}, so it cannot be summarized as continuous (use \"categorical\")"));
+                        $"{spec.Variable} is not numeric in {Path.GetFileName(adsl.File)}{(column.TextEvidence is { } evidence ? $" ({evidence} is not a number)" : "")}, so it cannot be summarized as continuous (use \"categorical\")"));
                 }
                 var (continuousRows, armValues, continuousWarnings) = ContinuousSummary.Summarize(spec, settings, column, subjects,
                     selection.Arms, columns, table.Source, pointer);
                 blockRows = continuousRows;
                 warnings.AddRange(continuousWarnings.Select(w => $"{label}: {w}"));
-                if (spec.Test == "anova")
+                if (spec.Test == SummaryTest.Anova)
                 {
                     test = AnovaTest(armValues);
                     warnings.AddRange(test.Notes.Select(n => $"{label}: {n}"));
@@ -95,7 +95,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 var block = CategoricalSummary.Summarize(request, adsl, subjects, selection.Arms, columns, settings.Percent, table.Source, 1);
                 blockRows = block.Rows.ToList();
                 warnings.AddRange(block.Warnings.Select(w => $"{label}: {w}"));
-                if (spec.Test != "none")
+                if (spec.Test != SummaryTest.None)
                 {
                     (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label);
                     warnings.AddRange(testWarnings);

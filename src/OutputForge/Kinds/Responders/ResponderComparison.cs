@@ -13,12 +13,9 @@ public sealed record ResponderComparison(
     TestResult Test,
     ExpectedCountDiagnostics Expected)
 {
-    /// <summary>
-    /// "auto" follows Cochran's rule (common practice): Pearson's chi-square unless an expected
-    /// count is below 5, then Fisher's exact test.
-    /// </summary>
+    /// <summary>The test as <see cref="TableTests"/> runs the spec's choice (auto: Cochran's rule).</summary>
     public static ResponderComparison Compute(TreatmentArm arm, ResponderCounts active, ResponderCounts control,
-        DifferenceCiMethod method, double level, string testChoice)
+        DifferenceCiMethod method, double level, TableTest testChoice)
     {
         var difference = ProportionDifferenceInterval.Compute(
             active.Responders, active.Denominator, control.Responders, control.Denominator, method, level);
@@ -28,14 +25,13 @@ public sealed record ResponderComparison(
             { control.Responders, control.NonResponders },
         };
         var expected = ContingencyTable.Diagnose(table);
-        var test = testChoice switch
+        var test = TableTests.Compute(table, testChoice);
+        if (active.Denominator == 0 || control.Denominator == 0)
         {
-            "fisher" => FisherExactTest.Compute(table),
-            "chi-square" => PearsonChiSquareTest.Compute(table),
-            "yates" => YatesChiSquareTest.Compute(table),
-            "likelihood-ratio" => LikelihoodRatioChiSquareTest.Compute(table),
-            _ => expected.CellsBelowFive > 0 ? FisherExactTest.Compute(table) : PearsonChiSquareTest.Compute(table),
-        };
+            // A table with an empty row admits only itself, so an exact test gives p = 1: a number that says nothing
+            // about an arm without subjects, shown as NE instead.
+            test = TestResult.NotEstimable(test.Method, $"no subjects in {(active.Denominator == 0 ? arm.Label : "the control arm")}");
+        }
         return new ResponderComparison(arm, difference, test, expected);
     }
 }
