@@ -1,6 +1,7 @@
 using OutputForge.Layout;
 using OutputForge.Pipeline.Manifest;
 using OutputForge.Rendering;
+using OutputForge.Results;
 using OutputForge.Rendering.Figures;
 using OutputForge.Spec;
 using OutputForge.Templates;
@@ -27,7 +28,8 @@ internal sealed class TableBuilder(RunRequest request, PreparedRun prepared)
         times.Lap("analysis");
         if (result.Figure is { } drawn && FigurePainter.Warning(drawn) is { } drawing)
         {
-            result = result with { Warnings = [.. result.Warnings, drawing] };
+            // Last among the table's warnings, where the analysis placed it before figures were drawn by Rendering.
+            result = result with { Notes = [.. result.Notes, ResultNote.Warning(NoteKind.Text, NoteSubject.None, ("text", drawing))] };
         }
         if (prepared.DataWarnings.Count > 0)
         {
@@ -65,6 +67,6 @@ internal sealed class TableBuilder(RunRequest request, PreparedRun prepared)
         {
             files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), FigurePainter.Paint(picture).Png));
         }
-        return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
+        return new BuiltTable(laidOut, TableNotes.Of(result).Warnings, manifest, files, times);
     }
 }
