@@ -109,6 +109,12 @@ public static partial class DatasetJsonReader
             throw new DataException(path, null, null,
                 $"invalid JSON at line {e.LineNumber + 1}, byte {e.BytePositionInLine + 1} ({parser.Where}): {Reason(e.Message)}");
         }
+        catch (InvalidOperationException)
+        {
+            // A text of the metadata (a name, a label) that is not a string: invalid UTF-8, or a lone surrogate escape.
+            throw new DataException(path, null, null,
+                $"{parser.Where}: a text is not valid UTF-8 or holds a lone UTF-16 surrogate escape (such as \\ud800 without its pair); Dataset-JSON files are UTF-8");
+        }
         return new PumpResult(parser, -1, default, false);
     }
 
@@ -186,7 +192,8 @@ public static partial class DatasetJsonReader
         private readonly HashSet<string> _fractionalIntegers = new(StringComparer.Ordinal);
 
         /// <summary>Where the reader is, for messages.</summary>
-        public string Where => _cell >= 0 ? $"row {_rows + 1}" : _rows > 0 ? $"after row {_rows}" : _columnsSeen ? "before the first row" : "in the metadata";
+        public string Where => _cell >= 0 ? $"row {_rows + 1}" : _rows > 0 ? $"after row {_rows}"
+            : _section == Section.Columns ? $"in columns[{_columns.Count}]" : _columnsSeen ? "before the first row" : "in the metadata";
 
         private DataException Error(string problem) => new(path, null, null, problem);
 
@@ -447,6 +454,11 @@ public static partial class DatasetJsonReader
             // Trailing blanks, the document text limits and control characters: the rule of every reader (TextValueRule).
             // A value without escapes stays bytes while it can (a repeated value is then never decoded again); one with
             // escapes, or with a byte that may be a forbidden character, is looked at as text.
+            if (!System.Text.Unicode.Utf8.IsValid(reader.ValueSpan))
+            {
+                // Decoding would silently turn the bytes into U+FFFD (a raw surrogate, ED A0 80, is such bytes too).
+                throw RowError("the value is not valid UTF-8 (Latin-1 or another encoding?); Dataset-JSON files are UTF-8");
+            }
             var replaced = 0;
             string? text = null;
             var bytes = ReadOnlySpan<byte>.Empty;
