@@ -12,9 +12,11 @@ public static class CommonOptions
         Required = true,
     };
 
-    public static Option<string[]> Formats() => new("--format", "-f")
+    /// <param name="alsoWritten">What the command writes whatever the formats (e.g. "results.json and manifest.json are always written."), or null.</param>
+    public static Option<string[]> Formats(string? alsoWritten = null) => new("--format", "-f")
     {
-        Description = $"Output formats, comma-separated or repeated: {string.Join(", ", OutputFormats.Names)} (default: {string.Join(",", OutputFormats.Default)}). results.json is always written.",
+        Description = $"Output formats, comma-separated or repeated: {string.Join(", ", OutputFormats.Names)} (default: {string.Join(",", OutputFormats.Default)})." +
+                      (alsoWritten is null ? string.Empty : " " + alsoWritten),
         AllowMultipleArgumentsPerToken = true,
     };
 

@@ -32,7 +32,7 @@ public sealed class LinearModelFit
     public int ResidualDegreesOfFreedom { get; }
 
     /// <summary>
-    /// The residual variance is zero up to rounding relative to the response's scale (<see cref="Stats.DegenerateVariance"/>):
+    /// The residual variance is zero up to rounding relative to the response's scale (<see cref="DegenerateVariance"/>):
     /// the coefficients fit exactly, but standard errors, intervals and tests are rounding noise.
     /// </summary>
     public bool HasDegenerateVariance { get; init; }

@@ -27,8 +27,10 @@ public static class PackageRunner
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder, package.Folders);
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
-        var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
+        var dataFolder = PackageInputs.DataFolder(package, request.DataFolder);
         OutputPlace.CheckApart(request.OutputFolder, outputLock.Folder, dataFolder, study.Folder);
+        // The selection is a command-line choice: a pattern that matches no table stops the run before any data is read.
+        var selected = TableSelection.Select(package.Tables, request.Tables);
         var dataWarnings = new List<string>();
         var reading = Stopwatch.StartNew();
         var data = StudyData.Load(study, dataFolder, request.DataOptions with { ReadableFolders = package.Folders.Folders }, dataWarnings.Add);
@@ -39,7 +41,6 @@ public static class PackageRunner
         var digesting = Stopwatch.StartNew();
         var inputs = RunInputs.Read(package, data);
         log.Detail($"inputs: SHA-256 digests of the spec and data files in {digesting.Elapsed.TotalMilliseconds:0} ms");
-        var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
         {
             DataDigests = inputs.Data.Where(d => d.Dataset is not null)
@@ -49,7 +50,12 @@ public static class PackageRunner
         var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
         var context = new LayoutContext(templates, ColumnGroupsOf(study));
-        var workbook = request.Combined && selected.Count > 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
+        // With --tables the combined files still cover every table of the folder: the kept tables are rebuilt, and used only
+        // where they come out byte for byte as the files kept in the folder (KeptTablesForCombined).
+        var keptForCombined = request.Combined && request.Tables is not null
+            ? package.Tables.Where(t => !selected.Contains(t)).ToList()
+            : [];
+        var workbook = request.Combined && selected.Count > 0 && keptForCombined.Count == 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
             ? new CombinedWorkbookBuilder(selected.Select(t => t.Id).ToList(), run.RunTime)
             : null;
         BuiltTable[] built;
@@ -63,6 +69,14 @@ public static class PackageRunner
             throw;
         }
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        var keptLaidOut = keptForCombined.Count == 0
+            ? []
+            : KeptTablesForCombined.Rebuild(keptForCombined, request.OutputFolder, run,
+                (table, keptRun) =>
+                {
+                    var kept = BuildTable(table, request, study, data, dataWarnings, inputs, keptRun, studyLine, page, context);
+                    return (kept.Table, kept.Files);
+                });
         log.Detail(CollectorFacts.Describe());
         var writing = new StageTimes();
         var manifestTables = built.Select(b => b.Manifest).ToList();
@@ -94,7 +108,7 @@ public static class PackageRunner
             {
                 if (request.Combined && laidOut.Count > 0)
                 {
-                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime, workbook);
+                    combined = CombinedOutputs.Render(request.Renderers, [.. laidOut.Select(t => t.Table), .. keptLaidOut], run.RunTime, workbook);
                 }
             },
             () =>
@@ -229,22 +243,6 @@ public static class PackageRunner
             files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
         }
         return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
-    }
-
-    private static string DefaultDataFolder(SpecPackage package)
-    {
-        var study = package.Study;
-        if (study.Data.Folder is null)
-        {
-            throw new SpecException(study.Source.Problem("/data",
-                "no data folder: give --data on the command line or data.folder in the study spec"));
-        }
-        var folder = Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
-        if (!package.Folders.Allows(folder))
-        {
-            throw new SpecException(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder) + ", or give --data"));
-        }
-        return folder;
     }
 
     /// <summary>The study identification of the page header: "QF217-301 (Sponsor)".</summary>

@@ -52,7 +52,9 @@ internal static class SpecFileReader
         catch (JsonException e)
         {
             var message = e.Message;
-            var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+            // The reader's message repeats the position (0-based "LineNumber: 8 | BytePositionInLine: 2") and the path;
+            // the problem gives both once, 1-based, in its own format.
+            var cut = message.IndexOf(" LineNumber:", StringComparison.Ordinal) is > 0 and var at ? at : message.IndexOf(" Path:", StringComparison.Ordinal);
             if (cut > 0)
             {
                 message = message[..cut];
@@ -195,11 +197,29 @@ internal static class SpecFileReader
                     with { Key = missing.Count == 1 ? missing[0] : null, Expected = missing };
             case "type":
                 return source.Problem(SpecProblemCode.WrongType, pointer, $"expected {Describe(keywordNode)}: {message}");
+            case "pattern" when evaluationPath.EndsWith("/propertyNames", StringComparison.Ordinal):
+                return KeyPatternProblem(pointer, keywordNode?.GetValue<string>(), source);
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal):
                 return source.Problem(pointer, "expected a data file name in the data folder (no folders), ending in .csv, .xpt, .json or .ndjson");
             default:
                 return source.Problem(pointer, message);
         }
+    }
+
+    /// <summary>The schemas' one pattern for names chosen by the spec's author (populations, datasets).</summary>
+    private const string NamePattern = "^[a-z][a-z0-9_]*$";
+
+    /// <summary>A key that is a name of the author's choosing but not of the allowed form: what the form is, and the key that would do.</summary>
+    private static SpecProblem KeyPatternProblem(string pointer, string? pattern, SpecSource source)
+    {
+        var key = pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
+        if (pattern != NamePattern)
+        {
+            return source.KeyProblem(pointer, $"key '{key}' does not have the required form (the pattern {pattern})");
+        }
+        var lower = key.ToLowerInvariant();
+        var suggestion = System.Text.RegularExpressions.Regex.IsMatch(lower, NamePattern) ? $" (did you mean '{lower}'?)" : string.Empty;
+        return source.KeyProblem(pointer, $"key '{key}' must start with a lower-case letter and hold only lower-case letters, digits and '_'{suggestion}");
     }
 
     /// <summary>

@@ -10,13 +10,14 @@ namespace OutputForge.Analysis.Summaries;
 /// </summary>
 public static class AssociationTest
 {
-    public static (TestResult Test, List<string> Warnings) Run(SummaryTest choice, int[,] table, string what)
+    /// <param name="monteCarlo">Fisher's exact test's fallback beyond exact enumeration (<see cref="ExactTestFallback"/>); null: NE.</param>
+    public static (TestResult Test, List<string> Warnings) Run(SummaryTest choice, int[,] table, string what, Stats.Exact.FisherMonteCarloSettings? monteCarlo = null)
     {
         var warnings = new List<string>();
         TestResult test;
         if (choice == SummaryTest.Fisher)
         {
-            test = FisherExactTest.Compute(table);
+            test = FisherExactTest.Compute(table, monteCarlo);
         }
         else
         {

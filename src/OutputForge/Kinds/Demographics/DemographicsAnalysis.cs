@@ -97,7 +97,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 warnings.AddRange(block.Warnings.Select(w => $"{label}: {w}"));
                 if (spec.Test != SummaryTest.None)
                 {
-                    (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label);
+                    (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label, ExactTestFallback.For(study));
                     warnings.AddRange(testWarnings);
                 }
             }

@@ -60,7 +60,7 @@ public sealed class DispositionAnalysis : ITableAnalysis
             var headingCells = new List<ResultCell>();
             if (spec.Test != SummaryTest.None)
             {
-                var (test, testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, spec.Label);
+                var (test, testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, spec.Label, ExactTestFallback.For(study));
                 warnings.AddRange(testWarnings);
                 headingCells.Add(CellFactory.PValueOf(PValueColumn, test));
                 testsUsed.Add((spec.Label, test.Method));
