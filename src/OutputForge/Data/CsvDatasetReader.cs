@@ -195,36 +195,24 @@ public static class CsvDatasetReader
                     columns[c].AddText(repeated, line);
                     continue;
                 }
-                var value = reader.GetString(c);
-                if (value.EndsWith(' '))
+                // Trailing blanks, the document text limits and control characters: the rule of every reader (TextValueRule).
+                var value = TextValueRule.Unpadded(reader.GetString(c));
+                if (value is null)
                 {
-                    // Trailing blanks are the padding of fixed-length text in SAS transport files, not part of the value
-                    // (ADaM compares text without them): "S-001 " is subject S-001, and a value of blanks only is missing.
-                    value = value.TrimEnd(' ');
-                    if (value.Length == 0)
-                    {
-                        columns[c].AddMissing();
-                        continue;
-                    }
+                    columns[c].AddMissing();
+                    continue;
                 }
                 if (value.Length > MaxFieldLength)
                 {
                     throw new DataException(path, line, header[c],
                         FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
                 }
-                if (value.Length > DocumentText.MaxLength)
+                var read = value;
+                value = TextValueRule.Checked(value, options.ControlCharacters, ref replaced, out var problem, TextValueRule.MayHoldForbidden(utf8))
+                    ?? throw new DataException(path, line, header[c], problem!);
+                if (ReferenceEquals(value, read))
                 {
-                    throw new DataException(path, line, header[c], DocumentText.TooLong(value.Length));
-                }
-                // Control characters are single bytes below 0x20 in UTF-8, noncharacters start with a byte from 0xEF to
-                // 0xF4: look for them only when such a byte is present.
-                if ((utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 || utf8.IndexOfAnyInRange((byte)0xEF, (byte)0xF4) >= 0)
-                    && ControlCharacters.IndexIn(value) >= 0)
-                {
-                    value = HandleControlCharacter(path, line, header[c], value, options, ref replaced);
-                }
-                else
-                {
+                    // Only values kept as read are remembered (RepeatedText).
                     repeats[c].Remember(utf8, value);
                 }
                 columns[c].AddText(value, line);
@@ -232,19 +220,6 @@ public static class CsvDatasetReader
             lines[rowOffset + rows++] = line;
         }
         return (rows, replaced);
-    }
-
-    private static string HandleControlCharacter(string path, int line, string variable, string value,
-        DataReadOptions options, ref int replaced)
-    {
-        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
-        {
-            var at = ControlCharacters.IndexIn(value);
-            throw new DataException(path, line, variable,
-                $"the value holds {ControlCharacters.Describe(value, at)} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
-        }
-        replaced++;
-        return ControlCharacters.Replace(value);
     }
 
     internal static string[] Fields(CsvReader reader)
