@@ -242,7 +242,7 @@ public static class PackageRunner
         {
             files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
         }
-        return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
+        return new BuiltTable(laidOut, TableNotes.Of(result).Warnings, manifest, files, times);
     }
 
     /// <summary>The study identification of the page header: "QF217-301 (Sponsor)".</summary>

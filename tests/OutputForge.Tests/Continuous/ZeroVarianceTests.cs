@@ -46,7 +46,7 @@ public sealed class ZeroVarianceTests
         var p = Statistic(result, "week-4-lsdiff-p-value", "active", "pValue");
         Assert.Null(p.Value);
         Assert.Contains("the variance is zero up to rounding", p.NotEstimableReason);
-        Assert.Contains(result.Warnings, w => w.Contains("Week 4: the ANCOVA could not be fitted: the variance is zero up to rounding"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("Week 4: the ANCOVA could not be fitted: the variance is zero up to rounding"));
         // The descriptive rows still show the values: mean -1.5, SD 0.
         Assert.Equal(-1.5, Statistic(result, "week-4-change-mean", "active", "mean").Value);
         Assert.Equal(0, Statistic(result, "week-4-change-mean", "active", "sd").Value);
@@ -57,6 +57,6 @@ public sealed class ZeroVarianceTests
     {
         var result = Analyze(Adeff(i => i % 3 == 0 ? "-1.4" : "-1.5"));
         Assert.NotNull(Statistic(result, "week-4-lsdiff-p-value", "active", "pValue").Value);
-        Assert.DoesNotContain(result.Warnings, w => w.Contains("zero up to rounding"));
+        Assert.DoesNotContain(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("zero up to rounding"));
     }
 }

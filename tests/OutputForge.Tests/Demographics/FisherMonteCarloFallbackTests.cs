@@ -68,9 +68,9 @@ public sealed class FisherMonteCarloFallbackTests
 
         var expected = FisherMonteCarlo.Estimate(Counts, FisherMonteCarloSettings.Default);
         Assert.Equal(expected.PValue, PValue(result).Value);
-        Assert.Contains(result.Warnings, w => w.Contains("Monte Carlo estimate (Agresti, Wackerly and Boyett 1979)", StringComparison.Ordinal)
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("Monte Carlo estimate (Agresti, Wackerly and Boyett 1979)", StringComparison.Ordinal)
                                               && w.Contains("from 100,000 tables sampled with the observed margins (Patefield 1981), seed 20261201", StringComparison.Ordinal));
-        Assert.Contains(result.MethodNotes, f => f.Contains(FisherExactTest.MonteCarloMethodName + " for Race, n (%)", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, f => f.Contains(FisherExactTest.MonteCarloMethodName + " for Race, n (%)", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -79,7 +79,7 @@ public sealed class FisherMonteCarloFallbackTests
         var result = Analyze("\"exactTests\": { \"samples\": 5000, \"seed\": 7 },");
 
         Assert.Equal(FisherMonteCarlo.Estimate(Counts, new FisherMonteCarloSettings(5000, 7)).PValue, PValue(result).Value);
-        Assert.Contains(result.Warnings, w => w.Contains("from 5,000 tables sampled with the observed margins (Patefield 1981), seed 7", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("from 5,000 tables sampled with the observed margins (Patefield 1981), seed 7", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -88,7 +88,7 @@ public sealed class FisherMonteCarloFallbackTests
         var result = Analyze("\"exactTests\": { \"fallback\": \"not-estimable\" },");
 
         Assert.Null(PValue(result).Value);
-        Assert.Contains(result.Warnings, w => w.Contains("Fisher's exact test not estimable: the table is too large for exact enumeration", StringComparison.Ordinal));
-        Assert.DoesNotContain(result.Warnings, w => w.Contains("Monte Carlo", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("Fisher's exact test not estimable: the table is too large for exact enumeration", StringComparison.Ordinal));
+        Assert.DoesNotContain(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("Monte Carlo", StringComparison.Ordinal));
     }
 }
