@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 
 namespace OutputForge.Choices;
@@ -17,26 +18,26 @@ public static class MethodCatalogPage
         text.Append(Start).Append('\n');
         foreach (var set in MethodCatalog.All)
         {
-            text.Append('\n').Append($"**{set.Title}** (`{set.Key}`)").Append('\n').Append('\n');
+            text.Append('\n').Append(CultureInfo.InvariantCulture, $"**{set.Title}** (`{set.Key}`)").Append('\n').Append('\n');
             text.Append("| name | meaning |\n| --- | --- |\n");
             foreach (var name in set.Names)
             {
-                text.Append($"| `{name}`{(name == set.DefaultName ? " (default)" : "")} | {set.Describe(name)} |\n");
+                text.Append(CultureInfo.InvariantCulture, $"| `{name}`{(name == set.DefaultName ? " (default)" : "")} | {set.Describe(name)} |\n");
             }
             foreach (var retired in set.Retired)
             {
-                text.Append($"| `{retired.Old}` | no longer accepted: an error names `{retired.New}` |\n");
+                text.Append(CultureInfo.InvariantCulture, $"| `{retired.Old}` | no longer accepted: an error names `{retired.New}` |\n");
             }
         }
         text.Append('\n').Append("**Numbers**\n\n| option | accepted | default |\n| --- | --- | --- |\n");
         foreach (var range in MethodCatalog.Ranges)
         {
             var accepted = range.Describe();
-            text.Append($"| `{range.Key}` | {accepted[..accepted.IndexOf(" (e.g.", StringComparison.Ordinal)]} | {range.Default.ToString("R", System.Globalization.CultureInfo.InvariantCulture)} |\n");
+            text.Append(CultureInfo.InvariantCulture, $"| `{range.Key}` | {accepted[..accepted.IndexOf(" (e.g.", StringComparison.Ordinal)]} | {range.Default.ToString("R", System.Globalization.CultureInfo.InvariantCulture)} |\n");
         }
         foreach (var key in MethodCatalog.RetiredKeys)
         {
-            text.Append('\n').Append($"The key `{key.Old}` is no longer accepted: an error names `{key.New}`.\n");
+            text.Append('\n').Append(CultureInfo.InvariantCulture, $"The key `{key.Old}` is no longer accepted: an error names `{key.New}`.\n");
         }
         text.Append('\n').Append(End);
         return text.ToString();

@@ -3,7 +3,7 @@ using OutputForge.Rendering.Excel;
 namespace OutputForge.Workflow.Changes;
 
 /// <summary>The changes report as a workbook: Summary (inputs and tables), Numbers (every changed number, old and new), Rows and columns (appeared or disappeared).</summary>
-public static class ChangesWorkbook
+internal static class ChangesWorkbook
 {
     public static void Save(RunChanges changes, string path)
     {

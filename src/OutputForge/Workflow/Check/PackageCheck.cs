@@ -11,7 +11,7 @@ namespace OutputForge.Workflow.Check;
 /// The inputs are resolved as a run resolves them (<see cref="PackageInputs"/>, the same options), so a
 /// package that check passes is not refused by run.
 /// </summary>
-public static class PackageCheck
+internal static class PackageCheck
 {
     public static CheckReport Run(string specPath, string? dataFolder) => Run(specPath, dataFolder, PackageInputOptions.Default);
 

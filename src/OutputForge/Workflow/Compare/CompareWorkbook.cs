@@ -3,7 +3,7 @@ using OutputForge.Rendering.Excel;
 namespace OutputForge.Workflow.Compare;
 
 /// <summary>The compare report as a workbook: Summary, Mismatches, Only in QC, Only in production and Matched sheets.</summary>
-public static class CompareWorkbook
+internal static class CompareWorkbook
 {
     private static readonly string[] NumberHeader =
         ["QC line", "table", "row", "column", "statistic", "row label", "column label", "production shown", "production value", "QC value", "reason"];

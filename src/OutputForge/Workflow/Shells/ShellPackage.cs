@@ -10,7 +10,7 @@ namespace OutputForge.Workflow.Shells;
 /// Writes the mock shells of a study's tables (shell-{id}.docx, .xlsx, ...) from the specs alone,
 /// staged like a run so the output folder receives all of them or none.
 /// </summary>
-public static class ShellPackage
+internal static class ShellPackage
 {
     /// <param name="runTime">The time printed in the shells and stamped in their packages; null means now.</param>
     public static IReadOnlyList<string> Write(string specPath, string outputFolder, IReadOnlyList<ITableRenderer> renderers,
