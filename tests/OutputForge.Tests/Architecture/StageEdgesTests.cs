@@ -90,7 +90,7 @@ public class StageEdgesTests
         {
             var relative = Path.GetRelativePath(core, file).Replace('\\', '/');
             var stage = relative.Split('/')[0];
-            if (!Allowed.TryGetValue(stage, out var allowed) || relative.Contains("/obj/") || relative.StartsWith("obj/") || relative.StartsWith("bin/"))
+            if (!Allowed.TryGetValue(stage, out var allowed) || relative.Contains("/obj/") || relative.StartsWith("obj/", StringComparison.Ordinal) || relative.StartsWith("bin/", StringComparison.Ordinal))
             {
                 continue;
             }
