@@ -16,6 +16,19 @@ public sealed class CalcOutput(TextWriter output, bool json)
 
     public void Test(string name, TestResult test) => _entries.Add((name, test));
 
+    public void Number(string name, double value) => _entries.Add((name, value));
+
+    public void Text(string name, string value) => _entries.Add((name, value));
+
+    /// <summary>A group of results under one name (a JSON object; "name.entry" lines in text).</summary>
+    public void Group(string name, CalcOutput group) => _entries.Add((name, group));
+
+    /// <summary>Groups in order (a JSON array; "name[1].entry" lines in text).</summary>
+    public void Groups(string name, IReadOnlyList<CalcOutput> groups) => _entries.Add((name, groups));
+
+    /// <summary>An empty group to fill and pass to <see cref="Group"/> or <see cref="Groups"/>.</summary>
+    public static CalcOutput Nested() => new(TextWriter.Null, true);
+
     /// <summary>Writes one result as the top-level object (the single-result commands).</summary>
     public void Flush(bool single)
     {
@@ -30,26 +43,82 @@ public sealed class CalcOutput(TextWriter output, bool json)
                 }
                 else
                 {
-                    writer.WriteStartObject();
-                    foreach (var (name, value) in _entries)
-                    {
-                        writer.WritePropertyName(name);
-                        WriteValue(writer, value);
-                    }
-                    writer.WriteEndObject();
+                    WriteObject(writer);
                 }
             }
             output.WriteLine(System.Text.Encoding.UTF8.GetString(stream.ToArray()));
             return;
         }
+        foreach (var line in Lines(""))
+        {
+            output.WriteLine(line);
+        }
+    }
+
+    private IEnumerable<string> Lines(string prefix)
+    {
         foreach (var (name, value) in _entries)
         {
-            output.WriteLine(Text(name, value));
+            switch (value)
+            {
+                case CalcOutput group:
+                    foreach (var line in group.Lines($"{prefix}{name}."))
+                    {
+                        yield return line;
+                    }
+                    break;
+                case IReadOnlyList<CalcOutput> groups:
+                    for (var i = 0; i < groups.Count; i++)
+                    {
+                        foreach (var line in groups[i].Lines($"{prefix}{name}[{i + 1}]."))
+                        {
+                            yield return line;
+                        }
+                    }
+                    break;
+                default:
+                    yield return Text(prefix + name, value);
+                    break;
+            }
         }
+    }
+
+    private void WriteObject(Utf8JsonWriter writer)
+    {
+        writer.WriteStartObject();
+        foreach (var (name, value) in _entries)
+        {
+            writer.WritePropertyName(name);
+            WriteValue(writer, value);
+        }
+        writer.WriteEndObject();
     }
 
     private static void WriteValue(Utf8JsonWriter writer, object value)
     {
+        switch (value)
+        {
+            case double number when double.IsFinite(number):
+                writer.WriteNumberValue(number);
+                return;
+            case double:
+                writer.WriteNullValue();
+                return;
+            case string text:
+                writer.WriteStringValue(text);
+                return;
+            case CalcOutput group:
+                group.WriteObject(writer);
+                return;
+            case IReadOnlyList<CalcOutput> groups:
+                writer.WriteStartArray();
+                foreach (var group in groups)
+                {
+                    group.WriteObject(writer);
+                }
+                writer.WriteEndArray();
+                return;
+        }
         writer.WriteStartObject();
         switch (value)
         {
@@ -107,6 +176,8 @@ public sealed class CalcOutput(TextWriter output, bool json)
             TestResult t when t.IsEstimable => $"{name}: {t.Method}" + (t.Statistic is { } s ? $", statistic {F(s)}" : "") +
                 (t.DegreesOfFreedom is { } df ? $", df {F(df)}" : "") + $", p-value {F(t.PValue)}" + NoteText(null, t.Notes),
             TestResult t => $"{name}: {t.Method} not estimable ({t.NotEstimableReason})",
+            double number => $"{name}: {F(number)}",
+            string text => $"{name}: {text}",
             _ => name,
         };
     }

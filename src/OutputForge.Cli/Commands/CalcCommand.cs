@@ -9,7 +9,8 @@ namespace OutputForge.Cli.Commands;
 /// <summary>
 /// `outputforge calc`: single numbers for a QC statistician, without a spec: a proportion's
 /// interval, a difference of proportions, a test on an r x c table, and the stratified
-/// (Cochran-Mantel-Haenszel) family. JSON on stdout with --json, readable lines otherwise.
+/// (Cochran-Mantel-Haenszel) family; a difference against a margin, and, from a CSV file, an adjusted logistic
+/// regression and a mixed model for repeated measures. JSON on stdout with --json, readable lines otherwise.
 /// Method names, the test choice and the level's range are those of the specs (<see cref="MethodCatalog"/>),
 /// and the methods are the ones the tables run.
 /// </summary>
@@ -17,23 +18,26 @@ public static class CalcCommand
 {
     public static Command Create(TextWriter output, TextWriter error)
     {
-        var command = new Command("calc", "Compute single statistics for QC checks: proportion, difference, table, stratified.");
+        var command = new Command("calc", "Compute single statistics for QC checks: proportion, difference, table, stratified, noninferiority, logistic, mmrm.");
         command.Subcommands.Add(Proportion(output, error));
         command.Subcommands.Add(Difference(output, error));
         command.Subcommands.Add(Table(output, error));
         command.Subcommands.Add(Stratified(output, error));
+        command.Subcommands.Add(CalcNonInferiorityCommand.Create(output, error));
+        command.Subcommands.Add(CalcLogisticCommand.Create(output, error));
+        command.Subcommands.Add(CalcMmrmCommand.Create(output, error));
         return command;
     }
 
-    private static Option<bool> Json() => new("--json") { Description = "Write the result as JSON on stdout." };
+    internal static Option<bool> Json() => new("--json") { Description = "Write the result as JSON on stdout." };
 
-    private static Option<double> Level() => new("--level")
+    internal static Option<double> Level() => new("--level")
     {
         Description = $"Confidence level, {MethodCatalog.ConfidenceLevel.Describe()}.",
         DefaultValueFactory = _ => MethodCatalog.ConfidenceLevel.Default,
     };
 
-    private static Option<int> Count(string name, string description) => new(name) { Description = description, Required = true };
+    internal static Option<int> Count(string name, string description) => new(name) { Description = description, Required = true };
 
     private static Option<string> Method(IEnumerable<string> names) => new("--method")
     {
@@ -179,12 +183,12 @@ public static class CalcCommand
         return values;
     }
 
-    private static T Choose<T>(OptionSet<T> choices, string name, string option = "--method") where T : struct, Enum =>
+    internal static T Choose<T>(OptionSet<T> choices, string name, string option = "--method") where T : struct, Enum =>
         choices.TryParse(name, out var chosen)
             ? chosen
             : throw new CalcInputException($"{option}: unknown '{name}'{choices.Hint(name)}");
 
-    private static void CheckEvents(int events, int n, string eventsOption, string nOption)
+    internal static void CheckEvents(int events, int n, string eventsOption, string nOption)
     {
         if (n < 0 || events < 0)
         {
@@ -196,19 +200,27 @@ public static class CalcCommand
         }
     }
 
-    private static double CheckLevel(double level) =>
+    internal static double CheckLevel(double level) =>
         MethodCatalog.ConfidenceLevel.Contains(level)
             ? level
             : throw new CalcInputException(string.Create(System.Globalization.CultureInfo.InvariantCulture,
                 $"--level: {level} is not {MethodCatalog.ConfidenceLevel.Describe()}"));
 
-    /// <summary>Every input of calc is a command-line value, so any input it cannot use is a usage error (exit code 1).</summary>
-    private static int Run(TextWriter error, Action work)
+    /// <summary>
+    /// A command-line value calc cannot use is a usage error (exit code 1); a problem inside the CSV file a model command
+    /// reads is a dataset problem (exit code 2), named by file, line and variable.
+    /// </summary>
+    internal static int Run(TextWriter error, Action work)
     {
         try
         {
             work();
             return ExitCodes.Success;
+        }
+        catch (OutputForge.Data.DataException e)
+        {
+            error.WriteLine($"outputforge: error: {e.Message}");
+            return ExitCodes.InputError;
         }
         catch (CalcInputException e)
         {

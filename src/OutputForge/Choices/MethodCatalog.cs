@@ -167,6 +167,43 @@ public static class MethodCatalog
         new("count-percent", Choices.ZeroDisplay.CountPercent, "0 (0.0)"),
     ], Choices.ZeroDisplay.Count);
 
+    public static readonly OptionSet<Stats.Models.LogisticEstimation> LogisticEstimation = new("logistic-estimation", "Estimation of an adjusted logistic regression",
+    [
+        new("firth-when-separated", Stats.Models.LogisticEstimation.FirthWhenSeparated, "maximum likelihood, or Firth's penalized likelihood when the responses are separated (Heinze and Schemper 2002; a note says so)"),
+        new("maximum-likelihood", Stats.Models.LogisticEstimation.MaximumLikelihood, "maximum likelihood only (a separated design is not estimable)"),
+        new("firth", Stats.Models.LogisticEstimation.Firth, "Firth's (1993) penalized likelihood"),
+    ], Stats.Models.LogisticEstimation.FirthWhenSeparated);
+
+    public static readonly OptionSet<Stats.Proportions.MarginHypothesis> MarginHypothesis = new("margin-hypothesis", "What a comparison against a margin shows",
+    [
+        new("non-inferiority", Stats.Proportions.MarginHypothesis.NonInferiority, "non-inferiority: the arm is not worse than the control by the margin"),
+        new("superiority", Stats.Proportions.MarginHypothesis.Superiority, "superiority: the arm is better than the control by more than the margin (0 for plain superiority)"),
+    ], Stats.Proportions.MarginHypothesis.NonInferiority);
+
+    public static readonly OptionSet<Stats.Proportions.MarginDirection> MarginDirection = new("margin-direction", "Which difference is better for the subject",
+    [
+        new("higher-is-better", Stats.Proportions.MarginDirection.HigherIsBetter, "a larger value is better (a response rate)"),
+        new("lower-is-better", Stats.Proportions.MarginDirection.LowerIsBetter, "a smaller value is better (an event rate, a symptom score)"),
+    ], Stats.Proportions.MarginDirection.HigherIsBetter);
+
+    public static readonly OptionSet<Stats.Models.MmrmCovarianceStructure> MmrmCovariance = new("mmrm-covariance", "Within-subject covariance of a mixed model for repeated measures",
+    [
+        new("unstructured", Stats.Models.MmrmCovarianceStructure.Unstructured, "unstructured: every variance and covariance free"),
+        new("compound-symmetry", Stats.Models.MmrmCovarianceStructure.CompoundSymmetry, "compound symmetry: one variance, one covariance"),
+        new("heterogeneous-compound-symmetry", Stats.Models.MmrmCovarianceStructure.HeterogeneousCompoundSymmetry, "heterogeneous compound symmetry: a variance per visit, one correlation"),
+        new("autoregressive", Stats.Models.MmrmCovarianceStructure.Autoregressive1, "first-order autoregressive: one variance, correlation rho^|j-k|"),
+        new("heterogeneous-autoregressive", Stats.Models.MmrmCovarianceStructure.HeterogeneousAutoregressive1, "heterogeneous first-order autoregressive: a variance per visit, correlation rho^|j-k|"),
+        new("toeplitz", Stats.Models.MmrmCovarianceStructure.Toeplitz, "Toeplitz: a covariance per lag"),
+    ], Stats.Models.MmrmCovarianceStructure.Unstructured);
+
+    public static readonly OptionSet<Stats.Models.MmrmDegreesOfFreedom> MmrmDegreesOfFreedom = new("mmrm-df", "Denominator degrees of freedom of a mixed model for repeated measures",
+    [
+        new("kenward-roger", Stats.Models.MmrmDegreesOfFreedom.KenwardRoger, "Kenward and Roger (1997), with the adjusted covariance of the estimates"),
+        new("satterthwaite", Stats.Models.MmrmDegreesOfFreedom.Satterthwaite, "Satterthwaite (1946)"),
+        new("residual", Stats.Models.MmrmDegreesOfFreedom.Residual, "residual: observations minus fixed effects"),
+        new("between-within", Stats.Models.MmrmDegreesOfFreedom.BetweenWithin, "between-within partition of the residual degrees of freedom"),
+    ], Stats.Models.MmrmDegreesOfFreedom.KenwardRoger);
+
     /// <summary>
     /// The two-sided confidence level of every interval, specs and `calc` alike. Above one half: a "confidence" interval
     /// below 50% is almost surely a mistyped alpha (common practice).
@@ -181,8 +218,14 @@ public static class MethodCatalog
         ProportionInterval, DifferenceInterval, TableTest, MissingResponse, SummaryTest, ContinuousTest, CategoricalTest,
         AdverseEventTest, LevelSorting, Quartiles, VariableType, GeneralizedCmh, ColumnScores, ArmComparison, RatioMeasure,
         OddsRatioInterval, StratifiedDifference, StratifiedTest, EffectMeasure, InteractionTest, SurvivalEstimate, CoxTies,
-        ZeroDisplay,
+        ZeroDisplay, LogisticEstimation, MarginHypothesis, MarginDirection, MmrmCovariance, MmrmDegreesOfFreedom,
     ];
+
+    /// <summary>
+    /// The options only `calc` takes so far (adjusted logistic regression, margins, MMRM): the table kinds that will take
+    /// them are still to come, so the composed table schema does not hold them yet.
+    /// </summary>
+    public static readonly IReadOnlyList<IOptionSet> CalcOnly = [LogisticEstimation, MarginHypothesis, MarginDirection, MmrmCovariance, MmrmDegreesOfFreedom];
 
     public static readonly IReadOnlyList<NumberRange> Ranges = [ConfidenceLevel, PValueFloor];
 
