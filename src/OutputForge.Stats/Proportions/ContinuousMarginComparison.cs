@@ -6,8 +6,8 @@ namespace OutputForge.Stats.Proportions;
 /// Non-inferiority and superiority of a continuous difference (e.g. an LS-mean difference, arm minus control) against a
 /// margin, from its estimate and standard error: the two-sided 100(1 - 2 alpha)% interval estimate -/+ t SE, t the
 /// upper alpha point of Student's t with the analysis' degrees of freedom (the normal when none are given), and the
-/// one-sided test T = (estimate - delta0) / SE on the same distribution (ICH E9 section 3.3.2, ICH E10 section
-/// 1.5.1.1: the one-sided test at alpha and the interval's bound against the margin agree by construction).
+/// one-sided test T = (estimate - delta0) / SE on the same distribution, so that the one-sided test at alpha and the
+/// interval's bound against the margin agree by construction.
 /// </summary>
 public static class ContinuousMarginComparison
 {
