@@ -30,6 +30,9 @@ internal static class LogisticNewtonFit
         public Matrix<double> Covariance => Information.Inverse();
     }
 
+    /// <param name="x">The design, intercept column included.</param>
+    /// <param name="y">The 0/1 responses.</param>
+    /// <param name="penalized">True for Firth's penalized likelihood, false for the plain likelihood.</param>
     /// <param name="fixedValues">Per coefficient: the value it is held at, or null when it is estimated.</param>
     /// <param name="start">Starting values of the free coefficients (the fixed ones are taken from <paramref name="fixedValues"/>).</param>
     public static Result Fit(Matrix<double> x, Vector<double> y, bool penalized, IReadOnlyList<double?>? fixedValues = null,
