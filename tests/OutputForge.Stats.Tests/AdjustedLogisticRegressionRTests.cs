@@ -163,6 +163,19 @@ public sealed class AdjustedLogisticRegressionRTests
     }
 
     [Fact]
+    public void Complete_separation_by_a_covariate_gets_finite_Firth_estimates_and_profile_limits_as_in_R()
+    {
+        var r = Oracle.GetProperty("complete").GetProperty("records");
+        var data = new LogisticAnalysisData(Numbers(r.GetProperty("y")).Select(v => (int)v).ToList(),
+            Factor("ARM", Texts(r.GetProperty("ARM")), ["PBO", "ACT"]), [], [new LinearModelCovariate("BASE", Numbers(r.GetProperty("BASE")))]);
+        var result = AdjustedLogisticRegression.Analyze(data);
+        Assert.Equal(Separation.Complete, result.Separation);
+        Assert.True(result.FirthUsed);
+        Assert.Contains("complete separation", Assert.Single(result.Notes).Text, StringComparison.Ordinal);
+        Same(Oracle.GetProperty("complete"), result, "complete");
+    }
+
+    [Fact]
     public void Separation_without_Firth_is_not_estimable_and_says_why()
     {
         var result = AdjustedLogisticRegression.Analyze(SeparatedData(), LogisticEstimation.MaximumLikelihood);

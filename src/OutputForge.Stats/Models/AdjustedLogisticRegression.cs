@@ -100,6 +100,12 @@ public static class AdjustedLogisticRegression
             {
                 profile = new IntervalResult(Math.Exp(c.Estimate), Math.Exp(lower), Math.Exp(upper));
             }
+            else if (limits.Problem is { } problem)
+            {
+                var reason = $"profile {(firth ? "penalized " : "")}likelihood interval of {arm} vs {data.Treatment.Levels[0]}: {problem}";
+                notes.Add(new LogisticAnalysisNote(LogisticNoteKind.NotConverged, reason));
+                profile = IntervalResult.NotEstimable(reason);
+            }
             else
             {
                 var side = limits.Lower is null ? (limits.Upper is null ? "either" : "the lower") : "the upper";

@@ -20,14 +20,26 @@ internal static class LogisticProfileInterval
     private const double MaximumReach = 1e4;
     private const double RootAccuracy = 1e-10;
 
-    public sealed record Limits(double? Lower, double? Upper);
+    /// <summary>The limits on the coefficient's scale; null for a side without one, <paramref name="Problem"/> saying why when a constrained fit failed.</summary>
+    public sealed record Limits(double? Lower, double? Upper, string? Problem = null);
 
     public static Limits Compute(Matrix<double> x, Vector<double> y, bool penalized, LogisticNewtonFit.Result full, int column, double level)
     {
         var quantile = ChiSquared.InvCDF(1, level);
         var estimate = full.Beta[column];
         var se = Math.Sqrt(full.Covariance[column, column]);
-        double Excess(double b) => Deviation(x, y, penalized, full, column, b) - quantile;
+        string? problem = null;
+        double Excess(double b)
+        {
+            var excess = Deviation(x, y, penalized, full, column, b) - quantile;
+            if (double.IsNaN(excess))
+            {
+                problem = string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"the fit with the coefficient held at {b:G6} did not converge in {LogisticNewtonFit.MaximumIterations} iterations");
+                throw new ArithmeticException(problem);
+            }
+            return excess;
+        }
         double? Side(int direction)
         {
             var reach = Math.Sqrt(quantile) * se;
@@ -48,18 +60,25 @@ internal static class LogisticProfileInterval
             }
             return Brent.FindRoot(Excess, Math.Min(near, far), Math.Max(near, far), RootAccuracy * Math.Max(1, Math.Abs(estimate)), 200);
         }
-        return new Limits(Side(-1), Side(+1));
+        try
+        {
+            return new Limits(Side(-1), Side(+1));
+        }
+        catch (ArithmeticException) when (problem is not null)
+        {
+            return new Limits(null, null, problem);
+        }
     }
 
     /// <summary>2 [l(beta^) - l(beta~(b))], beta~(b) maximising l with coefficient <paramref name="column"/> held at b.</summary>
     public static double Deviation(Matrix<double> x, Vector<double> y, bool penalized, LogisticNewtonFit.Result full, int column, double b) =>
         Deviation(x, y, penalized, full, Enumerable.Range(0, x.ColumnCount).Select(j => j == column ? b : (double?)null).ToArray());
 
-    /// <summary>2 [l(beta^) - max l] with the coefficients of <paramref name="fixedValues"/> held (null: free).</summary>
+    /// <summary>2 [l(beta^) - max l] with the coefficients of <paramref name="fixedValues"/> held (null: free); NaN when that fit did not converge.</summary>
     public static double Deviation(Matrix<double> x, Vector<double> y, bool penalized, LogisticNewtonFit.Result full, IReadOnlyList<double?> fixedValues)
     {
         var constrained = LogisticNewtonFit.Fit(x, y, penalized, fixedValues, full.Beta);
-        return Math.Max(0, 2 * (full.Objective - constrained.Objective));
+        return constrained.Converged ? Math.Max(0, 2 * (full.Objective - constrained.Objective)) : double.NaN;
     }
 
     /// <summary>The likelihood-ratio (penalized likelihood-ratio for Firth) test of the coefficients of <paramref name="columns"/> being 0.</summary>
@@ -67,6 +86,10 @@ internal static class LogisticProfileInterval
     {
         var fixedValues = Enumerable.Range(0, x.ColumnCount).Select(j => columns.Contains(j) ? 0 : (double?)null).ToArray();
         var statistic = Deviation(x, y, penalized, full, fixedValues);
+        if (double.IsNaN(statistic))
+        {
+            return TestResult.NotEstimable(method, $"the fit under the null hypothesis did not converge in {LogisticNewtonFit.MaximumIterations} iterations");
+        }
         return new TestResult(method, statistic, columns.Count, SpecialFunctions.GammaUpperRegularized(columns.Count / 2.0, statistic / 2));
     }
 }

@@ -116,7 +116,7 @@ analyse <- function(name, data, formula, treatment, firth) {
     fitted <- list(deviance = fit$deviance, iterations = fit$iter, converged = fit$converged)
   } else {
     f <- firth_fit(x, y)
-    bg <- glm(formula, family = binomial(), data = data, method = "brglmFit", type = "AS_mean", epsilon = 1e-14, maxit = 500)
+    bg <- glm(formula, family = binomial(), data = data, method = "brglmFit", type = "AS_mean", epsilon = 1e-10, maxit = 500)
     if (max(abs(coef(bg) - f$beta)) > 1e-8) stop(paste(name, ": brglm2 and the Firth code written here differ"))
     b <- f$beta; names(b) <- colnames(x); V <- f$cov
     s <- cbind(b, sqrt(diag(V)), b / sqrt(diag(V)), 2 * pnorm(-abs(b / sqrt(diag(V)))))
@@ -183,6 +183,13 @@ sep_records <- list(y = arr(sep$Y), BASE = arr(sep$BASE), ARM = arr(as.character
 ml_warning <- character(0)
 invisible(withCallingHandlers(glm(Y ~ BASE + ARM + STRAT, family = binomial(), data = sep), warning = function(e) { ml_warning <<- c(ml_warning, conditionMessage(e)); invokeRestart("muffleWarning") }))
 
+# ---- invented completely separated data: the response is 1 exactly when the baseline exceeds 6 ----
+m <- 30
+comp <- data.frame(ARM = factor(rep(c("PBO", "ACT"), times = m / 2), levels = c("PBO", "ACT")), BASE = round(runif(m, 3, 9), 1))
+comp$BASE[comp$BASE == 6] <- 6.1
+comp$Y <- as.integer(comp$BASE > 6)
+comp_records <- list(y = arr(comp$Y), BASE = arr(comp$BASE), ARM = arr(as.character(comp$ARM)))
+
 # ---- Farrington-Manning and Miettinen-Nurminen against a margin ----
 restricted <- function(x1, n1, x2, n2, d) {
   lo <- max(0, -d); hi <- min(1, 1 - d)
@@ -224,5 +231,6 @@ result <- list(
   demoFirth = analyse("demoFirth", demo, demo_formula, "TRT01P", TRUE),
   pilot = pilot,
   separated = c(list(model = "Y ~ BASE + ARM + STRAT", records = sep_records, glmWarnings = arr(ml_warning)), analyse("separated", sep, Y ~ BASE + ARM + STRAT, "ARM", TRUE)),
+  complete = c(list(model = "Y ~ BASE + ARM", records = comp_records), analyse("complete", comp, Y ~ BASE + ARM, "ARM", TRUE)),
   farringtonManning = fm)
 writeLines(js(result), file.path(out, "adjusted_logistic_oracles.json"))

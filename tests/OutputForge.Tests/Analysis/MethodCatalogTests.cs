@@ -93,6 +93,35 @@ public sealed class MethodCatalogTests
         {
             Assert.Equal(0, Calc("table", "--counts", "3,7;5,5", "--test", name));
         }
+        var margin = new[] { "noninferiority", "--events1", "8", "--n1", "10", "--events2", "7", "--n2", "10", "--margin", "0.1" };
+        foreach (var name in MethodCatalog.MarginHypothesis.Names)
+        {
+            Assert.Equal(0, Calc([.. margin, "--hypothesis", name]));
+        }
+        foreach (var name in MethodCatalog.MarginDirection.Names)
+        {
+            Assert.Equal(0, Calc([.. margin, "--direction", name]));
+        }
+        var oracles = Path.Combine(RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles");
+        var mmrm = new[] { "mmrm", "--data", Path.Combine(oracles, "mmrm_data.csv"), "--subject", "USUBJID", "--visit", "AVISITN",
+            "--response", "CHG", "--treatment", "ARM", "--control", "PBO" };
+        foreach (var name in MethodCatalog.MmrmCovariance.Names)
+        {
+            Assert.Equal(0, Calc([.. mmrm, "--covariance", name, "--df", "residual"]));
+        }
+        foreach (var name in MethodCatalog.MmrmDegreesOfFreedom.Names)
+        {
+            Assert.Equal(0, Calc([.. mmrm, "--covariance", "compound-symmetry", "--df", name]));
+        }
+        using (var folder = new TempFolder())
+        {
+            var file = folder.Write("binary.csv", "Y,ARM,X\n1,A,1.5\n0,A,2.5\n1,A,0.5\n0,B,1.0\n1,B,3.0\n0,B,2.0\n1,A,2.2\n0,B,0.7\n");
+            foreach (var name in MethodCatalog.LogisticEstimation.Names)
+            {
+                Assert.Equal(0, Calc("logistic", "--data", file, "--response", "Y", "--treatment", "ARM", "--control", "B", "--covariates", "X", "--estimation", name));
+            }
+        }
+        Assert.Equal(ExitCodes.Usage, Calc([.. mmrm, "--covariance", "un"]));
         // A name calc does not know is a command-line value it cannot use: a usage error (README, exit codes).
         Assert.Equal(ExitCodes.Usage, Calc("table", "--counts", "3,7;5,5", "--test", "pearson"));
     }
