@@ -24,7 +24,7 @@ public static class CalcLogisticCommand
         var covariates = new Option<string?>("--covariates") { Description = "Numeric covariates, e.g. \"BASE\"." };
         var estimation = new Option<string>("--estimation")
         {
-            Description = "Estimation: " + string.Join(" | ", MethodCatalog.LogisticEstimation.Names) + $" (default {MethodCatalog.LogisticEstimation.DefaultName}).",
+            Description = "Estimation: " + string.Join(" | ", MethodCatalog.LogisticEstimation.Names) + ".",
             DefaultValueFactory = _ => MethodCatalog.LogisticEstimation.DefaultName!,
         };
         var level = CalcCommand.Level();

@@ -30,12 +30,12 @@ public static class CalcMmrmCommand
         var covariates = new Option<string?>("--covariates") { Description = "Numeric covariates, each also by visit, e.g. \"BASE\"." };
         var covariance = new Option<string>("--covariance")
         {
-            Description = "Covariance structure: " + string.Join(" | ", MethodCatalog.MmrmCovariance.Names) + $" (default {MethodCatalog.MmrmCovariance.DefaultName}).",
+            Description = "Covariance structure: " + string.Join(" | ", MethodCatalog.MmrmCovariance.Names) + ".",
             DefaultValueFactory = _ => MethodCatalog.MmrmCovariance.DefaultName!,
         };
         var df = new Option<string>("--df")
         {
-            Description = "Degrees of freedom: " + string.Join(" | ", MethodCatalog.MmrmDegreesOfFreedom.Names) + $" (default {MethodCatalog.MmrmDegreesOfFreedom.DefaultName}).",
+            Description = "Degrees of freedom: " + string.Join(" | ", MethodCatalog.MmrmDegreesOfFreedom.Names) + ".",
             DefaultValueFactory = _ => MethodCatalog.MmrmDegreesOfFreedom.DefaultName!,
         };
         var level = CalcCommand.Level();

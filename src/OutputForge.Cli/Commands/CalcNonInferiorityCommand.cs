@@ -24,15 +24,15 @@ public static class CalcNonInferiorityCommand
         var standardError = new Option<double?>("--standard-error") { Description = "The standard error of --estimate." };
         var df = new Option<double?>("--df") { Description = "Degrees of freedom of --estimate's t distribution (default: the normal distribution)." };
         var margin = new Option<double>("--margin") { Description = "The margin, a number at least 0 (its side follows from --hypothesis and --direction).", Required = true };
-        var alpha = new Option<double>("--alpha") { Description = "One-sided alpha, between 0 and 0.5 (default 0.025).", DefaultValueFactory = _ => 0.025 };
+        var alpha = new Option<double>("--alpha") { Description = "One-sided alpha, between 0 and 0.5.", DefaultValueFactory = _ => 0.025 };
         var hypothesis = new Option<string>("--hypothesis")
         {
-            Description = "Hypothesis: " + string.Join(" | ", MethodCatalog.MarginHypothesis.Names) + $" (default {MethodCatalog.MarginHypothesis.DefaultName}).",
+            Description = "Hypothesis: " + string.Join(" | ", MethodCatalog.MarginHypothesis.Names) + ".",
             DefaultValueFactory = _ => MethodCatalog.MarginHypothesis.DefaultName!,
         };
         var direction = new Option<string>("--direction")
         {
-            Description = "Direction: " + string.Join(" | ", MethodCatalog.MarginDirection.Names) + $" (default {MethodCatalog.MarginDirection.DefaultName}).",
+            Description = "Direction: " + string.Join(" | ", MethodCatalog.MarginDirection.Names) + ".",
             DefaultValueFactory = _ => MethodCatalog.MarginDirection.DefaultName!,
         };
         var json = CalcCommand.Json();
