@@ -184,6 +184,22 @@ public sealed class AdjustedLogisticRegressionRTests
         Assert.False(result.TreatmentLikelihoodRatioTest.IsEstimable);
     }
 
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public void A_coefficient_held_far_out_gives_a_fit_or_a_non_converged_one_never_an_exception(bool penalized)
+    {
+        var data = SeparatedData();
+        var design = LinearModelDesign.Build(data.Count, data.Covariates, [data.Treatment, .. data.Factors]);
+        var y = MathNet.Numerics.LinearAlgebra.Vector<double>.Build.Dense(data.Count, i => data.Response[i]);
+        foreach (var held in new[] { -800.0, 800.0 })
+        {
+            var fit = LogisticNewtonFit.Fit(design.Matrix, y, penalized, [null, null, held, null]);
+            Assert.True(!fit.Converged || double.IsFinite(fit.Objective), $"held at {held}: converged with objective {fit.Objective}");
+            Assert.Equal(held, fit.Beta[2]);
+        }
+    }
+
     [Fact]
     public void A_treatment_with_an_empty_arm_is_not_estimable_not_a_crash()
     {

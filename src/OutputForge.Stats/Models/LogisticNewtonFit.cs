@@ -49,6 +49,10 @@ internal static class LogisticNewtonFit
             }
         }
         var state = Evaluate(x, y, beta, penalized);
+        if (state is null)
+        {
+            return NotConverged(x, beta);
+        }
         var iterations = 0;
         var converged = false;
         while (iterations < MaximumIterations)
@@ -61,7 +65,10 @@ internal static class LogisticNewtonFit
             }
             var scoreFree = Vector<double>.Build.Dense(free.Length, k => state.Score[free[k]]);
             var informationFree = Matrix<double>.Build.Dense(free.Length, free.Length, (a, b) => state.Information[free[a], free[b]]);
-            var step = informationFree.Cholesky().Solve(scoreFree);
+            if (!TrySolve(informationFree, scoreFree, out var step))
+            {
+                return NotConverged(x, beta);
+            }
             var largest = step.AbsoluteMaximum();
             if (largest > MaximumStep)
             {
@@ -73,7 +80,7 @@ internal static class LogisticNewtonFit
                 candidate[free[k]] += step[k];
             }
             var next = Evaluate(x, y, candidate, penalized);
-            for (var halving = 0; halving < MaximumHalvings && !(next.Objective >= state.Objective - 1e-12 * Math.Abs(state.Objective)); halving++)
+            for (var halving = 0; halving < MaximumHalvings && !(next is not null && next.Objective >= state.Objective - 1e-12 * Math.Abs(state.Objective)); halving++)
             {
                 step *= 0.5;
                 for (var k = 0; k < free.Length; k++)
@@ -81,6 +88,10 @@ internal static class LogisticNewtonFit
                     candidate[free[k]] = beta[free[k]] + step[k];
                 }
                 next = Evaluate(x, y, candidate, penalized);
+            }
+            if (next is null)
+            {
+                return NotConverged(x, beta);
             }
             beta = candidate;
             state = next;
@@ -93,9 +104,31 @@ internal static class LogisticNewtonFit
         return new Result(beta, state.LogLikelihood, state.Objective, state.Information, state.Probabilities, iterations, converged);
     }
 
+    /// <summary>
+    /// The information matrix is not numerically positive definite (the fitted probabilities of whole columns at 0 or 1
+    /// far out on a profile): the fit stops as not converged, which its callers report.
+    /// </summary>
+    private static Result NotConverged(Matrix<double> x, Vector<double> beta) =>
+        new(beta, double.NaN, double.NaN, Matrix<double>.Build.DenseIdentity(x.ColumnCount), Vector<double>.Build.Dense(x.RowCount), 0, false);
+
+    private static bool TrySolve(Matrix<double> a, Vector<double> b, out Vector<double> solution)
+    {
+        try
+        {
+            solution = a.Cholesky().Solve(b);
+            return solution.All(double.IsFinite);
+        }
+        catch (ArgumentException)
+        {
+            solution = b;
+            return false;
+        }
+    }
+
     private sealed record State(double LogLikelihood, double Objective, Vector<double> Score, Matrix<double> Information, Vector<double> Probabilities);
 
-    private static State Evaluate(Matrix<double> x, Vector<double> y, Vector<double> beta, bool penalized)
+    /// <summary>The objective, score and information at beta; null where the penalty's log determinant does not exist numerically.</summary>
+    private static State? Evaluate(Matrix<double> x, Vector<double> y, Vector<double> beta, bool penalized)
     {
         var n = x.RowCount;
         var eta = x * beta;
@@ -111,7 +144,15 @@ internal static class LogisticNewtonFit
         var objective = logLikelihood;
         if (penalized)
         {
-            var cholesky = information.Cholesky();
+            MathNet.Numerics.LinearAlgebra.Factorization.Cholesky<double> cholesky;
+            try
+            {
+                cholesky = information.Cholesky();
+            }
+            catch (ArgumentException)
+            {
+                return null;
+            }
             objective += 0.5 * cholesky.DeterminantLn;
             // h_i = w_i x_i' I^-1 x_i, the leverages of the weighted fit.
             var solved = x * cholesky.Solve(Matrix<double>.Build.DenseIdentity(x.ColumnCount));
