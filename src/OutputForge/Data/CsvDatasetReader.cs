@@ -107,14 +107,18 @@ public static class CsvDatasetReader
             var header = Fields(reader);
             CheckHeader(path, header);
             var capacity = LineBreaks.Bound(bytes.AsSpan(bodyStart));
-            var columns = header.Select(h => new ColumnBuilder(h, capacity)).ToArray();
+            var keep = options.KeepOf(name);
+            var columns = header.Select(h => keep is null || keep(h) ? new ColumnBuilder(h, capacity) : null).ToArray();
             var lines = new int[capacity];
             var (rows, replaced) = ReadRecords(reader, path, header, columns, lines, 0, 0, options);
             if (replaced > 0)
             {
                 warn(ReplacedWarning(path, replaced));
             }
-            return new Dataset(name, path, rows, columns.Select(c => c.Build()).ToList(), new ArraySegment<int>(lines, 0, rows));
+            return new Dataset(name, path, rows, columns.OfType<ColumnBuilder>().Select(c => c.Build()).ToList(), new ArraySegment<int>(lines, 0, rows))
+            {
+                VariableNames = header,
+            };
         }
         catch (CsvFormatException e)
         {
@@ -126,12 +130,13 @@ public static class CsvDatasetReader
         $"{path}: {replaced} value{(replaced == 1 ? "" : "s")} held control characters, replaced by U+FFFD";
 
     /// <summary>
-    /// Reads the records after the header into <paramref name="columns"/> (one builder per header variable) and their
+    /// Reads the records after the header into <paramref name="columns"/> (one builder per header variable; none for a
+    /// variable the run skips, whose fields are passed over untouched) and their
     /// lines into <paramref name="lines"/> from <paramref name="rowOffset"/>; the reader's line numbers are counted from
     /// the start of its bytes, <paramref name="lineOffset"/> lines into the file. Returns the rows read and the number of
     /// values whose control characters were replaced.
     /// </summary>
-    internal static (int Rows, int Replaced) ReadRecords(CsvReader reader, string path, string[] header, ColumnBuilder[] columns,
+    internal static (int Rows, int Replaced) ReadRecords(CsvReader reader, string path, string[] header, ColumnBuilder?[] columns,
         int[] lines, int rowOffset, int lineOffset, DataReadOptions options)
     {
         var rows = 0;
@@ -151,25 +156,29 @@ public static class CsvDatasetReader
             }
             for (var c = 0; c < header.Length; c++)
             {
+                if (columns[c] is null)
+                {
+                    continue;
+                }
                 if (reader.IsEmpty(c))
                 {
-                    columns[c].AddMissing();
+                    columns[c]!.AddMissing();
                     continue;
                 }
                 var utf8 = reader.GetSpan(c);
                 if (utf8.Length == 1 && utf8[0] == (byte)'.')
                 {
                     // "." alone is the missing value of transport-file dumps (docs/spec-reference.md, "Data formats").
-                    columns[c].AddMissing();
+                    columns[c]!.AddMissing();
                     continue;
                 }
-                if (columns[c].TryAddCanonical(utf8))
+                if (columns[c]!.TryAddCanonical(utf8))
                 {
                     continue;
                 }
                 if (repeats[c].Matches(utf8) is { } repeated)
                 {
-                    columns[c].AddText(repeated, line);
+                    columns[c]!.AddText(repeated, line);
                     continue;
                 }
                 var value = reader.GetString(c);
@@ -193,7 +202,7 @@ public static class CsvDatasetReader
                 {
                     repeats[c].Remember(utf8, value);
                 }
-                columns[c].AddText(value, line);
+                columns[c]!.AddText(value, line);
             }
             lines[rowOffset + rows++] = line;
         }

@@ -25,7 +25,7 @@ public sealed class CsvFileParts
     private readonly Task<string> _digest;
     private readonly int[] _starts;
     private readonly string[]? _header;
-    private readonly ColumnBuilder[][] _columns = [];
+    private readonly ColumnBuilder?[][] _columns = [];
     private readonly int[] _lines = [];
     private readonly int[] _rowOffsets = [];
     private readonly int[] _lineOffsets = [];
@@ -69,9 +69,10 @@ public sealed class CsvFileParts
             _lineOffsets[p] = _lineOffsets[p - 1] + breaks[p - 1];
         }
         var capacity = _rowOffsets[^1] + bounds[^1];
-        var stores = header.Select(_ => new ColumnStore(capacity)).ToArray();
+        var keep = options.KeepOf(name);
+        var stores = header.Select(h => keep is null || keep(h) ? new ColumnStore(capacity) : null).ToArray();
         _columns = Enumerable.Range(0, count)
-            .Select(p => header.Select((h, c) => new ColumnBuilder(h, stores[c], _rowOffsets[p])).ToArray())
+            .Select(p => header.Select((h, c) => stores[c] is { } store ? new ColumnBuilder(h, store, _rowOffsets[p]) : null).ToArray())
             .ToArray();
         _lines = new int[capacity];
         _read = new (int, int)[count];
@@ -172,11 +173,12 @@ public sealed class CsvFileParts
         {
             warn(CsvDatasetReader.ReplacedWarning(_path, replaced));
         }
-        var columns = new DataColumn[_header.Length];
-        Parallel.For(0, _header.Length, c => columns[c] = ColumnBuilder.Join(_columns.Select(part => part[c]).ToList()));
+        var kept = Enumerable.Range(0, _header.Length).Where(c => _columns[0][c] is not null).ToArray();
+        var columns = new DataColumn[kept.Length];
+        Parallel.For(0, kept.Length, k => columns[k] = ColumnBuilder.Join(_columns.Select(part => part[kept[k]]!).ToList()));
         var rows = _read.Sum(r => r.Rows);
-        ColumnBuilder.MoveTogether(_columns.Select(part => part[0]).ToList(), _lines);
-        return new Dataset(_name, _path, rows, columns, new ArraySegment<int>(_lines, 0, rows));
+        ColumnBuilder.MoveRowsTogether(_read.Select(r => r.Rows).ToList(), _rowOffsets, _lines);
+        return new Dataset(_name, _path, rows, columns, new ArraySegment<int>(_lines, 0, rows)) { VariableNames = _header };
     }
 
     private int End(int part) => part + 1 < _starts.Length ? _starts[part + 1] : _bytes.Length;

@@ -29,17 +29,23 @@ public static class PackageRunner
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
         var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
         OutputPlace.CheckApart(request.OutputFolder, outputLock.Folder, dataFolder, study.Folder);
+        var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var dataWarnings = new List<string>();
         var reading = Stopwatch.StartNew();
-        var data = StudyData.Load(study, dataFolder, request.DataOptions with { ReadableFolders = package.Folders.Folders }, dataWarnings.Add);
+        var projection = request.ReadEveryColumn ? null : RunColumns.For(study, selected);
+        var data = StudyData.Load(study, dataFolder,
+            request.DataOptions with { ReadableFolders = package.Folders.Folders, Projection = projection }, dataWarnings.Add);
         log.Detail($"data: {data.Datasets.Count} datasets, {data.Datasets.Sum(d => File.Exists(d.File) ? new FileInfo(d.File).Length : 0) / 1e6:0.0} MB read in {reading.Elapsed.TotalMilliseconds:0} ms");
+        foreach (var line in DataReadFacts.Describe(data, projection is not null))
+        {
+            log.Detail(line);
+        }
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 
         var digesting = Stopwatch.StartNew();
         var inputs = RunInputs.Read(package, data);
         log.Detail($"inputs: SHA-256 digests of the spec and data files in {digesting.Elapsed.TotalMilliseconds:0} ms");
-        var selected = TableSelection.Select(study, package.Tables, request.Tables);
         var run = new RunFacts(request.RunTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, inputs.SourceLineNames())
         {
             DataDigests = inputs.Data.Where(d => d.Dataset is not null)

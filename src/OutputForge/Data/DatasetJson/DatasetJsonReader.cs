@@ -27,9 +27,10 @@ public static partial class DatasetJsonReader
         var ndjson = path.EndsWith(".ndjson", StringComparison.OrdinalIgnoreCase);
         var size = new FileInfo(path).Length;
         var digest = StreamedFileDigest.Start(path);
+        var keep = options.KeepOf(name);
         var parser = (!ndjson && Environment.ProcessorCount > 1 && size >= 2L * DatasetJsonRowParts.PartBytes
-            ? DatasetJsonRowParts.TryRead(path, options, size)
-            : null) ?? Pump(path, ndjson, options, size, stopAtRows: false).Parser;
+            ? DatasetJsonRowParts.TryRead(path, options, size, keep: keep)
+            : null) ?? Pump(path, ndjson, options, size, stopAtRows: false, keep: keep).Parser;
         var dataset = parser.Finish();
         parser.Warnings.ForEach(warn);
         if (parser.Replaced > 0)
@@ -38,6 +39,7 @@ public static partial class DatasetJsonReader
         }
         return new Dataset(name, path, dataset.Rows, dataset.Columns, new RowNumbers(dataset.Rows, ndjson ? 1 : 0))
         {
+            VariableNames = parser.ColumnList.Select(c => c.Name!).ToList(),
             Label = dataset.Label,
             ContentSha256 = digest.GetAwaiter().GetResult(),
         };
@@ -52,11 +54,11 @@ public static partial class DatasetJsonReader
     /// where the rows begin, so that they can be read in parts.
     /// </summary>
     internal static PumpResult Pump(string path, bool ndjson, DataReadOptions options, long size, bool stopAtRows,
-        long from = 0, JsonReaderState? resume = null, Parser? parser = null)
+        long from = 0, JsonReaderState? resume = null, Parser? parser = null, Func<string, bool>? keep = null)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
         stream.Position = from;
-        parser ??= new Parser(path, ndjson, options, size);
+        parser ??= new Parser(path, ndjson, options, size, keep: keep);
         var buffer = new byte[BlockBytes];
         var length = 0;
         var final = false;
@@ -123,12 +125,14 @@ public static partial class DatasetJsonReader
     }
 
     /// <summary>The state of one pass through the tokens.</summary>
-    internal sealed class Parser(string path, bool ndjson, DataReadOptions options, long fileBytes, bool rowsOnly = false)
+    internal sealed class Parser(string path, bool ndjson, DataReadOptions options, long fileBytes, bool rowsOnly = false,
+        Func<string, bool>? keep = null)
     {
         private enum Section { Top, Columns, Rows, Skip }
 
         private readonly List<DatasetJsonColumn> _columns = [];
-        private TypedColumnBuilder[]? _builders;
+        /// <summary>One builder per column; none for a column the run skips (its values are passed over, unchecked).</summary>
+        private TypedColumnBuilder?[]? _builders;
         private Section _section = rowsOnly ? Section.Rows : Section.Top;
         private int _skipDepth;
         private string? _property;
@@ -154,20 +158,20 @@ public static partial class DatasetJsonReader
 
         public IReadOnlyList<DatasetJsonColumn> ColumnList => _columns;
 
-        public TypedColumnBuilder[]? Builders => _builders;
+        public TypedColumnBuilder?[]? Builders => _builders;
 
         /// <summary>A parser of rows only (a part of the rows), with the columns the metadata gave.</summary>
         public static Parser ForRows(Parser metadata, int capacity)
         {
-            var rows = new Parser(path: metadata.FilePath, ndjson: false, metadata.Options, 0, rowsOnly: true);
+            var rows = new Parser(path: metadata.FilePath, ndjson: false, metadata.Options, 0, rowsOnly: true, keep: metadata.Keep);
             rows._columns.AddRange(metadata._columns);
             rows._columnsSeen = true;
-            rows._builders = rows._columns.Select(c => new TypedColumnBuilder(c.Name!, KindOf(c), capacity) { Label = c.Label }).ToArray();
+            rows._builders = rows.NewBuilders(capacity);
             return rows;
         }
 
         /// <summary>Takes the rows that parts read (joined), in place of rows of its own.</summary>
-        public void AdoptRows(int rows, TypedColumnBuilder[] builders, int replaced)
+        public void AdoptRows(int rows, TypedColumnBuilder?[] builders, int replaced)
         {
             _rows = rows;
             _builders = builders;
@@ -175,6 +179,12 @@ public static partial class DatasetJsonReader
         }
 
         private string FilePath => path;
+
+        private Func<string, bool>? Keep => keep;
+
+        private TypedColumnBuilder?[] NewBuilders(int capacity) => _columns
+            .Select(c => keep is null || keep(c.Name!) ? new TypedColumnBuilder(c.Name!, KindOf(c), capacity) { Label = c.Label } : null)
+            .ToArray();
 
         private DataReadOptions Options => options;
 
@@ -376,7 +386,7 @@ public static partial class DatasetJsonReader
             }
             // A first guess at the rows from the file's size; the builders grow when there are more.
             var capacity = (int)Math.Min(_records ?? fileBytes / Math.Max(16, _columns.Count * 8), 1 << 24);
-            _builders = _columns.Select(c => new TypedColumnBuilder(c.Name!, KindOf(c), capacity) { Label = c.Label }).ToArray();
+            _builders = NewBuilders(capacity);
         }
 
         private static VariableKind KindOf(DatasetJsonColumn column) =>
@@ -401,7 +411,15 @@ public static partial class DatasetJsonReader
                 throw Error($"row {_rows + 1} has more values than the {_columns.Count} \"columns\" lists");
             }
             var column = _columns[_cell];
-            var builder = _builders![_cell];
+            if (_builders![_cell] is not { } builder)
+            {
+                if (token is JsonTokenType.Null or JsonTokenType.String or JsonTokenType.Number or JsonTokenType.True or JsonTokenType.False)
+                {
+                    _cell++;
+                    return;
+                }
+                throw RowError($"expected {Expected(column)} (dataType {column.DataType}), found {Describe(token)}");
+            }
             switch (token)
             {
                 case JsonTokenType.Null:
@@ -533,7 +551,7 @@ public static partial class DatasetJsonReader
             {
                 throw Error(FormattableString.Invariant($"\"records\" gives {records:N0} rows, but the file holds {_rows:N0}"));
             }
-            return (_rows, _builders.Select(b => b.Build()).ToList(), _label);
+            return (_rows, _builders.OfType<TypedColumnBuilder>().Select(b => b.Build()).ToList(), _label);
         }
     }
 }

@@ -54,16 +54,21 @@ public static class XptDatasetReader
         {
             throw new DataException(path, null, null, FormattableString.Invariant($"{rows:N0} observations, more than one dataset can hold"));
         }
-        var builders = variables.Select(v => new TypedColumnBuilder(v.Name, KindOf(v), (int)rows) { Label = v.Label.Length == 0 ? null : v.Label }).ToArray();
+        // A variable the run skips has no builder: its bytes in each row are passed over undecoded.
+        var keep = options.KeepOf(name);
+        var builders = variables.Select(v => keep is null || keep(v.Name)
+            ? new TypedColumnBuilder(v.Name, KindOf(v), (int)rows) { Label = v.Label.Length == 0 ? null : v.Label }
+            : null).ToArray();
         var replaced = ReadObservations(input, dataBytes, rowLength, (int)rows, variables, builders, options, path);
         if (replaced > 0)
         {
             warn(CsvDatasetReader.ReplacedWarning(path, replaced));
         }
-        var columns = builders.Select(b => b.Build()).ToList();
+        var columns = builders.OfType<TypedColumnBuilder>().Select(b => b.Build()).ToList();
         return new Dataset(name, path, (int)rows, columns, new RowNumbers((int)rows))
         {
             Label = datasetLabel,
+            VariableNames = variables.Select(v => v.Name).ToList(),
             ContentSha256 = digest.GetAwaiter().GetResult(),
         };
     }
@@ -163,7 +168,7 @@ public static class XptDatasetReader
     }
 
     private static int ReadObservations(RecordInput input, long dataBytes, int rowLength, int rows, XptVariable[] variables,
-        TypedColumnBuilder[] builders, DataReadOptions options, string path)
+        TypedColumnBuilder?[] builders, DataReadOptions options, string path)
     {
         var replaced = 0;
         var block = Math.Max(1, (1 << 20) / (rowLength * RecordLength)) * rowLength * RecordLength;
@@ -208,15 +213,18 @@ public static class XptDatasetReader
         return replaced;
     }
 
-    private static int ReadRow(ReadOnlySpan<byte> bytes, int row, XptVariable[] variables, TypedColumnBuilder[] builders,
+    private static int ReadRow(ReadOnlySpan<byte> bytes, int row, XptVariable[] variables, TypedColumnBuilder?[] builders,
         DataReadOptions options, string path)
     {
         var replaced = 0;
         for (var v = 0; v < variables.Length; v++)
         {
+            if (builders[v] is not { } builder)
+            {
+                continue;
+            }
             var variable = variables[v];
             var value = bytes.Slice(variable.Position, variable.Length);
-            var builder = builders[v];
             if (!variable.IsNumeric)
             {
                 var end = value.LastIndexOfAnyExcept((byte)' ');

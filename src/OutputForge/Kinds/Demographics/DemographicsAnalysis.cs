@@ -65,7 +65,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 throw new SpecException(table.Source.Problem(pointer + "/variable", $"{spec.Variable} is summarized twice in this table"));
             }
             var column = adsl.Find(spec.Variable) ?? throw new SpecException(table.Source.Problem(pointer + "/variable",
-                $"ADSL has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.Columns.Select(c => c.Name).ToList())}"));
+                $"ADSL has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.VariableNames)}"));
             List<ResultRow> blockRows;
             TestResult? test = null;
             if (spec.Type == "continuous")

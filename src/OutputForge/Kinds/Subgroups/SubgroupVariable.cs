@@ -30,7 +30,7 @@ internal sealed record SubgroupVariable(
     {
         var pointer = $"/subgroups/variables/{index}";
         var column = adsl.Find(spec.Variable) ?? throw new SpecException(source.Problem(pointer + "/variable",
-            $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.Columns.Select(c => c.Name).ToList())}"));
+            $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.VariableNames)}"));
         var ids = adsl.Get(AdamConformance.SubjectVariable);
         var rowOfSubject = new Dictionary<string, int>(StringComparer.Ordinal);
         for (var row = 0; row < adsl.RowCount; row++)
