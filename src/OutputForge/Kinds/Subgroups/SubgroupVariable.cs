@@ -100,7 +100,7 @@ internal sealed record SubgroupVariable(
                 unlistedValues.Add(value);
             }
         }
-        return new SubgroupVariable(column.Name, spec.Label ?? column.Name, levels, levelOfSubject, without, unlistedValues.ToList(), unlisted, orderNote);
+        return new SubgroupVariable(column.Name, spec.Label ?? column.Label ?? column.Name, levels, levelOfSubject, without, unlistedValues.ToList(), unlisted, orderNote);
     }
 
     /// <summary>What the warnings must say about subjects that belong to no level.</summary>
