@@ -105,7 +105,7 @@ public sealed class StudyData
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
                 DatasetFileScope.Check(path, folder, options.ReadableFolders);
-                if (DatasetFiles.IsCsv(fileName))
+                if (DatasetFiles.IsCsv(fileName) && !study.Data.Members.ContainsKey(name))
                 {
                     opened[i] = CsvFileParts.Open(name, path, options);
                 }
@@ -113,7 +113,7 @@ public sealed class StudyData
                 {
                     // XPT and Dataset-JSON files are read whole here, streamed, on this file's core.
                     var warnings = new List<string>();
-                    outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add), warnings, null);
+                    outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add, study.Data.Members.GetValueOrDefault(name)), warnings, null);
                 }
             }
             catch (Exception e)

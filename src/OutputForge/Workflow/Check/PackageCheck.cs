@@ -88,7 +88,8 @@ public static class PackageCheck
             try
             {
                 DatasetFileScope.Check(path, folder, allowedFolders);
-                datasets[name] = CsvDatasetReader.Read(name, path);
+                // Every column of every format: check holds the whole file to the ADaM conventions, not only what tables use.
+                datasets[name] = DatasetFiles.Read(name, path, DataReadOptions.Default, _ => { }, study.Data.Members.GetValueOrDefault(name));
             }
             catch (DataException e)
             {
