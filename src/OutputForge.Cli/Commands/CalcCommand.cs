@@ -1,5 +1,6 @@
 using System.CommandLine;
 using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 using OutputForge.Cli.Calculator;
 using OutputForge.Stats;
 
@@ -9,36 +10,11 @@ namespace OutputForge.Cli.Commands;
 /// `outputforge calc`: single numbers for a QC statistician, without a spec: a proportion's
 /// interval, a difference of proportions, a test on an r x c table, and the stratified
 /// (Cochran-Mantel-Haenszel) family. JSON on stdout with --json, readable lines otherwise.
+/// Method names, the test choice and the level's range are those of the specs (<see cref="MethodCatalog"/>),
+/// and the methods are the ones the tables run.
 /// </summary>
 public static class CalcCommand
 {
-    private static readonly Dictionary<string, ProportionCiMethod> ProportionMethods = new(StringComparer.Ordinal)
-    {
-        ["wald"] = ProportionCiMethod.Wald,
-        ["wilson"] = ProportionCiMethod.Wilson,
-        ["wilson-cc"] = ProportionCiMethod.WilsonCorrected,
-        ["clopper-pearson"] = ProportionCiMethod.ClopperPearson,
-        ["agresti-coull"] = ProportionCiMethod.AgrestiCoull,
-        ["jeffreys"] = ProportionCiMethod.Jeffreys,
-    };
-
-    private static readonly Dictionary<string, DifferenceCiMethod> DifferenceMethods = new(StringComparer.Ordinal)
-    {
-        ["wald"] = DifferenceCiMethod.Wald,
-        ["wald-cc"] = DifferenceCiMethod.WaldCorrected,
-        ["newcombe"] = DifferenceCiMethod.Newcombe,
-        ["agresti-caffo"] = DifferenceCiMethod.AgrestiCaffo,
-        ["miettinen-nurminen"] = DifferenceCiMethod.MiettinenNurminen,
-    };
-
-    private static readonly Dictionary<string, Func<int[,], TestResult>> Tests = new(StringComparer.Ordinal)
-    {
-        ["pearson"] = PearsonChiSquareTest.Compute,
-        ["yates"] = YatesChiSquareTest.Compute,
-        ["likelihood-ratio"] = LikelihoodRatioChiSquareTest.Compute,
-        ["fisher"] = FisherExactTest.Compute,
-    };
-
     public static Command Create(TextWriter output, TextWriter error)
     {
         var command = new Command("calc", "Compute single statistics for QC checks: proportion, difference, table, stratified.");
@@ -53,8 +29,8 @@ public static class CalcCommand
 
     private static Option<double> Level() => new("--level")
     {
-        Description = "Confidence level.",
-        DefaultValueFactory = _ => 0.95,
+        Description = $"Confidence level, {MethodCatalog.ConfidenceLevel.Describe()}.",
+        DefaultValueFactory = _ => MethodCatalog.ConfidenceLevel.Default,
     };
 
     private static Option<int> Count(string name, string description) => new(name) { Description = description, Required = true };
@@ -69,13 +45,13 @@ public static class CalcCommand
     {
         var events = Count("--events", "Number of events (responders).");
         var n = Count("--n", "Number of subjects.");
-        var method = Method(ProportionMethods.Keys);
+        var method = Method(MethodCatalog.ProportionInterval.Names);
         var level = Level();
         var json = Json();
         var command = new Command("proportion", "Confidence interval for a single proportion.") { events, n, method, level, json };
         command.SetAction(parse => Run(error, () =>
         {
-            var chosen = Choose(ProportionMethods, parse.GetValue(method)!);
+            var chosen = Choose(MethodCatalog.ProportionInterval, parse.GetValue(method)!);
             var (x, total) = (parse.GetValue(events), parse.GetValue(n));
             CheckEvents(x, total, "--events", "--n");
             var result = new CalcOutput(output, parse.GetValue(json));
@@ -91,7 +67,7 @@ public static class CalcCommand
         var n1 = Count("--n1", "Subjects in group 1.");
         var events2 = Count("--events2", "Events in group 2.");
         var n2 = Count("--n2", "Subjects in group 2.");
-        var method = Method(DifferenceMethods.Keys);
+        var method = Method(MethodCatalog.DifferenceInterval.Names);
         var level = Level();
         var json = Json();
         var command = new Command("difference", "Confidence interval for the difference of two proportions (group 1 minus group 2).")
@@ -100,7 +76,7 @@ public static class CalcCommand
         };
         command.SetAction(parse => Run(error, () =>
         {
-            var chosen = Choose(DifferenceMethods, parse.GetValue(method)!);
+            var chosen = Choose(MethodCatalog.DifferenceInterval, parse.GetValue(method)!);
             CheckEvents(parse.GetValue(events1), parse.GetValue(n1), "--events1", "--n1");
             CheckEvents(parse.GetValue(events2), parse.GetValue(n2), "--events2", "--n2");
             var result = new CalcOutput(output, parse.GetValue(json));
@@ -114,19 +90,23 @@ public static class CalcCommand
     private static Command Table(TextWriter output, TextWriter error)
     {
         var counts = new Option<string>("--counts") { Description = "The table: counts separated by ',', rows by ';' (e.g. \"12,5;7,9\").", Required = true };
-        var test = new Option<string>("--test") { Description = "Test: " + string.Join(" | ", Tests.Keys), Required = true };
+        var test = new Option<string>("--test")
+        {
+            Description = "Test: " + string.Join(" | ", MethodCatalog.TableTest.Names) + " (auto: chi-square, or Fisher's exact test when an expected count is below 5, as in tables).",
+            Required = true,
+        };
         var json = Json();
         var command = new Command("table", "A test of association on an r x c table.") { counts, test, json };
         command.SetAction(parse => Run(error, () =>
         {
-            var compute = Choose(Tests, parse.GetValue(test)!, "--test");
+            var chosen = Choose(MethodCatalog.TableTest, parse.GetValue(test)!, "--test");
             var table = CountsParser.Table(parse.GetValue(counts)!);
-            if (parse.GetValue(test) == "yates" && (table.GetLength(0) != 2 || table.GetLength(1) != 2))
+            if (chosen == TableTest.Yates && (table.GetLength(0) != 2 || table.GetLength(1) != 2))
             {
                 throw new CalcInputException("--test yates: the continuity correction applies to 2 x 2 tables only");
             }
             var result = new CalcOutput(output, parse.GetValue(json));
-            result.Test("test", compute(table));
+            result.Test("test", TableTests.Compute(table, chosen));
             result.Flush(single: true);
         }));
         return command;
@@ -136,12 +116,12 @@ public static class CalcCommand
     {
         var counts = new Option<string>("--counts")
         {
-            Description = "One table per stratum, separated by '|': 2 x 2 tables (\"a,b;c,d|e,f;g,h\") for the CMH test, common odds ratio and Breslow-Day; larger tables for the generalized CMH statistics.",
+            Description = "One table per stratum, separated by '|': 2 x 2 tables (\"a,b;c,d|e,f;g,h\", rows group 1 and group 2, columns events and non-events) for the CMH test, the Mantel-Haenszel odds ratio, relative risk and risk difference, the stratified Miettinen-Nurminen interval and Breslow-Day; larger tables for the generalized CMH statistics.",
             Required = true,
         };
         var scores = new Option<string?>("--scores")
         {
-            Description = "Scores for the generalized statistics: \"row scores/column scores\", e.g. \"1,2,3/0,1\" (default: table scores 1, 2, ...).",
+            Description = "Scores for the generalized statistics: \"row scores/column scores\", e.g. \"1,2,3/0,1\" (default: 1, 2, ... in the order given).",
         };
         var level = Level();
         var json = Json();
@@ -154,7 +134,11 @@ public static class CalcCommand
             {
                 var twoByTwo = strata.Select(t => new StratumCounts(t[0, 0], t[0, 0] + t[0, 1], t[1, 0], t[1, 0] + t[1, 1])).ToList();
                 result.Test("cmh", CochranMantelHaenszelTest.Compute(twoByTwo));
-                result.Interval("commonOddsRatio", MantelHaenszelOddsRatio.Compute(twoByTwo, CheckLevel(parse.GetValue(level))));
+                var chosenLevel = CheckLevel(parse.GetValue(level));
+                result.Interval("commonOddsRatio", MantelHaenszelOddsRatio.Compute(twoByTwo, chosenLevel));
+                result.Interval("commonRelativeRisk", MantelHaenszelRelativeRisk.Compute(twoByTwo, chosenLevel));
+                result.Interval("commonRiskDifference", MantelHaenszelRiskDifference.Compute(twoByTwo, chosenLevel));
+                result.Interval("commonRiskDifferenceMiettinenNurminen", StratifiedMiettinenNurminen.Compute(twoByTwo, chosenLevel));
                 result.Test("breslowDay", BreslowDayTest.Compute(twoByTwo, taroneCorrection: false));
                 result.Test("breslowDayTarone", BreslowDayTest.Compute(twoByTwo, taroneCorrection: true));
             }
@@ -195,10 +179,10 @@ public static class CalcCommand
         return values;
     }
 
-    private static T Choose<T>(Dictionary<string, T> choices, string name, string option = "--method") =>
-        choices.TryGetValue(name, out var chosen)
+    private static T Choose<T>(OptionSet<T> choices, string name, string option = "--method") where T : struct, Enum =>
+        choices.TryParse(name, out var chosen)
             ? chosen
-            : throw new CalcInputException($"{option}: unknown '{name}'{Naming.NearestName.Hint(name, choices.Keys)}");
+            : throw new CalcInputException($"{option}: unknown '{name}'{choices.Hint(name)}");
 
     private static void CheckEvents(int events, int n, string eventsOption, string nOption)
     {
@@ -213,7 +197,10 @@ public static class CalcCommand
     }
 
     private static double CheckLevel(double level) =>
-        level is > 0 and < 1 ? level : throw new CalcInputException($"--level: {level} is not between 0 and 1 (e.g. 0.95)");
+        MethodCatalog.ConfidenceLevel.Contains(level)
+            ? level
+            : throw new CalcInputException(string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"--level: {level} is not {MethodCatalog.ConfidenceLevel.Describe()}"));
 
     private static int Run(TextWriter error, Action work)
     {

@@ -50,7 +50,7 @@ public sealed class EndpointRecords
             if (!rowOfSubject.TryAdd(subject, row))
             {
                 var first = dataset.LineOfRow[rowOfSubject[subject]];
-                throw new SpecException(table.Source.Problem(endpoint.Where is null ? "/endpoint" : "/endpoint/where",
+                throw new SpecException(table.Source.Problem(SpecProblemCode.DuplicateRecords, endpoint.Where is null ? "/endpoint" : "/endpoint/where",
                     $"the endpoint selects more than one record of subject {subject} ({Path.GetFileName(dataset.File)} lines {first} and {dataset.LineOfRow[row]}); narrow the selection so that each subject has at most one record (e.g. ANL01FL = 'Y')"));
             }
         }
@@ -75,7 +75,7 @@ public sealed class EndpointRecords
         var values = variable.DistinctValues();
         if (!values.Contains(value, StringComparer.Ordinal))
         {
-            throw new SpecException(source.Problem(pointer,
+            throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, pointer,
                 $"no record of {Path.GetFileName(dataset.File)} has {variableName} '{value}'{NearestName.Hint(value, values.ToList())}"));
         }
         return variable;

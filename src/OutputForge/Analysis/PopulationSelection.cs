@@ -74,12 +74,12 @@ public sealed class PopulationSelection
         if (armByValue.Count == 0)
         {
             var condition = table.Subset is null ? population.Where : $"{population.Where}, subset {table.Subset}";
-            throw new SpecException(table.Source.Problem("/population",
+            throw new SpecException(table.Source.Problem(SpecProblemCode.NoSubjects, "/population",
                 $"population '{table.Population}' ({condition}) has no subjects with a value of {treatment.Name} in {Path.GetFileName(adsl.File)}"));
         }
         if (!armByValue.ContainsKey(study.Treatment.Control))
         {
-            throw new SpecException(study.Source.Problem("/treatment/control",
+            throw new SpecException(study.Source.Problem(SpecProblemCode.UnknownDataValue, "/treatment/control",
                 $"control arm '{study.Treatment.Control}' is not a value of {treatment.Name} in population '{table.Population}'{NearestName.Hint(study.Treatment.Control, armByValue.Keys.ToList())}"));
         }
         var arms = armByValue
@@ -130,6 +130,6 @@ public sealed class PopulationSelection
     }
 
     private static DataColumn FindVariable(Dataset adsl, string name, SpecSource source, string pointer) =>
-        adsl.Find(name) ?? throw new SpecException(source.Problem(pointer,
+        adsl.Find(name) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, pointer,
             $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{NearestName.Hint(name, adsl.VariableNames)}"));
 }

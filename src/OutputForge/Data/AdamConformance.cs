@@ -27,12 +27,12 @@ public static class AdamConformance
         var subjects = adsl.Find(SubjectVariable);
         if (subjects is null)
         {
-            yield return new DataException(adsl.File, 1, null, $"ADSL has no {SubjectVariable} variable");
+            yield return new DataException(adsl.File, 1, null, $"ADSL has no {SubjectVariable} variable", DataProblemCode.NoSubjectLevelVariable);
             yield break;
         }
         if (adsl.RowCount == 0)
         {
-            yield return new DataException(adsl.File, null, null, "ADSL has a header but no subjects");
+            yield return new DataException(adsl.File, null, null, "ADSL has a header but no subjects", DataProblemCode.NoSubjects);
             yield break;
         }
         var firstLine = new Dictionary<string, int>(StringComparer.Ordinal);
@@ -41,12 +41,12 @@ public static class AdamConformance
             var id = subjects.GetText(row);
             if (id is null)
             {
-                yield return new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable, "USUBJID is empty");
+                yield return new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable, "USUBJID is empty", DataProblemCode.EmptySubject);
             }
             else if (!firstLine.TryAdd(id, adsl.LineOfRow[row]))
             {
                 yield return new DataException(adsl.File, adsl.LineOfRow[row], SubjectVariable,
-                    $"subject {id} has a second ADSL row (first on line {firstLine[id]}); ADSL has one row per subject");
+                    $"subject {id} has a second ADSL row (first on line {firstLine[id]}); ADSL has one row per subject", DataProblemCode.RepeatedSubject);
             }
         }
         foreach (var problem in FlagProblems(adsl))
@@ -65,7 +65,7 @@ public static class AdamConformance
         var subjects = dataset.Find(SubjectVariable);
         if (subjects is null)
         {
-            yield return new DataException(dataset.File, 1, null, $"the dataset has no {SubjectVariable} variable, so its records cannot be linked to ADSL");
+            yield return new DataException(dataset.File, 1, null, $"the dataset has no {SubjectVariable} variable, so its records cannot be linked to ADSL", DataProblemCode.NoSubjectVariable);
             yield break;
         }
         var known = new HashSet<string>(StringComparer.Ordinal);
@@ -82,12 +82,12 @@ public static class AdamConformance
             var id = subjects.GetText(row);
             if (id is null)
             {
-                yield return new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable, "USUBJID is empty");
+                yield return new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable, "USUBJID is empty", DataProblemCode.EmptySubject);
             }
             else if (!known.Contains(id))
             {
                 yield return new DataException(dataset.File, dataset.LineOfRow[row], SubjectVariable,
-                    $"subject {id} is not in ADSL ({Path.GetFileName(adsl.File)})");
+                    $"subject {id} is not in ADSL ({Path.GetFileName(adsl.File)})", DataProblemCode.UnknownSubject);
             }
         }
     }
@@ -106,7 +106,7 @@ public static class AdamConformance
                 if (value is not null and not "Y" and not "N")
                 {
                     yield return new DataException(dataset.File, dataset.LineOfRow[row], column.Name,
-                        $"flag value '{value}' (ADaM flags hold Y, N or nothing)");
+                        $"flag value '{value}' (ADaM flags hold Y, N or nothing)", DataProblemCode.Flag);
                 }
             }
         }

@@ -122,7 +122,7 @@ public static class CsvDatasetReader
         }
         catch (CsvFormatException e)
         {
-            throw new DataException(path, e.LineNumber > 0 ? (int)e.LineNumber : null, null, DescribeMalformed(e.Message));
+            throw new DataException(path, e.LineNumber > 0 ? (int)e.LineNumber : null, null, DescribeMalformed(e));
         }
     }
 
@@ -232,12 +232,23 @@ public static class CsvDatasetReader
         return fields;
     }
 
-    /// <summary>Keeps the reader's own description of the fault, without the record and byte positions we report ourselves.</summary>
-    private static string DescribeMalformed(string message)
+    /// <summary>
+    /// The faults the CSV reader (CsvHelper 34, RFC 4180 mode) reports in malformed input. Its exception gives the record,
+    /// line and byte offset as properties but the fault only inside its message, so the fault is recognized by the
+    /// reader's fixed wording of it and our message says it in the same words, with the position we report ourselves.
+    /// </summary>
+    private static readonly string[] MalformedFaults =
+    [
+        "a quote inside an unquoted field",
+        "text after the closing quote of a quoted field",
+        "a quoted field that is never closed",
+        "a line break inside a quoted field",
+    ];
+
+    private static string DescribeMalformed(CsvFormatException e)
     {
-        var text = System.Text.RegularExpressions.Regex.Replace(message, @"^.*?\(line \d+\):\s*", string.Empty);
-        text = System.Text.RegularExpressions.Regex.Replace(text, @"\s*\(byte offset \d+\)", string.Empty).TrimEnd('.');
-        return $"malformed CSV: {text} (RFC 4180 quoting expected)";
+        var fault = MalformedFaults.FirstOrDefault(f => e.Message.Contains(f, StringComparison.Ordinal)) ?? "the record does not follow RFC 4180";
+        return $"malformed CSV: {fault} (RFC 4180 quoting expected)";
     }
 
     internal static void CheckHeader(string path, string[] header)

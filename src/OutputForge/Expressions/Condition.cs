@@ -93,7 +93,7 @@ public sealed class Condition
     {
         var variable = source.FindVariable(name)
             ?? throw new ConditionSyntaxException(
-                $"{source.SourceName} has no variable {name}{NearestName.Hint(name, source.VariableNames)}", position);
+                $"{source.SourceName} has no variable {name}{NearestName.Hint(name, source.VariableNames)}", position, ConditionProblem.UnknownVariable);
         used.Add(variable.Name);
         return variable;
     }

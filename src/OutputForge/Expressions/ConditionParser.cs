@@ -181,7 +181,7 @@ public sealed class ConditionParser
         if (word.Kind == TokenKind.Identifier && string.Equals(word.Text, "missing", StringComparison.OrdinalIgnoreCase))
         {
             throw new ConditionSyntaxException(
-                $"the missing-value test is written '{(negated ? "is not null" : "is null")}', not '{written} {word.Text}'", word.Position);
+                $"the missing-value test is written '{(negated ? "is not null" : "is null")}', not '{written} {word.Text}'", word.Position, ConditionProblem.MissingValueTest);
         }
     }
 

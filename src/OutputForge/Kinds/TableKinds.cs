@@ -49,7 +49,17 @@ public static class TableKinds
     {
         if (Find(table.Kind) is { } kind && table.KindKeys?[kind.SettingsKey] is { } settings)
         {
-            table.KindSettings = kind.ReadSettings(settings, options);
+            try
+            {
+                table.KindSettings = kind.ReadSettings(settings, options);
+            }
+            catch (JsonException e)
+            {
+                // The schema fragment refuses what the settings class cannot read; this guards a class that asks more.
+                // The reader's path ("$.scores") is relative to the settings object.
+                var inside = (e.Path ?? "$").TrimStart('$').Replace("[", ".").Replace("]", string.Empty).Replace('.', '/');
+                throw table.Source.Error($"/{kind.SettingsKey}{inside}", e.Message);
+            }
         }
     }
 

@@ -52,6 +52,7 @@ public static class TableSchemaComposition
             }
         }
         schema["allOf"] = rules;
+        CatalogueSchema.Expand(schema);
         return schema;
     }
 

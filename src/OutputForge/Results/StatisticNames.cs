@@ -22,7 +22,7 @@ public static class StatisticNames
     public const string EventCount = "events";
     public const string StandardError = "se";
     public const string StrataCount = "strata";
-    public const string GeometricMean = "geomean";
+    public const string GeometricMean = "geometricMean";
     public const string CoefficientOfVariation = "cv";
 
     public static readonly IReadOnlyList<string> All =

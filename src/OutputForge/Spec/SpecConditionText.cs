@@ -18,7 +18,13 @@ public sealed record SpecConditionText(string Text, SpecSource Source, string Po
         catch (ConditionSyntaxException e)
         {
             // +1 for the opening quote of the JSON string; exact when the condition has no escapes.
-            throw new SpecException(Source.Problem(Pointer,
+            var code = e.Problem switch
+            {
+                ConditionProblem.UnknownVariable => SpecProblemCode.UnknownVariable,
+                ConditionProblem.MissingValueTest => SpecProblemCode.MissingValueTest,
+                _ => SpecProblemCode.ConditionSyntax,
+            };
+            throw new SpecException(Source.Problem(code, Pointer,
                 $"{e.Message} (at character {e.Position} of \"{Text}\")", e.Position));
         }
     }

@@ -18,6 +18,7 @@ internal static class SpecFileReader
         TypeInfoResolver = new System.Text.Json.Serialization.Metadata.DefaultJsonTypeInfoResolver(),
         ReadCommentHandling = JsonCommentHandling.Skip,
         AllowTrailingCommas = true,
+        Converters = { new ChoiceJsonConverterFactory(), new ArmChoiceJsonConverter() },
     };
 
     /// <summary>The largest spec file read: specs are a few kilobytes; 16 MB is far beyond any real one.</summary>
@@ -32,7 +33,7 @@ internal static class SpecFileReader
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            throw new SpecException(new SpecProblem(file, null, null, "$", $"cannot read the spec file ({e.Message})"));
+            throw new SpecException(new SpecProblem(file, null, null, "$", $"cannot read the spec file ({e.Message})") { Code = SpecProblemCode.UnreadableFile });
         }
         JsonDocument document;
         try
@@ -52,7 +53,7 @@ internal static class SpecFileReader
                 message = message[..cut];
             }
             throw new SpecException(new SpecProblem(file, (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1,
-                e.Path ?? "$", $"invalid JSON: {message.TrimEnd('.')}"));
+                e.Path ?? "$", $"invalid JSON: {message.TrimEnd('.')}") { Code = SpecProblemCode.InvalidJson });
         }
         using (document)
         {
@@ -62,12 +63,24 @@ internal static class SpecFileReader
             {
                 throw new SpecException(problems);
             }
-            var model = document.RootElement.Deserialize<T>(ModelOptions)
-                ?? throw new SpecException(source.Problem(string.Empty, "the spec is empty"));
-            attach(model, source);
-            return model;
+            try
+            {
+                var model = document.RootElement.Deserialize<T>(ModelOptions)
+                    ?? throw new SpecException(source.Problem(string.Empty, "the spec is empty"));
+                attach(model, source);
+                return model;
+            }
+            catch (JsonException e)
+            {
+                // The schema refuses what the model cannot read; this guards a model that asks more than its schema.
+                throw new SpecException(source.Problem(PointerOf(e.Path), e.Message));
+            }
         }
     }
+
+    /// <summary>"/statistics/test" for the reader's "$.statistics.test" (and "/tables/0" for "$.tables[0]").</summary>
+    private static string PointerOf(string? path) =>
+        path is null ? string.Empty : path.TrimStart('$').Replace("[", ".").Replace("]", string.Empty).Replace('.', '/');
 
     private static List<SpecProblem> Validate(JsonElement root, string schemaName, SpecSource source)
     {
@@ -89,7 +102,7 @@ internal static class SpecFileReader
             {
                 var pointer = detail.InstanceLocation.ToString();
                 var evaluationPath = detail.EvaluationPath.ToString();
-                var problem = Explain(keyword, message, pointer, evaluationPath, schemaNode, source);
+                var problem = Explain(keyword, message, pointer, evaluationPath, schemaNode, source, root);
                 if (problem is not null && seen.Add(problem.ToString()))
                 {
                     problems.Add(problem);
@@ -109,24 +122,15 @@ internal static class SpecFileReader
     private static IEnumerable<SpecProblem> WithoutTypoEchoes(List<SpecProblem> problems)
     {
         var meant = problems
-            .Select(p => System.Text.RegularExpressions.Regex.Match(p.Message, @"^unknown key '[^']*' \(did you mean '([^']*)'\?\)"))
-            .Where(m => m.Success)
-            .Select(m => m.Groups[1].Value)
+            .Where(p => p.Code == SpecProblemCode.UnknownKey && p.Suggestion is not null)
+            .Select(p => p.Suggestion!)
             .ToHashSet(StringComparer.Ordinal);
-        foreach (var problem in problems)
-        {
-            var missing = System.Text.RegularExpressions.Regex.Match(problem.Message, @"^missing required key: '([^']*)'$");
-            if (missing.Success && meant.Contains(missing.Groups[1].Value))
-            {
-                continue;
-            }
-            yield return problem;
-        }
+        return problems.Where(p => !(p.Code == SpecProblemCode.MissingKey && p.Key is not null && meant.Contains(p.Key)));
     }
 
     /// <summary>Turns one schema error into a message in the spec writer's terms.</summary>
     private static SpecProblem? Explain(string keyword, string message, string pointer, string evaluationPath,
-        JsonNode schemaRoot, SpecSource source)
+        JsonNode schemaRoot, SpecSource source, JsonElement root)
     {
         // A failed "if" only chooses whether "then" applies: it is not a problem of the spec.
         if (evaluationPath.Contains("/if", StringComparison.Ordinal))
@@ -140,21 +144,27 @@ internal static class SpecFileReader
             var parent = Navigate(schemaRoot, evaluationPath[..^"/additionalProperties".Length]);
             var allowed = (parent?["properties"] as JsonObject)?.Select(p => p.Key).Where(k => k != "$schema").ToList() ?? [];
             var key = pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
-            return source.KeyProblem(pointer, $"unknown key '{key}'{NearestName.Hint(key, allowed)}");
+            if (Analysis.MethodCatalog.RetiredKeys.FirstOrDefault(r => r.Old == key && allowed.Contains(r.New)) is { } retired)
+            {
+                return source.KeyProblem(pointer, $"unknown key '{key}' (now called '{retired.New}')")
+                    with { Code = SpecProblemCode.UnknownKey, Key = key, Expected = allowed, Suggestion = retired.New };
+            }
+            return source.KeyProblem(pointer, $"unknown key '{key}'{NearestName.Hint(key, allowed)}")
+                with { Code = SpecProblemCode.UnknownKey, Key = key, Expected = allowed, Suggestion = NearestName.Find(key, allowed) };
         }
         switch (keyword)
         {
             case "":
                 return null;
             case "enum":
-                var values = (keywordNode as JsonArray)?.Select(v => v?.ToJsonString()).ToList() ?? [];
-                return source.Problem(pointer, $"expected one of {string.Join(", ", values)}");
+                return NotAChoice(keywordNode as JsonArray ?? [], pointer, source, root);
             case "required":
                 var requiredList = (keywordNode as JsonArray)?.Select(v => v!.GetValue<string>()).ToList() ?? [];
                 var missing = MissingKeys(message, requiredList);
-                return source.Problem(pointer, $"missing required key{(missing.Count == 1 ? "" : "s")}: {string.Join(", ", missing.Select(m => $"'{m}'"))}");
+                return source.Problem(SpecProblemCode.MissingKey, pointer, $"missing required key{(missing.Count == 1 ? "" : "s")}: {string.Join(", ", missing.Select(m => $"'{m}'"))}")
+                    with { Key = missing.Count == 1 ? missing[0] : null, Expected = missing };
             case "type":
-                return source.Problem(pointer, $"expected {Describe(keywordNode)}: {message}");
+                return source.Problem(SpecProblemCode.WrongType, pointer, $"expected {Describe(keywordNode)}: {message}");
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal) && pointer.EndsWith("/file", StringComparison.Ordinal):
                 return source.Problem(pointer, "expected an XPT file name in the data folder (no folders), ending in .xpt: only an XPT transport file holds several datasets (members)");
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal) && pointer.EndsWith("/member", StringComparison.Ordinal):
@@ -164,6 +174,51 @@ internal static class SpecFileReader
             default:
                 return source.Problem(pointer, message);
         }
+    }
+
+    /// <summary>
+    /// A value outside an enum: the accepted values as data, and where the value is a retired name of a catalogue option
+    /// (e.g. "table" for the column scores), the message names the name that replaced it.
+    /// </summary>
+    private static SpecProblem NotAChoice(JsonArray allowed, string pointer, SpecSource source, JsonElement root)
+    {
+        var names = allowed.Select(v => v is JsonValue value && value.TryGetValue<string>(out var name) ? name : v?.ToJsonString() ?? "null").ToList();
+        var listed = string.Join(", ", allowed.Select(v => v?.ToJsonString()));
+        var written = ValueAt(root, pointer) is { ValueKind: JsonValueKind.String } element ? element.GetString() : null;
+        var retired = written is null ? null : Analysis.MethodCatalog.All
+            .Where(set => set.Names.SequenceEqual(names))
+            .SelectMany(set => set.Retired)
+            .FirstOrDefault(r => r.Old == written);
+        if (retired is not null)
+        {
+            return source.Problem(SpecProblemCode.RetiredName, pointer, $"'{written}' is now called '{retired.New}'; expected one of {listed}")
+                with { Key = written, Expected = names, Suggestion = retired.New };
+        }
+        return source.Problem(SpecProblemCode.NotAChoice, pointer, $"expected one of {listed}")
+            with { Key = written, Expected = names, Suggestion = written is null ? null : NearestName.Find(written, names) };
+    }
+
+    /// <summary>The value a JSON Pointer names in the document, or null where it names none.</summary>
+    private static JsonElement? ValueAt(JsonElement root, string pointer)
+    {
+        var current = root;
+        foreach (var raw in pointer.Split('/', StringSplitOptions.RemoveEmptyEntries))
+        {
+            var segment = raw.Replace("~1", "/").Replace("~0", "~");
+            if (current.ValueKind == JsonValueKind.Object && current.TryGetProperty(segment, out var child))
+            {
+                current = child;
+            }
+            else if (current.ValueKind == JsonValueKind.Array && int.TryParse(segment, out var index) && index < current.GetArrayLength())
+            {
+                current = current[index];
+            }
+            else
+            {
+                return null;
+            }
+        }
+        return current;
     }
 
     private static List<string> MissingKeys(string message, List<string> required)

@@ -162,12 +162,12 @@ public static class SpecLoader
             }
             if (!study.Populations.ContainsKey(table.Population))
             {
-                yield return table.Source.Problem("/population",
+                yield return table.Source.Problem(SpecProblemCode.UnknownReference, "/population",
                     $"unknown population '{table.Population}'{NearestName.Hint(table.Population, populations)}");
             }
             if (table.Endpoint is { } endpoint && !study.Data.Datasets.ContainsKey(endpoint.Dataset))
             {
-                yield return table.Source.Problem("/endpoint/dataset",
+                yield return table.Source.Problem(SpecProblemCode.UnknownReference, "/endpoint/dataset",
                     $"unknown dataset '{endpoint.Dataset}'{NearestName.Hint(endpoint.Dataset, datasets)}");
             }
         }

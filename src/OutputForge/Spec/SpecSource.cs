@@ -29,5 +29,11 @@ public sealed class SpecSource
         return new SpecProblem(File, position?.Line, position?.Column, JsonPositionMap.ToJsonPath(pointer), message);
     }
 
+    /// <summary>A problem of a known kind located at the value of <paramref name="pointer"/>.</summary>
+    public SpecProblem Problem(SpecProblemCode code, string pointer, string message, int characterOffset = 0) =>
+        Problem(pointer, message, characterOffset) with { Code = code };
+
     public SpecException Error(string pointer, string message) => new(Problem(pointer, message));
+
+    public SpecException Error(SpecProblemCode code, string pointer, string message) => new(Problem(code, pointer, message));
 }

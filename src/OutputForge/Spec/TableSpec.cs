@@ -1,5 +1,8 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 using System.Text.Json.Nodes;
 using System.Text.Json.Serialization;
+using OutputForge.Stats;
 
 namespace OutputForge.Spec;
 
@@ -59,8 +62,8 @@ public sealed class EndpointSpec
     /// <summary>Condition that marks a record as a response, e.g. "AVALC = 'Y'".</summary>
     public string? Response { get; init; }
 
-    /// <summary>How subjects without a record are handled: "non-responder", "exclude" or "observed".</summary>
-    public string Missing { get; init; } = "non-responder";
+    /// <summary>How subjects without a record are handled: as non-responders, left out, or as observed.</summary>
+    public MissingResponse Missing { get; init; } = MethodCatalog.MissingResponse.DefaultValue;
 
     /// <summary>Row-block label, e.g. "Itch responder at Week 12".</summary>
     public string? Label { get; init; }
@@ -68,16 +71,16 @@ public sealed class EndpointSpec
 
 public sealed class StatisticsSpec
 {
-    public double Level { get; init; } = 0.95;
-    public string ProportionInterval { get; init; } = "wilson";
-    public string DifferenceInterval { get; init; } = "newcombe";
+    public double Level { get; init; } = MethodCatalog.ConfidenceLevel.Default;
+    public ProportionCiMethod ProportionInterval { get; init; } = MethodCatalog.ProportionInterval.DefaultValue;
+    public DifferenceCiMethod DifferenceInterval { get; init; } = MethodCatalog.DifferenceInterval.DefaultValue;
 
-    /// <summary>"auto" (chi-square, or Fisher's exact test when an expected count is below 5), "chi-square", "yates", "likelihood-ratio" or "fisher".</summary>
-    public string Test { get; init; } = "auto";
+    /// <summary>Auto (chi-square, or Fisher's exact test when an expected count is below 5), chi-square, Yates, likelihood-ratio or Fisher.</summary>
+    public TableTest Test { get; init; } = MethodCatalog.TableTest.DefaultValue;
 
     /// <summary>Decimals of percentages.</summary>
     public int PercentDecimals { get; init; } = 1;
 
     /// <summary>p-values below this are shown as "&lt;threshold".</summary>
-    public double PValueFloor { get; init; } = 0.001;
+    public double PValueFloor { get; init; } = MethodCatalog.PValueFloor.Default;
 }

@@ -1,5 +1,6 @@
 using System.Text.Json;
 using OutputForge.Cli;
+using OutputForge.Tests.Support;
 
 namespace OutputForge.Tests.Cli;
 
@@ -51,10 +52,10 @@ public sealed class CalcCommandTests
     }
 
     [Fact]
-    public void Table_gives_pearson_with_statistic_and_df()
+    public void Table_gives_pearson_chi_square_with_statistic_and_df()
     {
         // Chi-square of [[10, 20], [30, 40]] by hand: expected 12, 18, 28, 42; X2 = 4/12 + 4/18 + 4/28 + 4/42 = 0.79365...
-        var pearson = Json("table", "--counts", "10,20;30,40", "--test", "pearson");
+        var pearson = Json("table", "--counts", "10,20;30,40", "--test", "chi-square");
         Assert.Equal(4.0 / 12 + 4.0 / 18 + 4.0 / 28 + 4.0 / 42, pearson.GetProperty("statistic").GetDouble(), 10);
         Assert.Equal(1, pearson.GetProperty("df").GetDouble());
     }
@@ -80,11 +81,63 @@ public sealed class CalcCommandTests
         Assert.False(string.IsNullOrEmpty(empty.GetProperty("note").GetString()));
     }
 
+    [Fact]
+    public void Table_test_auto_follows_the_tables_rule()
+    {
+        // Cochran's rule as the responder tables apply it (common practice): expected counts of 3,1;1,3 are all 2 (< 5),
+        // so Fisher's exact test, p = 34/70 (Agresti 2013, section 3.5.2, as above); 10,20;30,40 has expected counts
+        // 12, 18, 28, 42, so Pearson's chi-square, X2 by hand as above.
+        var small = Json("table", "--counts", "3,1;1,3", "--test", "auto");
+        Assert.Equal(34.0 / 70, small.GetProperty("pValue").GetDouble(), 12);
+        Assert.Equal(FisherExactTest.Compute(new[,] { { 3, 1 }, { 1, 3 } }).Method, small.GetProperty("method").GetString());
+        var large = Json("table", "--counts", "10,20;30,40", "--test", "auto");
+        Assert.Equal(4.0 / 12 + 4.0 / 18 + 4.0 / 28 + 4.0 / 42, large.GetProperty("statistic").GetDouble(), 10);
+    }
+
+    [Fact]
+    public void Stratified_gives_the_mantel_haenszel_ratio_and_difference_of_the_tables()
+    {
+        // The "invented_three" strata of tests/OutputForge.Stats.Tests/Oracles/ratio_strata_oracles.json: epiR 2.0.57
+        // epi.2by2 RR.mh.wald (Greenland-Robins variance) and ARisk.mh.sato (Sato variance), the reference the Stats
+        // tests hold the table's methods to. Counts as "events1,non-events1;events2,non-events2" per stratum.
+        using var oracle = JsonDocument.Parse(File.ReadAllText(Path.Combine(RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "ratio_strata_oracles.json")));
+        var set = oracle.RootElement.GetProperty("strata").GetProperty("invented_three");
+        var result = Json("stratified", "--counts", Counts(set.GetProperty("strata")));
+        var epir = set.GetProperty("epir");
+        var rr = result.GetProperty("commonRelativeRisk");
+        Assert.Equal(epir.GetProperty("rr").GetDouble(), rr.GetProperty("estimate").GetDouble(), 12);
+        Assert.Equal(epir.GetProperty("rr_lower").GetDouble(), rr.GetProperty("lower").GetDouble(), 10);
+        Assert.Equal(epir.GetProperty("rr_upper").GetDouble(), rr.GetProperty("upper").GetDouble(), 10);
+        var rd = result.GetProperty("commonRiskDifference");
+        Assert.Equal(epir.GetProperty("rd").GetDouble(), rd.GetProperty("estimate").GetDouble(), 12);
+        Assert.Equal(epir.GetProperty("rd_lower").GetDouble(), rd.GetProperty("lower").GetDouble(), 10);
+        Assert.Equal(epir.GetProperty("rd_upper").GetDouble(), rd.GetProperty("upper").GetDouble(), 10);
+    }
+
+    [Fact]
+    public void Stratified_gives_the_stratified_miettinen_nurminen_interval_of_the_tables()
+    {
+        // The first case of tests/OutputForge.Stats.Tests/Oracles/stratified_mn_oracles.json (an independent
+        // reimplementation of Miettinen and Nurminen 1985 with scipy 1.10.1, the reference of the Stats tests).
+        using var oracle = JsonDocument.Parse(File.ReadAllText(Path.Combine(RepositoryRoot.Path, "tests", "OutputForge.Stats.Tests", "Oracles", "stratified_mn_oracles.json")));
+        var first = oracle.RootElement.GetProperty("cases")[0];
+        var mn = Json("stratified", "--counts", Counts(first.GetProperty("strata"))).GetProperty("commonRiskDifferenceMiettinenNurminen");
+        Assert.Equal(first.GetProperty("estimate").GetDouble(), mn.GetProperty("estimate").GetDouble(), 10);
+        Assert.Equal(first.GetProperty("lower").GetDouble(), mn.GetProperty("lower").GetDouble(), 8);
+        Assert.Equal(first.GetProperty("upper").GetDouble(), mn.GetProperty("upper").GetDouble(), 8);
+    }
+
+    /// <summary>Strata given as [events1, n1, events2, n2] written as calc's 2 x 2 tables.</summary>
+    private static string Counts(JsonElement strata) => string.Join("|", strata.EnumerateArray().Select(s =>
+        $"{s[0].GetInt32()},{s[1].GetInt32() - s[0].GetInt32()};{s[2].GetInt32()},{s[3].GetInt32() - s[2].GetInt32()}"));
+
     [Theory]
     [InlineData("events cannot exceed", "proportion", "--events", "5", "--n", "3", "--method", "wilson")]
     [InlineData("cannot be negative", "difference", "--events1", "-1", "--n1", "3", "--events2", "1", "--n2", "3", "--method", "wald")]
-    [InlineData("row 2 has 1 counts but row 1 has 2", "table", "--counts", "1,2;3", "--test", "pearson")]
-    [InlineData("is not a whole non-negative count", "table", "--counts", "1,-2;3,4", "--test", "pearson")]
+    [InlineData("row 2 has 1 counts but row 1 has 2", "table", "--counts", "1,2;3", "--test", "chi-square")]
+    [InlineData("is not a whole non-negative count", "table", "--counts", "1,-2;3,4", "--test", "chi-square")]
+    [InlineData("unknown 'pearson' (now called 'chi-square')", "table", "--counts", "1,2;3,4", "--test", "pearson")]
+    [InlineData("not between 0.5 and 1", "proportion", "--events", "1", "--n", "3", "--method", "wilson", "--level", "0.4")]
     [InlineData("did you mean 'wilson'?", "proportion", "--events", "1", "--n", "3", "--method", "wilsn")]
     [InlineData("2 x 2 tables only", "table", "--counts", "1,2,3;4,5,6", "--test", "yates")]
     [InlineData("same shape", "stratified", "--counts", "1,2;3,4|1,2,3;4,5,6")]

@@ -102,19 +102,27 @@ public sealed class DemographicsAnalysisTests
     }
 
     [Fact]
+    public void The_retired_row_statistic_geomean_gets_an_error_naming_geometric_mean()
+    {
+        using var study = new SummaryStudy(Table.Replace("\"min - max\"]", "\"min - max\", \"geomean\"]"));
+        var error = Assert.Throws<OutputForge.Spec.SpecException>(study.Analyze);
+        Assert.Contains("the statistic 'geomean' in row \"geomean\" is now called 'geometric-mean'", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Geometric_mean_and_coefficient_of_variation_rows()
     {
-        using var study = new SummaryStudy(Table.Replace("\"min - max\"]", "\"min - max\", \"geomean\", \"cv\"]"));
+        using var study = new SummaryStudy(Table.Replace("\"min - max\"]", "\"min - max\", \"geometric-mean\", \"cv\"]"));
         var result = study.Analyze();
         // R 4.2.2: exp(mean(log(c(30, 41, 52)))) = 39.99166493, exp(mean(log(c(35, 46, 57, 68)))) = 49.9807088384;
         // 100 * sd / mean = 26.8292682927 and 27.5746387109. Decimals: geometric mean as the mean (1 for integer data),
         // CV% one (common practice).
-        Assert.Equal(39.99166493, SummaryStudy.Value(result, "AGE/geomean", "placebo", "geomean")!.Value, 8);
+        Assert.Equal(39.99166493, SummaryStudy.Value(result, "AGE/geometric-mean", "placebo", "geometricMean")!.Value, 8);
         Assert.Equal(27.5746387109, SummaryStudy.Value(result, "AGE/cv", "active", "cv")!.Value, 9);
-        Assert.Equal("40.0", SummaryStudy.Displayed(result, "AGE/geomean", "placebo"));
-        Assert.Equal("50.0", SummaryStudy.Displayed(result, "AGE/geomean", "active"));
+        Assert.Equal("40.0", SummaryStudy.Displayed(result, "AGE/geometric-mean", "placebo"));
+        Assert.Equal("50.0", SummaryStudy.Displayed(result, "AGE/geometric-mean", "active"));
         Assert.Equal("26.8", SummaryStudy.Displayed(result, "AGE/cv", "placebo"));
-        Assert.Equal("Geometric mean", result.Rows.Single(r => r.Key == "AGE/geomean").Label);
+        Assert.Equal("Geometric mean", result.Rows.Single(r => r.Key == "AGE/geometric-mean").Label);
         Assert.Equal("CV%", result.Rows.Single(r => r.Key == "AGE/cv").Label);
     }
 

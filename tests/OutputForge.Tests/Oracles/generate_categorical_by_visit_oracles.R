@@ -114,7 +114,7 @@ write_oracle <- function(file, adsl, rec, variants) {
     sprintf('"%s": {"imputation": %s, "strata": [%s], "test": "%s", "comparison": "%s", "scores": "%s"}', n,
             if (length(v$imputation) == 0) "null" else sprintf('"%s"', v$imputation),
             paste(sprintf('"%s"', v$strata), collapse = ", "), c(cor = "correlation", rmeans = "row-mean-scores", general = "general-association")[v$test],
-            v$comparison, if (is.null(v$scores)) "table" else v$scores)
+            v$comparison, if (is.null(v$scores)) "category-values" else v$scores)
   })
   writeLines(c("{", sprintf('"versions": {"R": "%s", "vcdExtra": "%s"},', R.version.string, as.character(packageVersion("vcdExtra"))),
                '"generator": "tests/OutputForge.Tests/Oracles/generate_categorical_by_visit_oracles.R",',
@@ -126,7 +126,7 @@ args <- commandArgs(trailingOnly = TRUE)
 data <- args[1]
 adsl <- read.csv(file.path(data, "adsl.csv"), stringsAsFactors = FALSE, na.strings = "")
 adeff <- read.csv(file.path(data, "adeff.csv"), stringsAsFactors = FALSE, na.strings = "")
-demo <- function(imputation, strata, test, comparison, scores = "table") list(population = "ITTFL", parameter = "SGICITCH",
+demo <- function(imputation, strata, test, comparison, scores = "category-values") list(population = "ITTFL", parameter = "SGICITCH",
   visits = c("Week 4", "Week 8", "Week 12"), categories = 7, arms = c("Placebo", "QF-217 10 mg", "QF-217 30 mg"),
   imputation = imputation, strata = strata, test = test, comparison = comparison, scores = scores)
 write_oracle("tests/OutputForge.Tests/Oracles/categorical_by_visit_oracles.json", adsl, adeff, list(
@@ -143,7 +143,7 @@ if (file.exists(file.path(pilot, "adqscibc.csv"))) {
   cibic <- read.csv(file.path(pilot, "adqscibc.csv"), stringsAsFactors = FALSE, na.strings = "")
   cibic$SITEGR1 <- as.character(cibic$SITEGR1)
   padsl$SITEGR1 <- as.character(padsl$SITEGR1)
-  pilot_spec <- function(imputation, strata, test, comparison, scores = "table") list(population = "EFFFL", parameter = "CIBICVAL",
+  pilot_spec <- function(imputation, strata, test, comparison, scores = "category-values") list(population = "EFFFL", parameter = "CIBICVAL",
     visits = c("Week 8", "Week 16", "Week 24"), categories = 7, arms = c("Placebo", "Xanomeline Low Dose", "Xanomeline High Dose"),
     imputation = imputation, strata = strata, test = test, comparison = comparison, scores = scores)
   write_oracle("tests/OutputForge.Tests/Oracles/pilot_categorical_by_visit_oracles.json", padsl, cibic, list(

@@ -4,23 +4,23 @@ using OutputForge.Stats;
 namespace OutputForge.Analysis.Summaries;
 
 /// <summary>
-/// The test of a levels x arms table that a spec names ("chi-square", "likelihood-ratio" or "fisher"), with its
+/// The test of a levels x arms table that a spec names (chi-square, likelihood-ratio or Fisher), with its
 /// warnings: the test's own notes (empty rows or columns left out) and, for the chi-square tests, Cochran's
 /// (1954) caution when expected counts fall below 5.
 /// </summary>
 public static class AssociationTest
 {
-    public static (TestResult Test, List<string> Warnings) Run(string choice, int[,] table, string what)
+    public static (TestResult Test, List<string> Warnings) Run(SummaryTest choice, int[,] table, string what)
     {
         var warnings = new List<string>();
         TestResult test;
-        if (choice == "fisher")
+        if (choice == SummaryTest.Fisher)
         {
             test = FisherExactTest.Compute(table);
         }
         else
         {
-            test = choice == "likelihood-ratio" ? LikelihoodRatioChiSquareTest.Compute(table) : PearsonChiSquareTest.Compute(table);
+            test = choice == SummaryTest.LikelihoodRatio ? LikelihoodRatioChiSquareTest.Compute(table) : PearsonChiSquareTest.Compute(table);
             var expected = ContingencyTable.Diagnose(WithoutEmptyLines(table));
             if (test.IsEstimable && expected.CellsBelowFive > 0)
             {

@@ -13,6 +13,6 @@ public sealed record CategoricalRequest(
     string? Where,
     IReadOnlyList<LevelSpec>? Levels,
     string? OrderBy,
-    string Order,
+    LevelSorting Order,
     bool Missing,
     string Pointer);

@@ -33,7 +33,7 @@ public static class LevelOrder
         }
         if (request.OrderBy is { } orderName)
         {
-            var order = adsl.Find(orderName) ?? throw new SpecException(source.Problem(request.Pointer + "/orderBy",
+            var order = adsl.Find(orderName) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, request.Pointer + "/orderBy",
                 $"ADSL has no variable {orderName}{NearestName.Hint(orderName, adsl.VariableNames)}"));
             if (order.Kind != Expressions.VariableKind.Number)
             {
@@ -59,7 +59,7 @@ public static class LevelOrder
                 .ThenBy(v => v, StringComparer.Ordinal)
                 .Select(v => (v, v)).ToList();
         }
-        if (request.Order == "frequency")
+        if (request.Order == LevelSorting.Frequency)
         {
             var counts = rows.Select(variable.GetText).OfType<string>().GroupBy(v => v, StringComparer.Ordinal)
                 .ToDictionary(g => g.Key, g => g.Count(), StringComparer.Ordinal);

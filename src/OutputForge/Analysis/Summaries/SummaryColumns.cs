@@ -23,5 +23,5 @@ public static class SummaryColumns
         columns.Select(c => new ResultColumn(c.Key, c.Label, c.N)).ToList();
 
     public static PercentStyle StyleOf(PercentDisplaySpec percent) =>
-        new(ZeroAsCountOnly: percent.Zero != "count-percent", EdgeMarks: percent.Edges);
+        new(ZeroAsCountOnly: percent.Zero != ZeroDisplay.CountPercent, EdgeMarks: percent.Edges);
 }

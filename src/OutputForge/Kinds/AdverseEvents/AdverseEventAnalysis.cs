@@ -38,7 +38,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         var records = AdverseEventRecords.Read(study, table, data, selection, warnings);
         var columns = SummaryColumns.For(selection, study, settings.Total);
         var control = selection.Control;
-        var active = settings.Test == "fisher" ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
+        var active = settings.Test == SummaryTest.Fisher ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
         var resultColumns = SummaryColumns.ToResultColumns(columns);
         resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value [a]", null)));
         var context = new RowContext(settings, columns, selection, active, control,
@@ -95,20 +95,21 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
     /// <summary>The arms whose count orders rows by frequency: one arm, or all of them ("total").</summary>
     private static IReadOnlySet<TreatmentArm> SortColumn(AdverseEventsSettings settings, PopulationSelection selection, SpecSource source)
     {
-        if (settings.Sort.Column == ResultKeys.Total)
+        var column = settings.Sort.Column;
+        if (column.Kind == ArmChoiceKind.Total)
         {
             return selection.Arms.ToHashSet();
         }
-        var arm = selection.Arms.FirstOrDefault(a => a.Value == settings.Sort.Column) ?? throw new SpecException(source.Problem("/adverseEvents/sort/column",
-            $"'{settings.Sort.Column}' is neither 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(settings.Sort.Column, selection.Arms.Select(a => a.Value).ToList())}"));
+        var arm = selection.Arms.FirstOrDefault(a => a.Value == column.Text) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, "/adverseEvents/sort/column",
+            $"'{column.Text}' is neither 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(column.Text, selection.Arms.Select(a => a.Value).ToList())}"));
         return new HashSet<TreatmentArm> { arm };
     }
 
     private static IEnumerable<T> Sorted<T>(IEnumerable<T> items, Func<T, string> name, Func<T, List<AdverseEventRecord>> records,
-        string by, IReadOnlySet<TreatmentArm> arms)
+        LevelSorting by, IReadOnlySet<TreatmentArm> arms)
     {
         var byName = StringComparer.OrdinalIgnoreCase;
-        return by == "frequency"
+        return by == LevelSorting.Frequency
             ? items.OrderByDescending(i => records(i).Where(r => arms.Contains(r.Arm)).Select(r => r.Subject).Distinct(StringComparer.Ordinal).Count())
                 .ThenBy(name, byName).ThenBy(name, StringComparer.Ordinal)
             : items.OrderBy(name, byName).ThenBy(name, StringComparer.Ordinal);
@@ -131,14 +132,14 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             var denominator = arms.Sum(selection.Count);
             return denominator > 0 && 100m * n >= (decimal)threshold.Percent * denominator;
         }
-        return threshold.In switch
+        return threshold.In.Kind switch
         {
-            "any-arm" => selection.Arms.Any(a => Meets(new HashSet<TreatmentArm> { a })),
-            "total" => Meets(selection.Arms.ToHashSet()),
+            ArmChoiceKind.AnyArm => selection.Arms.Any(a => Meets(new HashSet<TreatmentArm> { a })),
+            ArmChoiceKind.Total => Meets(selection.Arms.ToHashSet()),
             _ => Meets(new HashSet<TreatmentArm>
             {
-                selection.Arms.FirstOrDefault(a => a.Value == threshold.In) ?? throw new SpecException(source.Problem("/adverseEvents/threshold/in",
-                    $"'{threshold.In}' is neither 'any-arm', 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(threshold.In, selection.Arms.Select(a => a.Value).ToList())}")),
+                selection.Arms.FirstOrDefault(a => a.Value == threshold.In.Text) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, "/adverseEvents/threshold/in",
+                    $"'{threshold.In.Text}' is neither 'any-arm', 'total' nor an arm of {selection.TreatmentVariable}{NearestName.Hint(threshold.In.Text, selection.Arms.Select(a => a.Value).ToList())}")),
             }),
         };
     }
@@ -165,12 +166,12 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         }
         if (settings.Threshold is { } threshold)
         {
-            var where = threshold.In switch { "any-arm" => "any arm", "total" => "all arms combined", _ => threshold.In };
+            var where = threshold.In.Kind switch { ArmChoiceKind.AnyArm => "any arm", ArmChoiceKind.Total => "all arms combined", _ => threshold.In.Text };
             notes.Add(string.Create(CultureInfo.InvariantCulture,
                 $"Preferred terms reported by at least {threshold.Percent:0.###}% of subjects in {where}; a system organ class row counts all of its events, including terms not shown."));
         }
-        notes.Add(settings.Sort.By == "frequency"
-            ? $"Sorted by decreasing number of subjects in {(settings.Sort.Column == ResultKeys.Total ? "all arms combined" : settings.Sort.Column)}, then alphabetically."
+        notes.Add(settings.Sort.By == LevelSorting.Frequency
+            ? $"Sorted by decreasing number of subjects in {(settings.Sort.Column.Kind == ArmChoiceKind.Total ? "all arms combined" : settings.Sort.Column.Text)}, then alphabetically."
             : "Sorted alphabetically.");
         return notes;
     }

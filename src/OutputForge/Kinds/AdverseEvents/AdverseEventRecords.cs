@@ -19,7 +19,7 @@ public static class AdverseEventRecords
         var settings = table.Settings<AdverseEventsSettings>();
         if (!study.Data.Datasets.ContainsKey(settings.Dataset))
         {
-            throw new SpecException(table.Source.Problem("/adverseEvents/dataset",
+            throw new SpecException(table.Source.Problem(SpecProblemCode.UnknownReference, "/adverseEvents/dataset",
                 $"unknown dataset '{settings.Dataset}'{NearestName.Hint(settings.Dataset, study.Data.Datasets.Keys.ToList())}"));
         }
         var dataset = data[settings.Dataset];
@@ -75,6 +75,6 @@ public static class AdverseEventRecords
     }
 
     private static DataColumn Find(Dataset dataset, string name, SpecSource source, string pointer) =>
-        dataset.Find(name) ?? throw new SpecException(source.Problem(pointer,
+        dataset.Find(name) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, pointer,
             $"{Path.GetFileName(dataset.File)} has no variable {name}{NearestName.Hint(name, dataset.VariableNames)}"));
 }

@@ -1,3 +1,5 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 using OutputForge.Spec;
 
 namespace OutputForge.Kinds.AdverseEvents;
@@ -32,8 +34,8 @@ public sealed class AdverseEventsSettings
 
     public AdverseEventThresholdSpec? Threshold { get; init; }
 
-    /// <summary>"none" or "fisher": Fisher's exact test of each active arm against the control, per row.</summary>
-    public string Test { get; init; } = "none";
+    /// <summary>None, or Fisher's exact test of each active arm against the control, per row.</summary>
+    public SummaryTest Test { get; init; } = MethodCatalog.AdverseEventTest.DefaultValue;
 
     public AdverseEventSeveritySpec? Severity { get; init; }
 
@@ -43,16 +45,16 @@ public sealed class AdverseEventsSettings
     public PercentDisplaySpec Percent { get; init; } = new();
 
     /// <summary>p-values below this are shown as "&lt;threshold".</summary>
-    public double PValueFloor { get; init; } = 0.001;
+    public double PValueFloor { get; init; } = MethodCatalog.PValueFloor.Default;
 }
 
 public sealed class AdverseEventSortSpec
 {
-    /// <summary>"alphabetical" or "frequency" (descending subject count in <see cref="Column"/>, ties alphabetical).</summary>
-    public string By { get; init; } = "alphabetical";
+    /// <summary>Alphabetical, or by frequency (descending subject count in <see cref="Column"/>, ties alphabetical).</summary>
+    public LevelSorting By { get; init; } = MethodCatalog.LevelSorting.DefaultValue;
 
     /// <summary>The arm (its value in the data) or "total" whose count orders the rows.</summary>
-    public string Column { get; init; } = "total";
+    public ArmChoice Column { get; init; } = ArmChoice.Total;
 }
 
 public sealed class AdverseEventThresholdSpec
@@ -61,7 +63,7 @@ public sealed class AdverseEventThresholdSpec
     public required double Percent { get; init; }
 
     /// <summary>...in "any-arm", in the "total", or in the arm with this value.</summary>
-    public string In { get; init; } = "any-arm";
+    public ArmChoice In { get; init; } = ArmChoice.AnyArm;
 }
 
 public sealed class AdverseEventSeveritySpec

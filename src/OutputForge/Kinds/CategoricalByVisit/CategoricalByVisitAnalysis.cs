@@ -46,10 +46,10 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         var categories = ResponseCategories.From(settings, table.Source);
         var responses = VisitResponses.Select(table, data, categories, warnings);
         var strata = settings.Strata.Select((s, i) => RecordVariable.Find(s, responses.Dataset, data, table.Source, $"/categoricalByVisit/strata/{i}")).ToList();
-        var testing = settings.Test != "none";
+        var testing = settings.Test != GeneralizedCmhStatistic.None;
         var scores = testing ? categories.Scores(settings.Scores, table.Source) : [];
         var control = selection.Control;
-        var allArms = settings.Comparison == "all-arms";
+        var allArms = settings.Comparison == ArmComparison.AllArms;
         if (testing && allArms && selection.Arms.Count < 2)
         {
             throw new SpecException(table.Source.Problem("/categoricalByVisit/comparison", "the population has a single arm; there is nothing to compare"));

@@ -1,3 +1,5 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 using System.Text.Json;
 
 namespace OutputForge.Kinds.CategoricalByVisit;
@@ -26,20 +28,20 @@ public sealed class CategoricalByVisitSettings
     /// </summary>
     public string? Imputation { get; init; }
 
-    /// <summary>"row-mean-scores" (default), "correlation", "general-association" or "none".</summary>
-    public string Test { get; init; } = "row-mean-scores";
+    /// <summary>Row mean scores (default), correlation, general association or none.</summary>
+    public GeneralizedCmhStatistic Test { get; init; } = MethodCatalog.GeneralizedCmh.DefaultValue;
 
     /// <summary>
-    /// Column scores: "table" (the category values, or each category's score), "equal-spacing" (1, 2, ... in
-    /// listed order) or "modified-ridit" (standardized midranks computed within each stratum).
+    /// Column scores: category values (each category's score, else its value), equal spacing (1, 2, ... in
+    /// listed order) or modified ridits (standardized midranks computed within each stratum).
     /// </summary>
-    public string Scores { get; init; } = "table";
+    public ColumnScores Scores { get; init; } = MethodCatalog.ColumnScores.DefaultValue;
 
     /// <summary>Stratification variables (endpoint record, else ADSL), cross-classified; none for an unstratified test.</summary>
     public List<string> Strata { get; init; } = [];
 
-    /// <summary>"each-vs-control" (each active arm with the control, two arms per test) or "all-arms" (one test over every arm).</summary>
-    public string Comparison { get; init; } = "each-vs-control";
+    /// <summary>Each active arm with the control (two arms per test), or one test over every arm.</summary>
+    public ArmComparison Comparison { get; init; } = MethodCatalog.ArmComparison.DefaultValue;
 }
 
 /// <summary>One response category: its value in the data (a number for AVAL, text for AVALC), label and optional score.</summary>
@@ -48,6 +50,6 @@ public sealed class CategorySpec
     public required JsonElement Value { get; init; }
     public string? Label { get; init; }
 
-    /// <summary>Score of the category for the "table" scores; the numeric value when absent.</summary>
+    /// <summary>Score of the category for the category-values scores; the numeric value when absent.</summary>
     public double? Score { get; init; }
 }

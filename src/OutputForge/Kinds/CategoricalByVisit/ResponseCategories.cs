@@ -70,16 +70,16 @@ internal sealed class ResponseCategories
     }
 
     /// <summary>
-    /// Column scores for the spec's choice: "table" (each category's score or numeric value) or "equal-spacing"
-    /// (1, 2, ...); empty for "modified-ridit", whose scores come from each stratum's table.
+    /// Column scores for the spec's choice: category values (each category's score or numeric value) or equal
+    /// spacing (1, 2, ...); empty for modified ridits, whose scores come from each stratum's table.
     /// </summary>
-    public double[] Scores(string choice, SpecSource source)
+    public double[] Scores(ColumnScores choice, SpecSource source)
     {
-        if (choice == "modified-ridit")
+        if (choice == ColumnScores.ModifiedRidit)
         {
             return [];
         }
-        if (choice == "equal-spacing")
+        if (choice == ColumnScores.EqualSpacing)
         {
             return Enumerable.Range(1, Items.Count).Select(i => (double)i).ToArray();
         }
@@ -87,7 +87,7 @@ internal sealed class ResponseCategories
         for (var i = 0; i < Items.Count; i++)
         {
             scores[i] = Items[i].TableScore ?? throw new SpecException(source.Problem($"/categoricalByVisit/categories/{i}",
-                $"category '{Items[i].ValueText}' is text and has no \"score\"; table scores need a number for every category (or use \"scores\": \"equal-spacing\")"));
+                $"category '{Items[i].ValueText}' is text and has no \"score\"; category-values scores need a number for every category (or use \"scores\": \"equal-spacing\")"));
         }
         return scores;
     }

@@ -30,7 +30,7 @@ internal sealed record VisitComparison(
     /// </summary>
     public static VisitComparison Compute(string columnKey, IReadOnlyList<TreatmentArm> arms,
         IReadOnlyList<(TreatmentArm Arm, int Category, StratumKey? Stratum)> responses, int categories,
-        IReadOnlyList<double> columnScores, string test)
+        IReadOnlyList<double> columnScores, GeneralizedCmhStatistic test)
     {
         var rowOf = arms.Select((a, i) => (a, i)).ToDictionary(p => p.a, p => p.i);
         var used = responses.Where(r => rowOf.ContainsKey(r.Arm)).ToList();
@@ -64,26 +64,26 @@ internal sealed record VisitComparison(
                 : GeneralizedCochranMantelHaenszel.Compute(tables, rowScores, columnScores);
             result = test switch
             {
-                "correlation" => all.NonzeroCorrelation,
-                "general-association" => all.GeneralAssociation,
+                GeneralizedCmhStatistic.Correlation => all.NonzeroCorrelation,
+                GeneralizedCmhStatistic.GeneralAssociation => all.GeneralAssociation,
                 _ => all.RowMeanScores,
             };
         }
         return new VisitComparison(columnKey, arms, result, tables.Count, leftOut, withoutStratum);
     }
 
-    public static string MethodName(string test) => test switch
+    public static string MethodName(GeneralizedCmhStatistic test) => test switch
     {
-        "correlation" => GeneralizedCochranMantelHaenszel.CorrelationName,
-        "general-association" => GeneralizedCochranMantelHaenszel.GeneralAssociationName,
+        GeneralizedCmhStatistic.Correlation => GeneralizedCochranMantelHaenszel.CorrelationName,
+        GeneralizedCmhStatistic.GeneralAssociation => GeneralizedCochranMantelHaenszel.GeneralAssociationName,
         _ => GeneralizedCochranMantelHaenszel.RowMeanScoresName,
     };
 
     /// <summary>The degrees of freedom of the statistic when the covariance matrix has full rank.</summary>
-    public static int NominalDf(string test, int arms, int categories) => test switch
+    public static int NominalDf(GeneralizedCmhStatistic test, int arms, int categories) => test switch
     {
-        "correlation" => 1,
-        "general-association" => (arms - 1) * (categories - 1),
+        GeneralizedCmhStatistic.Correlation => 1,
+        GeneralizedCmhStatistic.GeneralAssociation => (arms - 1) * (categories - 1),
         _ => arms - 1,
     };
 }

@@ -43,7 +43,7 @@ internal sealed class VisitResponses
         }
         var visitVariable = dataset.Find("AVISIT") ?? throw new SpecException(source.Problem("/endpoint/dataset",
             $"{file} has no AVISIT variable, which this kind groups the responses by"));
-        var value = dataset.Find(settings.Variable) ?? throw new SpecException(source.Problem("/categoricalByVisit/variable",
+        var value = dataset.Find(settings.Variable) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, "/categoricalByVisit/variable",
             $"{file} has no variable {settings.Variable}{NearestName.Hint(settings.Variable, dataset.VariableNames)}"));
         var tests = new List<Func<int, bool>>();
         if (endpoint.Parameter is not null)
@@ -53,7 +53,7 @@ internal sealed class VisitResponses
             var codes = paramcd.DistinctValues();
             if (!codes.Contains(endpoint.Parameter, StringComparer.Ordinal))
             {
-                throw new SpecException(source.Problem("/endpoint/parameter",
+                throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, "/endpoint/parameter",
                     $"no record of {file} has PARAMCD '{endpoint.Parameter}'{NearestName.Hint(endpoint.Parameter, codes.ToList())}"));
             }
             tests.Add(row => string.Equals(paramcd.GetText(row), endpoint.Parameter, StringComparison.Ordinal));
@@ -137,7 +137,7 @@ internal sealed class VisitResponses
         }
         if (present.Count == 0)
         {
-            throw new SpecException(source.Problem("/endpoint", $"the endpoint selects no record of {file} with an AVISIT value"));
+            throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, "/endpoint", $"the endpoint selects no record of {file} with an AVISIT value"));
         }
         var order = dataset.Find("AVISITN") ?? throw new SpecException(source.Problem("/categoricalByVisit",
             $"{file} has no AVISITN to order the visits by; list them under \"visits\""));

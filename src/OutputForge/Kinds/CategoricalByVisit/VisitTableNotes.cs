@@ -54,15 +54,15 @@ internal static class VisitTableNotes
         var name = VisitComparison.MethodName(settings.Test);
         var scoreText = settings.Scores switch
         {
-            "equal-spacing" => $"equally spaced column scores 1 to {categories.Count} in the order listed",
-            "modified-ridit" => "modified ridit column scores (standardized midranks) computed within each stratum",
+            ColumnScores.EqualSpacing => $"equally spaced column scores 1 to {categories.Count} in the order listed",
+            ColumnScores.ModifiedRidit => "modified ridit column scores (standardized midranks) computed within each stratum",
             _ => "table scores (column scores " + string.Join(", ", scores.Select(s => s.ToString("0.###", CultureInfo.InvariantCulture))) + " for the categories in the order listed)",
         };
-        if (settings.Test == "general-association")
+        if (settings.Test == GeneralizedCmhStatistic.GeneralAssociation)
         {
             scoreText = "the categories taken as nominal (no scores)";
         }
-        var rowScores = settings.Test == "correlation" ? $"; row scores 1 to {arms} for the arms in column order" : string.Empty;
+        var rowScores = settings.Test == GeneralizedCmhStatistic.Correlation ? $"; row scores 1 to {arms} for the arms in column order" : string.Empty;
         var compared = allArms
             ? $"one test over all {selection.Arms.Count} arms"
             : $"each active arm with {selection.Control.Label}, those two arms only";

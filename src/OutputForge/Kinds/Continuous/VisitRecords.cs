@@ -36,7 +36,7 @@ internal sealed class VisitRecords
         {
             if (!known.Contains(settings.Visits[i], StringComparer.Ordinal))
             {
-                throw new SpecException(table.Source.Problem($"/continuous/visits/{i}",
+                throw new SpecException(table.Source.Problem(SpecProblemCode.UnknownDataValue, $"/continuous/visits/{i}",
                     $"no record of {file} has AVISIT '{settings.Visits[i]}'{NearestName.Hint(settings.Visits[i], known.ToList())}"));
             }
         }
@@ -48,7 +48,7 @@ internal sealed class VisitRecords
             var codes = paramcd.DistinctValues();
             if (!codes.Contains(endpoint.Parameter, StringComparer.Ordinal))
             {
-                throw new SpecException(table.Source.Problem("/endpoint/parameter",
+                throw new SpecException(table.Source.Problem(SpecProblemCode.UnknownDataValue, "/endpoint/parameter",
                     $"no record of {file} has PARAMCD '{endpoint.Parameter}'{NearestName.Hint(endpoint.Parameter, codes.ToList())}"));
             }
             // The records of the parameter come from the column's shared index rather than a scan of the dataset.

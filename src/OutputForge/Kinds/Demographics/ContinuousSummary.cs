@@ -31,7 +31,7 @@ public static class ContinuousSummary
             dataDecimals = StatisticDecimals.DetectionCap;
         }
         // Hyndman and Fan (1996) definition 2, the usual one in clinical summaries (common practice); 7 is R's.
-        var quantiles = settings.Quartiles == "hyndman-fan-7" ? QuantileDefinition.R7 : QuantileDefinition.R2;
+        var quantiles = settings.Quartiles;
         var geometricMean = layouts.Any(l => l.Statistics.Contains(GeometricMean));
         var summaries = columns.ToDictionary(c => c.Key, c => Summarize(
             subjects.Where(s => c.Holds(s.Arm) && !double.IsNaN(column.GetNumber(s.Row))).Select(s => column.GetNumber(s.Row)).ToList(),

@@ -46,7 +46,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
         var subjects = SubjectRows.Of(adsl, selection);
         var columns = SummaryColumns.For(selection, study, settings.Total);
         var resultColumns = SummaryColumns.ToResultColumns(columns);
-        var tested = settings.Variables.Any(v => v.Test != "none");
+        var tested = settings.Variables.Any(v => v.Test != SummaryTest.None);
         if (tested)
         {
             resultColumns.Add(new ResultColumn(PValueColumn, "p-value [a]", null));
@@ -63,13 +63,13 @@ public sealed class DemographicsAnalysis : ITableAnalysis
             {
                 throw new SpecException(table.Source.Problem(pointer + "/variable", $"{spec.Variable} is summarized twice in this table"));
             }
-            var column = adsl.Find(spec.Variable) ?? throw new SpecException(table.Source.Problem(pointer + "/variable",
+            var column = adsl.Find(spec.Variable) ?? throw new SpecException(table.Source.Problem(SpecProblemCode.UnknownVariable, pointer + "/variable",
                 $"ADSL has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.VariableNames)}"));
             // The spec's label first; else the variable's label as the file gives it (XPT, Dataset-JSON); else its name.
             var label = spec.Label ?? column.Label ?? spec.Variable;
             List<ResultRow> blockRows;
             TestResult? test = null;
-            if (spec.Type == "continuous")
+            if (spec.Type == DemographicVariableType.Continuous)
             {
                 if (column.Kind != Expressions.VariableKind.Number)
                 {
@@ -80,7 +80,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                     selection.Arms, columns, table.Source, pointer);
                 blockRows = continuousRows;
                 warnings.AddRange(continuousWarnings.Select(w => $"{label}: {w}"));
-                if (spec.Test == "anova")
+                if (spec.Test == SummaryTest.Anova)
                 {
                     test = AnovaTest(armValues);
                     warnings.AddRange(test.Notes.Select(n => $"{label}: {n}"));
@@ -96,7 +96,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 var block = CategoricalSummary.Summarize(request, adsl, subjects, selection.Arms, columns, settings.Percent, table.Source, 1);
                 blockRows = block.Rows.ToList();
                 warnings.AddRange(block.Warnings.Select(w => $"{label}: {w}"));
-                if (spec.Test != "none")
+                if (spec.Test != SummaryTest.None)
                 {
                     (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label);
                     warnings.AddRange(testWarnings);

@@ -1,4 +1,7 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 using OutputForge.Spec;
+using QuantileDefinition = MathNet.Numerics.Statistics.QuantileDefinition;
 
 namespace OutputForge.Kinds.Demographics;
 
@@ -16,22 +19,21 @@ public sealed class DemographicsSettings
 
     public PercentDisplaySpec Percent { get; init; } = new();
 
-    /// <summary>"hyndman-fan-2" (Hyndman and Fan 1996 definition 2) or "hyndman-fan-7" (definition 7, R's default).</summary>
-    public string Quartiles { get; init; } = "hyndman-fan-2";
+    /// <summary>Hyndman and Fan (1996) definition 2 (the default) or definition 7.</summary>
+    public QuantileDefinition Quartiles { get; init; } = MethodCatalog.Quartiles.DefaultValue;
 
     /// <summary>Default decimals of each statistic for every continuous variable (overriding the data-precision rule).</summary>
     public StatisticDecimalsSpec? Decimals { get; init; }
 
     /// <summary>p-values below this are shown as "&lt;threshold".</summary>
-    public double PValueFloor { get; init; } = 0.001;
+    public double PValueFloor { get; init; } = MethodCatalog.PValueFloor.Default;
 }
 
 public sealed class DemographicVariableSpec
 {
     public required string Variable { get; init; }
 
-    /// <summary>"continuous" or "categorical".</summary>
-    public required string Type { get; init; }
+    public required DemographicVariableType Type { get; init; }
 
     /// <summary>Label of the block's heading row; the variable name when absent.</summary>
     public string? Label { get; init; }
@@ -51,14 +53,14 @@ public sealed class DemographicVariableSpec
     /// <summary>Categorical: a numeric ADSL variable giving the levels' order (e.g. AGEGR1N).</summary>
     public string? OrderBy { get; init; }
 
-    /// <summary>Categorical: "alphabetical" or "frequency" (descending), when neither levels nor orderBy is given.</summary>
-    public string Order { get; init; } = "alphabetical";
+    /// <summary>Categorical: alphabetical or by frequency (descending), when neither levels nor orderBy is given.</summary>
+    public LevelSorting Order { get; init; } = MethodCatalog.LevelSorting.DefaultValue;
 
     /// <summary>Whether to add a "Missing" row (categorical) or to show n of missing values (continuous).</summary>
     public bool Missing { get; init; }
 
-    /// <summary>"none", "anova" (continuous), "chi-square", "likelihood-ratio" or "fisher" (categorical).</summary>
-    public string Test { get; init; } = "none";
+    /// <summary>None, ANOVA (continuous), chi-square, likelihood-ratio or Fisher (categorical).</summary>
+    public SummaryTest Test { get; init; } = MethodCatalog.SummaryTest.DefaultValue;
 }
 
 /// <summary>Decimals of single descriptive statistics.</summary>
@@ -71,6 +73,6 @@ public sealed class StatisticDecimalsSpec
     public int? Q3 { get; init; }
     public int? Min { get; init; }
     public int? Max { get; init; }
-    public int? Geomean { get; init; }
+    public int? GeometricMean { get; init; }
     public int? Cv { get; init; }
 }

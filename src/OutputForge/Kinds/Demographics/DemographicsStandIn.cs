@@ -20,7 +20,7 @@ public sealed class DemographicsStandIn : IShellStandIn
         var assumed = new List<string>();
         foreach (var (variable, i) in settings.Variables.Select((v, i) => (v, i)))
         {
-            if (variable.Type == "continuous")
+            if (variable.Type == DemographicVariableType.Continuous)
             {
                 var decimals = variable.DataDecimals ?? DefaultDataDecimals;
                 if (variable.DataDecimals is null && ShownAtDataPrecision(variable, settings, records.Table.Source, $"/demographics/variables/{i}"))

@@ -47,7 +47,7 @@ public static class StatisticDecimals
             StatisticNames.ThirdQuartile => Pick(s => s.Q3) ?? dataDecimals + 1,
             StatisticNames.Minimum => Pick(s => s.Min) ?? dataDecimals,
             StatisticNames.Maximum => Pick(s => s.Max) ?? dataDecimals,
-            StatisticNames.GeometricMean => Pick(s => s.Geomean) ?? dataDecimals + 1,
+            StatisticNames.GeometricMean => Pick(s => s.GeometricMean) ?? dataDecimals + 1,
             StatisticNames.CoefficientOfVariation => Pick(s => s.Cv) ?? 1,
             _ => 0,
         };

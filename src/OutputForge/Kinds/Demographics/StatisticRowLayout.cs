@@ -23,11 +23,15 @@ public sealed partial record StatisticRowLayout(string Text, string Pattern, str
         ["q3"] = (StatisticNames.ThirdQuartile, "Q3"),
         ["min"] = (StatisticNames.Minimum, "Min"),
         ["max"] = (StatisticNames.Maximum, "Max"),
-        ["geomean"] = (StatisticNames.GeometricMean, "Geometric mean"),
+        ["geometric-mean"] = (StatisticNames.GeometricMean, "Geometric mean"),
         ["cv"] = (StatisticNames.CoefficientOfVariation, "CV%"),
     };
 
-    [GeneratedRegex(@"[A-Za-z][A-Za-z0-9]*")]
+    /// <summary>"geomean" is one statistics program's function name; the row statistic is called "geometric-mean".</summary>
+    private static readonly IReadOnlyList<Analysis.Choices.RetiredName> Retired = [new("geomean", "geometric-mean")];
+
+    // A statistic's name is a word; "geometric-mean" is the one hyphenated name, matched whole before the separators.
+    [GeneratedRegex(@"(?i:geometric-mean)|[A-Za-z][A-Za-z0-9]*")]
     private static partial Regex Word();
 
     public static StatisticRowLayout Parse(string text, SpecSource source, string pointer)
@@ -37,8 +41,10 @@ public sealed partial record StatisticRowLayout(string Text, string Pattern, str
         {
             if (!Known.TryGetValue(word.Value, out var known))
             {
-                throw new SpecException(source.Problem(pointer,
-                    $"unknown statistic '{word.Value}' in row \"{text}\" (known: {string.Join(", ", Known.Keys)})"));
+                var retired = Retired.FirstOrDefault(r => string.Equals(r.Old, word.Value, StringComparison.OrdinalIgnoreCase));
+                throw new SpecException(source.Problem(pointer, retired is not null
+                    ? $"the statistic '{word.Value}' in row \"{text}\" is now called '{retired.New}'"
+                    : $"unknown statistic '{word.Value}' in row \"{text}\" (known: {string.Join(", ", Known.Keys)})"));
             }
             if (statistics.Contains(known.Name))
             {

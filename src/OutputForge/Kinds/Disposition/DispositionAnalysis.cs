@@ -37,7 +37,7 @@ public sealed class DispositionAnalysis : ITableAnalysis
         var subjects = SubjectRows.Of(adsl, selection);
         var columns = SummaryColumns.For(selection, study, settings.Total);
         var resultColumns = SummaryColumns.ToResultColumns(columns);
-        var tested = settings.Blocks.Any(b => b.Test != "none");
+        var tested = settings.Blocks.Any(b => b.Test != SummaryTest.None);
         if (tested)
         {
             resultColumns.Add(new ResultColumn(PValueColumn, "p-value [a]", null));
@@ -58,7 +58,7 @@ public sealed class DispositionAnalysis : ITableAnalysis
             var block = CategoricalSummary.Summarize(request, adsl, subjects, selection.Arms, columns, settings.Percent, table.Source, 1);
             warnings.AddRange(block.Warnings.Select(w => $"{spec.Label}: {w}"));
             var headingCells = new List<ResultCell>();
-            if (spec.Test != "none")
+            if (spec.Test != SummaryTest.None)
             {
                 var (test, testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, spec.Label);
                 warnings.AddRange(testWarnings);

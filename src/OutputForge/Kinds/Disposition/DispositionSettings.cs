@@ -1,3 +1,5 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 using OutputForge.Spec;
 
 namespace OutputForge.Kinds.Disposition;
@@ -17,7 +19,7 @@ public sealed class DispositionSettings
     public PercentDisplaySpec Percent { get; init; } = new();
 
     /// <summary>p-values below this are shown as "&lt;threshold".</summary>
-    public double PValueFloor { get; init; } = 0.001;
+    public double PValueFloor { get; init; } = MethodCatalog.PValueFloor.Default;
 }
 
 public sealed class DispositionBlockSpec
@@ -40,12 +42,12 @@ public sealed class DispositionBlockSpec
     /// <summary>A numeric ADSL variable giving the levels' order (e.g. DCSREASN).</summary>
     public string? OrderBy { get; init; }
 
-    /// <summary>"alphabetical" or "frequency" (descending), when neither levels nor orderBy is given.</summary>
-    public string Order { get; init; } = "alphabetical";
+    /// <summary>Alphabetical or by frequency (descending), when neither levels nor orderBy is given.</summary>
+    public LevelSorting Order { get; init; } = MethodCatalog.LevelSorting.DefaultValue;
 
     /// <summary>Whether to add a row counting subjects with no value.</summary>
     public bool Missing { get; init; }
 
-    /// <summary>"none", "chi-square", "likelihood-ratio" or "fisher": test of the block's levels x arms table.</summary>
-    public string Test { get; init; } = "none";
+    /// <summary>None, chi-square, likelihood-ratio or Fisher: test of the block's levels x arms table.</summary>
+    public SummaryTest Test { get; init; } = MethodCatalog.CategoricalTest.DefaultValue;
 }

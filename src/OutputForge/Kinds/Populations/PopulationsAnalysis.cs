@@ -43,7 +43,7 @@ public sealed class PopulationsAnalysis : ITableAnalysis
             {
                 if (!study.Populations.TryGetValue(name, out var population))
                 {
-                    throw new SpecException(table.Source.Problem(pointer + "/population",
+                    throw new SpecException(table.Source.Problem(SpecProblemCode.UnknownReference, pointer + "/population",
                         $"unknown population '{name}'{Naming.NearestName.Hint(name, study.Populations.Keys.ToList())}"));
                 }
                 (key, label, where, whereSource, wherePointer) = (name, spec.Label ?? population.Label, population.Where, study.Source, $"/populations/{name}/where");

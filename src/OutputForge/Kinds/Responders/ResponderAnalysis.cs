@@ -21,7 +21,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
             .AddCondition(endpoint.Dataset, endpoint.Response)
             .Add(VariableReads.SubjectLevel, table.Settings<ResponderSettings>().Stratified?.Strata ?? []);
         // Observed cases count the records the dataset derived, where it marks them.
-        return endpoint.Missing == "observed" ? reads.AddOptional(endpoint.Dataset, ObservedCases.DerivationVariable) : reads;
+        return endpoint.Missing == MissingResponse.Observed ? reads.AddOptional(endpoint.Dataset, ObservedCases.DerivationVariable) : reads;
     }
 
     public TableResult Analyze(StudySpec study, TableSpec table, StudyData data)
@@ -31,8 +31,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         var selection = PopulationSelection.Select(study, table, data);
         var records = EndpointRecords.Select(table, data);
         var response = records.CompileResponse(table);
-        var missingAreNonResponders = endpoint.Missing == "non-responder";
-        var observedCases = endpoint.Missing == "observed";
+        var missingAreNonResponders = endpoint.Missing == MissingResponse.NonResponder;
+        var observedCases = endpoint.Missing == MissingResponse.Observed;
 
         var counts = selection.Arms.ToDictionary(a => a, a => Count(selection.ArmOfSubject, a, records, response, missingAreNonResponders));
         var columns = selection.Arms.Select(a => new ResultColumn(a.Key, a.Label, selection.Count(a))).ToList();
@@ -44,8 +44,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
             columnCounts.Add((ResultKeys.Total, total));
         }
 
-        var proportionMethod = MethodCatalog.ProportionMethod(statistics.ProportionInterval);
-        var differenceMethod = MethodCatalog.DifferenceMethod(statistics.DifferenceInterval);
+        var proportionMethod = statistics.ProportionInterval;
+        var differenceMethod = statistics.DifferenceInterval;
         var level = MethodCatalog.LevelText(statistics.Level);
         var decimals = statistics.PercentDecimals;
         var control = selection.Control;
@@ -110,8 +110,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         notes.AddRange(extra?.Notes ?? []);
         notes.Add(endpoint.Missing switch
         {
-            "non-responder" => $"N = number of subjects in the {selection.Label}; percentages are of N. Subjects with no assessment are counted as non-responders.",
-            "observed" => ObservedCases.Note(selection.Label, endpoint.Dataset),
+            MissingResponse.NonResponder => $"N = number of subjects in the {selection.Label}; percentages are of N. Subjects with no assessment are counted as non-responders.",
+            MissingResponse.Observed => ObservedCases.Note(selection.Label, endpoint.Dataset),
             _ => $"N = number of subjects in the {selection.Label}; percentages are of the subjects evaluated. Subjects with no assessment are excluded.",
         });
         var warnings = new List<string>(selection.Warnings);
@@ -134,8 +134,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         }
         var control = selection.Control;
         var actives = selection.Arms.Where(a => !a.IsControl).ToList();
-        var withRelativeRisk = settings.Ratios.Contains("relative-risk");
-        OddsRatioIntervalMethod? oddsMethod = settings.Ratios.Contains("odds-ratio") ? OddsRatioIntervalMethods.Parse(settings.OddsRatioInterval) : null;
+        var withRelativeRisk = settings.Ratios.Contains(RatioMeasure.RelativeRisk);
+        OddsRatioIntervalMethod? oddsMethod = settings.Ratios.Contains(RatioMeasure.OddsRatio) ? settings.OddsRatioInterval : null;
         ResponderStrata? strata = null;
         var stratified = new List<StratifiedComparison>();
         var population = new Dictionary<string, int>(StringComparer.Ordinal);
@@ -210,9 +210,9 @@ public sealed class ResponderAnalysis : ITableAnalysis
                 ? cell(comparison)
                 : CellFactory.Empty(column.Key)).ToList());
 
-    private static string TestNote(IReadOnlyList<ResponderComparison> comparisons, string choice, TreatmentArm control)
+    private static string TestNote(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
     {
-        if (choice != "auto")
+        if (choice != TableTest.Auto)
         {
             return $"Two-sided p-value from {NamedTest(choice)}, unstratified.";
         }
@@ -223,18 +223,18 @@ public sealed class ResponderAnalysis : ITableAnalysis
         return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
     }
 
-    private static string NamedTest(string choice) => choice switch
+    private static string NamedTest(TableTest choice) => choice switch
     {
-        "fisher" => "Fisher's exact test",
-        "yates" => "Pearson's chi-square test with Yates' continuity correction",
-        "likelihood-ratio" => "the likelihood-ratio chi-square test",
+        TableTest.Fisher => "Fisher's exact test",
+        TableTest.Yates => "Pearson's chi-square test with Yates' continuity correction",
+        TableTest.LikelihoodRatio => "the likelihood-ratio chi-square test",
         _ => "Pearson's chi-square test",
     };
 
-    private static IEnumerable<string> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, string choice, TreatmentArm control)
+    private static IEnumerable<string> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
     {
         // Every large-sample test the spec forces gets Cochran's caution; "auto" switches to Fisher instead.
-        if (choice is "auto" or "fisher")
+        if (choice is TableTest.Auto or TableTest.Fisher)
         {
             yield break;
         }

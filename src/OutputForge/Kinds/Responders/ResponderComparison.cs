@@ -13,12 +13,9 @@ public sealed record ResponderComparison(
     TestResult Test,
     ExpectedCountDiagnostics Expected)
 {
-    /// <summary>
-    /// "auto" follows Cochran's rule (common practice): Pearson's chi-square unless an expected
-    /// count is below 5, then Fisher's exact test.
-    /// </summary>
+    /// <summary>The test as <see cref="TableTests"/> runs the spec's choice (auto: Cochran's rule).</summary>
     public static ResponderComparison Compute(TreatmentArm arm, ResponderCounts active, ResponderCounts control,
-        DifferenceCiMethod method, double level, string testChoice)
+        DifferenceCiMethod method, double level, TableTest testChoice)
     {
         var difference = ProportionDifferenceInterval.Compute(
             active.Responders, active.Denominator, control.Responders, control.Denominator, method, level);
@@ -28,14 +25,7 @@ public sealed record ResponderComparison(
             { control.Responders, control.NonResponders },
         };
         var expected = ContingencyTable.Diagnose(table);
-        var test = testChoice switch
-        {
-            "fisher" => FisherExactTest.Compute(table),
-            "chi-square" => PearsonChiSquareTest.Compute(table),
-            "yates" => YatesChiSquareTest.Compute(table),
-            "likelihood-ratio" => LikelihoodRatioChiSquareTest.Compute(table),
-            _ => expected.CellsBelowFive > 0 ? FisherExactTest.Compute(table) : PearsonChiSquareTest.Compute(table),
-        };
+        var test = TableTests.Compute(table, testChoice);
         return new ResponderComparison(arm, difference, test, expected);
     }
 }

@@ -1,3 +1,5 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 namespace OutputForge.Kinds.Responders;
 
 /// <summary>
@@ -9,14 +11,14 @@ public sealed class ResponderSettings
     /// <summary>The stratified analysis; none when absent.</summary>
     public ResponderStratification? Stratified { get; init; }
 
-    /// <summary>Ratio rows: "relative-risk", "odds-ratio".</summary>
-    public List<string> Ratios { get; init; } = [];
+    /// <summary>Ratio rows: relative risk, odds ratio.</summary>
+    public List<RatioMeasure> Ratios { get; init; } = [];
 
     /// <summary>
-    /// Interval of the odds ratio: "woolf" is the large-sample log interval (Woolf unstratified; the
+    /// Interval of the odds ratio: Woolf is the large-sample log interval (Woolf unstratified; the
     /// Robins-Breslow-Greenland interval of the Mantel-Haenszel odds ratio when stratified).
     /// </summary>
-    public string OddsRatioInterval { get; init; } = "woolf";
+    public OddsRatioIntervalMethod OddsRatioInterval { get; init; } = MethodCatalog.OddsRatioInterval.DefaultValue;
 
     /// <summary>Decimals of the ratios and their intervals.</summary>
     public int RatioDecimals { get; init; } = 2;
@@ -28,11 +30,11 @@ public sealed class ResponderStratification
     /// <summary>ADSL variables whose combined values define the strata, e.g. the randomization factors.</summary>
     public List<string> Strata { get; init; } = [];
 
-    /// <summary>"mantel-haenszel" (Sato variance) or "miettinen-nurminen" (stratified score interval).</summary>
-    public string Difference { get; init; } = "mantel-haenszel";
+    /// <summary>Mantel-Haenszel (Sato variance) or Miettinen-Nurminen (stratified score interval).</summary>
+    public StratifiedDifference Difference { get; init; } = MethodCatalog.StratifiedDifference.DefaultValue;
 
-    /// <summary>"cmh" or "cmh-corrected" (with continuity correction).</summary>
-    public string Test { get; init; } = "cmh";
+    /// <summary>CMH, without or with continuity correction.</summary>
+    public StratifiedTest Test { get; init; } = MethodCatalog.StratifiedTest.DefaultValue;
 
     /// <summary>Adds the Breslow-Day test (Tarone's correction) of equal odds ratios across strata.</summary>
     public bool Homogeneity { get; init; }

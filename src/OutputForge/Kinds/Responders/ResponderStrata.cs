@@ -43,7 +43,7 @@ public sealed class ResponderStrata
     {
         var adsl = data.SubjectLevel;
         var names = adsl.VariableNames;
-        var columns = spec.Strata.Select((name, i) => adsl.Find(name) ?? throw new SpecException(source.Problem($"/responders/stratified/strata/{i}",
+        var columns = spec.Strata.Select((name, i) => adsl.Find(name) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, $"/responders/stratified/strata/{i}",
             $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}, which this key stratifies by{NearestName.Hint(name, names)}"))).ToList();
         var subjects = adsl.Get(AdamConformance.SubjectVariable);
         var stratumOfSubject = new Dictionary<string, string>(StringComparer.Ordinal);

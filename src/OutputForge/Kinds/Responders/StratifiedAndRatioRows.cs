@@ -32,7 +32,7 @@ public sealed class StratifiedAndRatioRows
             result._rows.Add(new ResultRow("stratified", $"Stratified by {string.Join(" and ", strata.Variables)}", 1,
                 columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
             var spec = settings.Stratified!;
-            var mn = spec.Difference == "miettinen-nurminen";
+            var mn = spec.Difference == StratifiedDifference.MiettinenNurminen;
             var differenceMethod = mn ? StratifiedMiettinenNurminen.MethodName : "Mantel-Haenszel, Sato variance";
             var d = letters.Next();
             result._rows.Add(Row("stratified-difference", $"Difference in proportions, % {d}", indent, columns, stratified,
@@ -44,7 +44,7 @@ public sealed class StratifiedAndRatioRows
                 : $"{d} Mantel-Haenszel common difference (arm minus {control.Label}), weights n1 n2 / (n1 + n2); {levelText} CI from Sato's variance (Sato 1989).");
             var e = letters.Next();
             result._rows.Add(Row("cmh-p-value", $"CMH p-value {e}", indent, columns, stratified, c => WithStrata(CellFactory.PValueOf(c.Arm.Key, c.Test), c.StrataUsed)));
-            result._notes.Add($"{e} Two-sided p-value of the Cochran-Mantel-Haenszel test{(spec.Test == "cmh-corrected" ? " with continuity correction" : "")}, each arm against {control.Label}.");
+            result._notes.Add($"{e} Two-sided p-value of the Cochran-Mantel-Haenszel test{(spec.Test == StratifiedTest.CmhCorrected ? " with continuity correction" : "")}, each arm against {control.Label}.");
             if (spec.Homogeneity)
             {
                 var f = letters.Next();
@@ -52,9 +52,9 @@ public sealed class StratifiedAndRatioRows
                 result._notes.Add($"{f} Breslow-Day test (Tarone's correction) of equal odds ratios; strata where all or none responded are left out.");
             }
         }
-        var oddsMethod = OddsRatioIntervalMethods.Parse(settings.OddsRatioInterval);
+        var oddsMethod = settings.OddsRatioInterval;
         var ratioDecimals = settings.RatioDecimals;
-        if (settings.Ratios.Contains("relative-risk"))
+        if (settings.Ratios.Contains(RatioMeasure.RelativeRisk))
         {
             var g = letters.Next();
             var method = strata is null ? "Katz log" : "Mantel-Haenszel, Greenland-Robins";
@@ -64,7 +64,7 @@ public sealed class StratifiedAndRatioRows
                 ? $"{g} Relative risk of response (each arm / {control.Label}), log (Katz) {levelText} CI."
                 : $"{g} Mantel-Haenszel relative risk of response (each arm / {control.Label}), {levelText} CI from the Greenland-Robins variance.");
         }
-        if (settings.Ratios.Contains("odds-ratio"))
+        if (settings.Ratios.Contains(RatioMeasure.OddsRatio))
         {
             var h = letters.Next();
             var describe = OddsRatioIntervalMethods.Describe(oddsMethod, strata is not null);

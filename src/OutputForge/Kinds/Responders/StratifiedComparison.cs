@@ -63,10 +63,10 @@ public sealed partial record StratifiedComparison(
             used.Add(new StratumCounts(active.Count(s => s.Responded), active.Count, reference.Count(s => s.Responded), reference.Count));
             usedNames.Add(stratum);
         }
-        var difference = spec.Difference == "miettinen-nurminen"
+        var difference = spec.Difference == StratifiedDifference.MiettinenNurminen
             ? StratifiedMiettinenNurminen.Compute(used, level)
             : MantelHaenszelRiskDifference.Compute(used, level);
-        var test = CochranMantelHaenszelTest.Compute(used, spec.Test == "cmh-corrected");
+        var test = CochranMantelHaenszelTest.Compute(used, spec.Test == StratifiedTest.CmhCorrected);
         var homogeneity = spec.Homogeneity ? BreslowDayTest.Compute(used) : null;
         var relativeRisk = withRelativeRisk ? MantelHaenszelRelativeRisk.Compute(used, level) : null;
         var oddsRatio = oddsRatioMethod switch

@@ -42,7 +42,7 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         var selection = PopulationSelection.Select(study, table, data);
         var records = EndpointRecords.Select(table, data);
         var response = records.CompileResponse(table);
-        var missingAreNonResponders = endpoint.Missing == "non-responder";
+        var missingAreNonResponders = endpoint.Missing == MissingResponse.NonResponder;
         var measure = SubgroupMeasure.From(settings.Measure, statistics.DifferenceInterval, statistics.Level, statistics.PercentDecimals, settings.RatioDecimals);
         var level = MethodCatalog.LevelText(statistics.Level);
         var control = selection.Control;
@@ -141,7 +141,7 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         return measure.Compute(active, control);
     }
 
-    private static ResultRow InteractionRow(SubgroupVariable variable, string variableKey, string method, PopulationSelection selection,
+    private static ResultRow InteractionRow(SubgroupVariable variable, string variableKey, InteractionTest method, PopulationSelection selection,
         EndpointRecords records, Expressions.Condition response, bool missingAreNonResponders, IReadOnlyList<ResultColumn> columns,
         IReadOnlyList<TreatmentArm> active, TreatmentArm control, List<string> warnings)
     {
@@ -168,10 +168,10 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         return new ResultRow(variableKey + "-interaction", "Interaction p [b]", 1, cells);
     }
 
-    private static string InteractionNote(string method, TreatmentArm control) => method switch
+    private static string InteractionNote(InteractionTest method, TreatmentArm control) => method switch
     {
-        "breslow-day" => $"Breslow-Day test of homogeneity of the odds ratios (arm vs {control.Label}) across the levels of the subgroup variable.",
-        "breslow-day-tarone" => $"Breslow-Day test with Tarone's correction of homogeneity of the odds ratios (arm vs {control.Label}) across the levels of the subgroup variable.",
+        InteractionTest.BreslowDay => $"Breslow-Day test of homogeneity of the odds ratios (arm vs {control.Label}) across the levels of the subgroup variable.",
+        InteractionTest.BreslowDayTarone => $"Breslow-Day test with Tarone's correction of homogeneity of the odds ratios (arm vs {control.Label}) across the levels of the subgroup variable.",
         _ => $"Treatment-by-subgroup interaction: likelihood-ratio test of logistic regression models response ~ arm + subgroup + arm:subgroup vs response ~ arm + subgroup, fitted to the subjects of the arm and {control.Label}; no p-value under separation or non-convergence (reason under Warning).",
     };
 

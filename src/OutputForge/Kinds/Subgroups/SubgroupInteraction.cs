@@ -15,7 +15,7 @@ namespace OutputForge.Kinds.Subgroups;
 /// </summary>
 internal static class SubgroupInteraction
 {
-    public static TestResult Compute(string method, IReadOnlyList<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)> cells,
+    public static TestResult Compute(InteractionTest method, IReadOnlyList<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)> cells,
         List<string> notes)
     {
         var used = new List<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)>();
@@ -28,16 +28,16 @@ internal static class SubgroupInteraction
             }
             used.Add(cell);
         }
-        var name = method == "likelihood-ratio" ? LogisticLikelihoodRatioTest.MethodName
-            : method == "breslow-day" ? BreslowDayTest.MethodName : BreslowDayTest.TaroneMethodName;
+        var name = method == InteractionTest.LikelihoodRatio ? LogisticLikelihoodRatioTest.MethodName
+            : method == InteractionTest.BreslowDay ? BreslowDayTest.MethodName : BreslowDayTest.TaroneMethodName;
         if (used.Count < 2)
         {
             return TestResult.NotEstimable(name, "fewer than two levels have subjects in both arms");
         }
-        if (method != "likelihood-ratio")
+        if (method != InteractionTest.LikelihoodRatio)
         {
             var strata = used.Select(c => new StratumCounts(c.Active.Responders, c.Active.Denominator, c.Control.Responders, c.Control.Denominator)).ToList();
-            var test = BreslowDayTest.Compute(strata, taroneCorrection: method == "breslow-day-tarone");
+            var test = BreslowDayTest.Compute(strata, taroneCorrection: method == InteractionTest.BreslowDayTarone);
             // The test numbers strata 1..K in the order given; say which levels they are.
             notes.AddRange(test.Notes.Select(n => RenameStrata(n, used)));
             return test;

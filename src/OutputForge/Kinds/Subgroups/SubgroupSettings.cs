@@ -1,3 +1,5 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 using OutputForge.Spec;
 
 namespace OutputForge.Kinds.Subgroups;
@@ -12,11 +14,11 @@ public sealed class SubgroupSettings
     /// <summary>The ADSL variables that define the subgroups, in print order.</summary>
     public required List<SubgroupVariableSpec> Variables { get; init; }
 
-    /// <summary>"difference" (in proportions, interval from statistics.differenceInterval), "odds-ratio" (Woolf) or "relative-risk" (Katz).</summary>
-    public string Measure { get; init; } = "difference";
+    /// <summary>Difference (in proportions, interval from statistics.differenceInterval), odds ratio (Woolf) or relative risk (Katz).</summary>
+    public EffectMeasure Measure { get; init; } = MethodCatalog.EffectMeasure.DefaultValue;
 
-    /// <summary>"likelihood-ratio" (logistic regression), "breslow-day" or "breslow-day-tarone".</summary>
-    public string Interaction { get; init; } = "likelihood-ratio";
+    /// <summary>Likelihood-ratio (logistic regression), Breslow-Day, or Breslow-Day with Tarone's correction.</summary>
+    public InteractionTest Interaction { get; init; } = MethodCatalog.InteractionTest.DefaultValue;
 
     /// <summary>An effect is not estimated in a level where an arm compared has fewer subjects than this in the denominator.</summary>
     public int MinimumPerArm { get; init; } = 5;

@@ -29,7 +29,7 @@ internal sealed record SubgroupVariable(
     public static SubgroupVariable Resolve(SubgroupVariableSpec spec, int index, Dataset adsl, IEnumerable<string> subjects, SpecSource source)
     {
         var pointer = $"/subgroups/variables/{index}";
-        var column = adsl.Find(spec.Variable) ?? throw new SpecException(source.Problem(pointer + "/variable",
+        var column = adsl.Find(spec.Variable) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, pointer + "/variable",
             $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.VariableNames)}"));
         var ids = adsl.Get(AdamConformance.SubjectVariable);
         var rowOfSubject = new Dictionary<string, int>(StringComparer.Ordinal);
@@ -49,7 +49,7 @@ internal sealed record SubgroupVariable(
             {
                 if (!known.Contains(listed[i].Value, StringComparer.Ordinal))
                 {
-                    throw new SpecException(source.Problem($"{pointer}/levels/{i}/value",
+                    throw new SpecException(source.Problem(SpecProblemCode.UnknownDataValue, $"{pointer}/levels/{i}/value",
                         $"'{listed[i].Value}' is not a value of {column.Name} in ADSL{NearestName.Hint(listed[i].Value, known.ToList())}"));
                 }
             }

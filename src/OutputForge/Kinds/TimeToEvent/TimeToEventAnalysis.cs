@@ -39,7 +39,7 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
         var time = RecordVariable.Find(settings.Time, dataset, data, table.Source, "/timeToEvent/time");
         var censor = RecordVariable.Find(settings.Censor, dataset, data, table.Source, "/timeToEvent/censor");
         var strata = settings.Strata.Select((s, i) => RecordVariable.Find(s, dataset, data, table.Source, $"/timeToEvent/strata/{i}")).ToList();
-        var ties = settings.Ties == "breslow" ? CoxTies.Breslow : CoxTies.Efron;
+        var ties = settings.Ties;
         var warnings = new List<string>(selection.Warnings);
 
         var subjects = new List<TimeToEventSubject>();
@@ -89,7 +89,7 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
         var level = MethodCatalog.LevelText(statistics.Level);
         var percent = statistics.PercentDecimals;
         var d = settings.Decimals;
-        var cumulative = settings.Estimate == "event";
+        var cumulative = settings.Estimate == SurvivalEstimate.Event;
 
         var rows = new List<ResultRow>
         {

@@ -1,3 +1,5 @@
+using OutputForge.Analysis;
+using OutputForge.Analysis.Choices;
 namespace OutputForge.Kinds.TimeToEvent;
 
 /// <summary>
@@ -21,14 +23,14 @@ public sealed class TimeToEventSettings
     /// <summary>Label of each estimate time, e.g. "Day 28"; "Day {time}" when absent.</summary>
     public List<string>? TimeLabels { get; init; }
 
-    /// <summary>"event-free" prints S(t); "event" prints 1 - S(t), the probability of the event by t.</summary>
-    public string Estimate { get; init; } = "event-free";
+    /// <summary>Event-free prints S(t); event prints 1 - S(t), the probability of the event by t.</summary>
+    public SurvivalEstimate Estimate { get; init; } = MethodCatalog.SurvivalEstimate.DefaultValue;
 
     /// <summary>Stratification variables (endpoint record, else ADSL) of the log-rank test and Cox model.</summary>
     public List<string> Strata { get; init; } = [];
 
-    /// <summary>"efron" (default) or "breslow".</summary>
-    public string Ties { get; init; } = "efron";
+    /// <summary>Efron (default) or Breslow.</summary>
+    public CoxTies Ties { get; init; } = MethodCatalog.CoxTies.DefaultValue;
 
     /// <summary>Decimals of the median and its interval.</summary>
     public int Decimals { get; init; } = 1;

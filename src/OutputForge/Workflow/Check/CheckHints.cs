@@ -1,6 +1,9 @@
+using OutputForge.Data;
+using OutputForge.Spec;
+
 namespace OutputForge.Workflow.Check;
 
-/// <summary>Fix hints for the problems the Spec and Data layers report, chosen by the kind of message.</summary>
+/// <summary>Fix hints for the problems the Spec and Data layers report, chosen by the problem's code, never by its wording.</summary>
 public static class CheckHints
 {
     public const string Schema = "correct the value or key as the schema says (specs/schema/*.json; docs/spec-reference.md)";
@@ -13,24 +16,25 @@ public static class CheckHints
     public const string SubjectLink = "every subject of an analysis dataset must have its ADSL row";
     public const string Flag = "ADaM flags (names ending in FL) hold Y, N or nothing; recode other values";
 
-    public static string ForSpec(string message) => message switch
+    public static string ForSpec(SpecProblem problem) => problem.Code switch
     {
-        _ when message.StartsWith("unknown key", StringComparison.Ordinal) => "remove the key or correct its spelling",
-        _ when message.StartsWith("invalid JSON", StringComparison.Ordinal) => "fix the JSON syntax at the position given",
-        _ when message.StartsWith("unknown population", StringComparison.Ordinal) || message.StartsWith("unknown dataset", StringComparison.Ordinal) => Reference,
-        _ when message.Contains("no record of", StringComparison.Ordinal) || message.Contains("is not a value of", StringComparison.Ordinal) => DataValue,
-        _ when message.Contains("the missing-value test is written", StringComparison.Ordinal) => MissingValueTest,
-        _ when message.Contains("has no variable", StringComparison.Ordinal) || message.Contains("at character", StringComparison.Ordinal) => Condition,
-        _ when message.Contains("no subjects", StringComparison.Ordinal) => "check the population's condition and the flag values in ADSL",
-        _ when message.Contains("more than one record", StringComparison.Ordinal) => "narrow the endpoint's selection (e.g. ANL01FL = 'Y')",
+        SpecProblemCode.UnknownKey => "remove the key or correct its spelling",
+        SpecProblemCode.InvalidJson => "fix the JSON syntax at the position given",
+        SpecProblemCode.RetiredName => $"write '{problem.Suggestion}' instead",
+        SpecProblemCode.UnknownReference => Reference,
+        SpecProblemCode.UnknownDataValue => DataValue,
+        SpecProblemCode.MissingValueTest => MissingValueTest,
+        SpecProblemCode.UnknownVariable or SpecProblemCode.ConditionSyntax => Condition,
+        SpecProblemCode.NoSubjects => "check the population's condition and the flag values in ADSL",
+        SpecProblemCode.DuplicateRecords => "narrow the endpoint's selection (e.g. ANL01FL = 'Y')",
         _ => Schema,
     };
 
-    public static string ForData(string message) => message switch
+    public static string ForData(DataException problem) => problem.Code switch
     {
-        _ when message.Contains("flag value", StringComparison.Ordinal) => Flag,
-        _ when message.Contains("is not in ADSL", StringComparison.Ordinal) || message.Contains("cannot be linked", StringComparison.Ordinal) => SubjectLink,
-        _ when message.Contains("ADSL", StringComparison.Ordinal) || message.Contains("USUBJID", StringComparison.Ordinal) => SubjectLevel,
+        DataProblemCode.Flag => Flag,
+        DataProblemCode.UnknownSubject or DataProblemCode.NoSubjectVariable => SubjectLink,
+        DataProblemCode.NoSubjectLevelVariable or DataProblemCode.NoSubjects or DataProblemCode.EmptySubject or DataProblemCode.RepeatedSubject => SubjectLevel,
         _ => DataFile,
     };
 }

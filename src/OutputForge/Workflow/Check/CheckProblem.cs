@@ -15,7 +15,7 @@ public sealed record CheckProblem(CheckSeverity Severity, string File, string Wh
     {
         var where = problem.Line is { } line ? (problem.Column is { } column ? $"{line}:{column}" : $"{line}") : string.Empty;
         where = where.Length == 0 ? problem.JsonPath : $"{where} {problem.JsonPath}";
-        return new CheckProblem(problem.IsWarning ? CheckSeverity.Warning : severity, problem.File, where, problem.Message, CheckHints.ForSpec(problem.Message));
+        return new CheckProblem(problem.IsWarning ? CheckSeverity.Warning : severity, problem.File, where, problem.Message, CheckHints.ForSpec(problem));
     }
 
     public static CheckProblem FromData(DataException problem, string hint, CheckSeverity severity = CheckSeverity.Error)
@@ -25,13 +25,7 @@ public sealed record CheckProblem(CheckSeverity Severity, string File, string Wh
         {
             where += (where.Length == 0 ? "" : ", ") + $"variable {problem.Variable}";
         }
-        var message = problem.Message;
-        var prefix = problem.File + (problem.Line is null ? "" : $" line {problem.Line}") + (problem.Variable is null ? "" : $", variable {problem.Variable}") + ": ";
-        if (message.StartsWith(prefix, StringComparison.Ordinal))
-        {
-            message = message[prefix.Length..];
-        }
-        return new CheckProblem(severity, problem.File, where, message, hint);
+        return new CheckProblem(severity, problem.File, where, problem.Problem, hint);
     }
 
     public override string ToString() =>

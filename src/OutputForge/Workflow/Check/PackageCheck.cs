@@ -46,13 +46,13 @@ public static class PackageCheck
         }
         foreach (var problem in AdamConformance.SubjectLevelProblems(adsl))
         {
-            report.Add(CheckProblem.FromData(problem, CheckHints.ForData(problem.Message)), Kind(problem));
+            report.Add(CheckProblem.FromData(problem, CheckHints.ForData(problem)), Kind(problem));
         }
         foreach (var dataset in datasets.Values.Where(d => d.Name != "adsl"))
         {
             foreach (var problem in AdamConformance.ProblemsAgainstSubjectLevel(dataset, adsl))
             {
-                report.Add(CheckProblem.FromData(problem, CheckHints.ForData(problem.Message)), Kind(problem));
+                report.Add(CheckProblem.FromData(problem, CheckHints.ForData(problem)), Kind(problem));
             }
         }
         foreach (var dataset in datasets.Values)
@@ -70,8 +70,7 @@ public static class PackageCheck
         return report;
     }
 
-    private static string Kind(DataException problem) =>
-        $"{problem.Variable ?? "file"}: {new string(problem.Message.Split(':').Last().Trim().TakeWhile(c => c != '\'').ToArray())}";
+    private static string Kind(DataException problem) => $"{problem.Variable ?? "file"}: {problem.Code}";
 
     private static Dictionary<string, Dataset> ReadDatasets(StudySpec study, string folder, IReadOnlyList<string> allowedFolders, CheckReport report)
     {

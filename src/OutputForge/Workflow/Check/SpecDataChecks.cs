@@ -46,7 +46,7 @@ public static class SpecDataChecks
             }
             catch (DataException e)
             {
-                report.Add(CheckProblem.FromData(e, CheckHints.ForData(e.Message)));
+                report.Add(CheckProblem.FromData(e, CheckHints.ForData(e)));
             }
         }
     }
@@ -93,7 +93,7 @@ public static class SpecDataChecks
         var file = Path.GetFileName(adsl.File);
         if (selected == 0)
         {
-            report.Add(CheckProblem.FromSpec(study.Source.Problem(pointer + "/where",
+            report.Add(CheckProblem.FromSpec(study.Source.Problem(SpecProblemCode.NoSubjects, pointer + "/where",
                 $"population '{name}' ({population.Where}) selects no subjects of {file}")));
             return;
         }
@@ -105,7 +105,7 @@ public static class SpecDataChecks
         }
         if (!counts.ContainsKey(study.Treatment.Control))
         {
-            report.Add(CheckProblem.FromSpec(study.Source.Problem("/treatment/control",
+            report.Add(CheckProblem.FromSpec(study.Source.Problem(SpecProblemCode.NoSubjects, "/treatment/control",
                 $"control arm '{study.Treatment.Control}' has no subjects in population '{name}' ({treatment.Name} values: {string.Join(", ", counts.Keys)})")));
         }
         if (study.Treatment.Arms is not { } arms)
@@ -123,7 +123,7 @@ public static class SpecDataChecks
         {
             if (!counts.ContainsKey(arms[i].Value))
             {
-                var problem = study.Source.Problem($"/treatment/arms/{i}/value", $"arm '{arms[i].Value}' has no subjects in population '{name}'");
+                var problem = study.Source.Problem(SpecProblemCode.NoSubjects, $"/treatment/arms/{i}/value", $"arm '{arms[i].Value}' has no subjects in population '{name}'");
                 report.Add(CheckProblem.FromSpec(problem, CheckSeverity.Warning) with
                 {
                     Hint = "an empty arm shows N=0 and no percentages; check the arm's value against the data",
@@ -173,7 +173,7 @@ public static class SpecDataChecks
         var column = adsl.Find(name);
         if (column is null)
         {
-            report.Add(CheckProblem.FromSpec(study.Source.Problem(pointer,
+            report.Add(CheckProblem.FromSpec(study.Source.Problem(SpecProblemCode.UnknownVariable, pointer,
                 $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{Naming.NearestName.Hint(name, adsl.VariableNames)}")));
         }
         return column;

@@ -1,0 +1,9 @@
+namespace OutputForge.Analysis.Choices;
+
+/// <summary>The treatment-by-subgroup interaction test.</summary>
+public enum InteractionTest
+{
+    LikelihoodRatio,
+    BreslowDay,
+    BreslowDayTarone,
+}

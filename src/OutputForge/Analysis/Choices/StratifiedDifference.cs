@@ -1,0 +1,8 @@
+namespace OutputForge.Analysis.Choices;
+
+/// <summary>The common risk difference of a stratified responder analysis.</summary>
+public enum StratifiedDifference
+{
+    MantelHaenszel,
+    MiettinenNurminen,
+}

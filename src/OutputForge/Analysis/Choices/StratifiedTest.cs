@@ -1,0 +1,8 @@
+namespace OutputForge.Analysis.Choices;
+
+/// <summary>The Cochran-Mantel-Haenszel test of a stratified responder analysis.</summary>
+public enum StratifiedTest
+{
+    Cmh,
+    CmhCorrected,
+}
