@@ -158,6 +158,10 @@ public static class CsvDatasetReader
             {
                 if (columns[c] is null)
                 {
+                    if (!reader.IsEmpty(c))
+                    {
+                        CheckSkipped(reader, c, path, line, header[c], options, ref replaced);
+                    }
                     continue;
                 }
                 if (reader.IsEmpty(c))
@@ -207,6 +211,35 @@ public static class CsvDatasetReader
             lines[rowOffset + rows++] = line;
         }
         return (rows, replaced);
+    }
+
+    /// <summary>
+    /// A field of a variable the run skips is neither typed nor stored, but held to the same limits as any value (its
+    /// length, control characters), so that a file is refused, or its values replaced and counted, alike whatever a run
+    /// reads of it. Most fields pass on a look at their bytes; only a suspect one is decoded.
+    /// </summary>
+    private static void CheckSkipped(CsvReader reader, int c, string path, int line, string variable, DataReadOptions options, ref int replaced)
+    {
+        var utf8 = reader.GetSpan(c);
+        if (utf8.Length <= Math.Min(MaxFieldLength, Layout.DocumentText.MaxLength)
+            && utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) < 0 && utf8.IndexOfAnyInRange((byte)0xEF, (byte)0xF4) < 0)
+        {
+            return;
+        }
+        var value = reader.GetString(c);
+        if (value.Length > MaxFieldLength)
+        {
+            throw new DataException(path, line, variable,
+                FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
+        }
+        if (value.Length > Layout.DocumentText.MaxLength)
+        {
+            throw new DataException(path, line, variable, Layout.DocumentText.TooLong(value.Length));
+        }
+        if (ControlCharacters.IndexIn(value) >= 0)
+        {
+            HandleControlCharacter(path, line, variable, value, options, ref replaced);
+        }
     }
 
     private static string HandleControlCharacter(string path, int line, string variable, string value,

@@ -413,12 +413,33 @@ public static partial class DatasetJsonReader
             var column = _columns[_cell];
             if (_builders![_cell] is not { } builder)
             {
-                if (token is JsonTokenType.Null or JsonTokenType.String or JsonTokenType.Number or JsonTokenType.True or JsonTokenType.False)
+                // A column the run skips: the value is neither decoded nor stored, but its JSON type is still held to the
+                // column's dataType (a cheap test of the token), so that a file is refused alike whatever a run reads.
+                var fits = token switch
                 {
+                    JsonTokenType.Null => true,
+                    JsonTokenType.String => reader.ValueSpan.Length == 0 || column.Type == ColumnType.Decimal || !(column.IsNumber || column.Type == ColumnType.Boolean),
+                    JsonTokenType.Number => column.IsNumber,
+                    JsonTokenType.True or JsonTokenType.False => column.Type == ColumnType.Boolean,
+                    _ => false,
+                };
+                if (fits)
+                {
+                    if (token == JsonTokenType.String && reader.ValueIsEscaped && column.Type != ColumnType.Decimal
+                        && reader.GetString() is { } skipped && ControlCharacters.IndexIn(skipped) is var at && at >= 0)
+                    {
+                        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
+                        {
+                            throw RowError($"the value holds the control character U+{(int)skipped[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
+                        }
+                        Replaced++;
+                    }
                     _cell++;
                     return;
                 }
-                throw RowError($"expected {Expected(column)} (dataType {column.DataType}), found {Describe(token)}");
+                throw token == JsonTokenType.String
+                    ? RowError($"expected {Expected(column)} (dataType {column.DataType}), found the string \"{Shorten(reader.GetString()!)}\"")
+                    : RowError($"expected {Expected(column)} (dataType {column.DataType}), found {Describe(token)}");
             }
             switch (token)
             {

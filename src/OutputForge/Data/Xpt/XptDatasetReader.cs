@@ -291,12 +291,28 @@ public static class XptDatasetReader
         var replaced = 0;
         for (var v = 0; v < variables.Length; v++)
         {
-            if (builders[v] is not { } builder)
-            {
-                continue;
-            }
             var variable = variables[v];
             var value = bytes.Slice(variable.Position, variable.Length);
+            if (builders[v] is not { } builder)
+            {
+                // A variable the run skips is not decoded, but a character value is held to the control-character
+                // rule as any value is, so that a file is refused alike whatever a run reads of it.
+                var written = variable.IsNumeric ? default : value[..(value.LastIndexOfAnyExcept((byte)' ') + 1)];
+                if (written.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0)
+                {
+                    var decoded = Decode(written);
+                    if (ControlCharacters.IndexIn(decoded) is var at && at >= 0)
+                    {
+                        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
+                        {
+                            throw new DataException(path, null, variable.Name,
+                                $"row {row}: the value holds the control character U+{(int)decoded[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
+                        }
+                        replaced++;
+                    }
+                }
+                continue;
+            }
             if (!variable.IsNumeric)
             {
                 var end = value.LastIndexOfAnyExcept((byte)' ');
