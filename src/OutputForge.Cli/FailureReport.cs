@@ -17,6 +17,11 @@ public static class FailureReport
         {
             return work();
         }
+        catch (Workflow.TableSelectionException e)
+        {
+            error.WriteLine($"outputforge: error: {e.Message}");
+            return ExitCodes.Usage;
+        }
         catch (SpecException e)
         {
             foreach (var problem in e.Problems.Take(20))

@@ -27,6 +27,6 @@ public static class Program
             CalcCommand.Create(output, error),
         };
         var parse = root.Parse(args);
-        return parse.Invoke(new InvocationConfiguration { Error = error });
+        return parse.Invoke(new InvocationConfiguration { Error = error, Output = output });
     }
 }

@@ -14,5 +14,8 @@ public sealed record IntervalResult(double Estimate, double Lower, double Upper,
     /// </summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
 
+    /// <summary>The strata a stratified method left out or that added nothing to it, by index and reason (the caller names them).</summary>
+    public IReadOnlyList<StratumRemark> StratumRemarks { get; init; } = [];
+
     public static IntervalResult NotEstimable(string reason) => new(0, 0, 0, reason);
 }

@@ -19,5 +19,8 @@ public sealed record TestResult(
     /// </summary>
     public IReadOnlyList<string> Notes { get; init; } = [];
 
+    /// <summary>The strata a stratified method left out or that added nothing to it, by index and reason (the caller names them).</summary>
+    public IReadOnlyList<StratumRemark> StratumRemarks { get; init; } = [];
+
     public static TestResult NotEstimable(string method, string reason) => new(method, null, null, 0, reason);
 }

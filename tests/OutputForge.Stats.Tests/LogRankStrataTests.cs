@@ -4,21 +4,13 @@ namespace OutputForge.Stats.Tests;
 public sealed class LogRankStrataTests
 {
     [Fact]
-    public void A_stratum_with_one_group_only_is_named_in_the_notes()
+    public void A_stratum_with_one_group_only_is_reported_by_its_index()
     {
         // Stratum 1 holds group 0 only: with no comparison inside it, it adds nothing (Mantel 1966), and a reader must be told.
         var data = new SurvivalData([1.0, 2, 3, 4, 5, 6], [true, true, true, true, true, false]);
         var test = LogRankTest.Compute(data, [0, 1, 0, 1, 0, 0], [0, 0, 0, 0, 1, 1]);
         Assert.True(test.IsEstimable);
-        Assert.Contains(test.Notes, n => n.Contains("stratum 1") && n.Contains("one group only"));
-    }
-
-    [Fact]
-    public void Notes_name_a_stratum_as_the_caller_names_it()
-    {
-        var data = new SurvivalData([1.0, 2, 3, 4, 5, 6], [true, true, true, true, true, false]);
-        var test = LogRankTest.Compute(data, [0, 1, 0, 1, 0, 0], [0, 0, 0, 0, 1, 1], ["'EU'", "'US'"]);
-        Assert.Contains(test.Notes, n => n.Contains("stratum 'US' has subjects of one group only"));
+        Assert.Equal([new StratumRemark(1, StratumRemarkReason.OneGroupOnly)], test.StratumRemarks);
     }
 
     [Fact]
@@ -31,6 +23,6 @@ public sealed class LogRankStrataTests
         var stratified = LogRankTest.Compute(new SurvivalData(times, events), group, [0, 0, 0, 0, 1, 1]);
         var firstOnly = LogRankTest.Compute(new SurvivalData(times[..4], events[..4]), group[..4]);
         Assert.Equal(firstOnly.Statistic!.Value, stratified.Statistic!.Value, 14);
-        Assert.Contains(stratified.Notes, n => n.Contains("no events"));
+        Assert.Equal([new StratumRemark(1, StratumRemarkReason.NoEvents)], stratified.StratumRemarks);
     }
 }

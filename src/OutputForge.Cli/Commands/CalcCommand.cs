@@ -202,6 +202,7 @@ public static class CalcCommand
             : throw new CalcInputException(string.Create(System.Globalization.CultureInfo.InvariantCulture,
                 $"--level: {level} is not {MethodCatalog.ConfidenceLevel.Describe()}"));
 
+    /// <summary>Every input of calc is a command-line value, so any input it cannot use is a usage error (exit code 1).</summary>
     private static int Run(TextWriter error, Action work)
     {
         try
@@ -212,12 +213,12 @@ public static class CalcCommand
         catch (CalcInputException e)
         {
             error.WriteLine($"outputforge: error: {e.Message}");
-            return ExitCodes.InputError;
+            return ExitCodes.Usage;
         }
         catch (ArgumentException e)
         {
             error.WriteLine($"outputforge: error: {e.Message.Split(" (Parameter")[0]}");
-            return ExitCodes.InputError;
+            return ExitCodes.Usage;
         }
     }
 }

@@ -23,7 +23,7 @@ public static class ChangesCommand
         };
         var report = new Option<string?>("--report", "-r")
         {
-            Description = "The report workbook to write (.xlsx; a .txt beside it). Default: changes.xlsx in the --after folder's parent.",
+            Description = "The report workbook to write (.xlsx; a .txt beside it). Default: changes.xlsx inside the --after folder.",
         };
         var command = new Command("changes", "Explain what changed between two runs: input files, tables and every changed number.")
         {
@@ -33,8 +33,9 @@ public static class ChangesCommand
         {
             var afterFolder = parse.GetValue(after)!;
             var changes = RunComparison.Compare(parse.GetValue(before)!, afterFolder);
-            var workbook = parse.GetValue(report)
-                ?? Path.Combine(Path.GetDirectoryName(Path.GetFullPath(afterFolder).TrimEnd(Path.DirectorySeparatorChar)) ?? ".", "changes.xlsx");
+            // The report explains the --after run, so by default it goes with it, never beside it where it would land
+            // among other folders (the parent of an output folder is often the project's own folder).
+            var workbook = parse.GetValue(report) ?? Path.Combine(afterFolder, "changes.xlsx");
             ChangesWorkbook.Save(changes, workbook);
             var text = Path.ChangeExtension(workbook, ".txt");
             using (var writer = new StreamWriter(text))

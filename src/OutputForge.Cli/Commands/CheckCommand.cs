@@ -12,22 +12,17 @@ public static class CheckCommand
 {
     public static Command Create(TextWriter output, TextWriter error)
     {
-        var spec = new Option<string>("--spec", "-s")
-        {
-            Description = "The study spec file, or the folder holding study.json.",
-            Required = true,
-        };
-        var data = new Option<string?>("--data", "-d")
-        {
-            Description = "Folder with the ADaM datasets as CSV (default: data.folder of the study spec).",
-        };
-        var command = new Command("check", "Check specs and data and report every problem at once, without producing tables.")
-        {
-            spec, data,
-        };
+        var inputs = new InputOptionSet("Check only these tables, by id or pattern ('14.2.*'), comma-separated or repeated.");
+        var command = new Command("check", "Check specs and data and report every problem at once, without producing tables; " +
+            "it applies every rule of `run` and takes the options that change what a run reads.");
+        inputs.AddTo(command);
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
-            var report = PackageCheck.Run(parse.GetValue(spec)!, parse.GetValue(data));
+            if (!inputs.TryRead(parse, error, out var read))
+            {
+                return ExitCodes.Usage;
+            }
+            var report = PackageCheck.Run(parse.GetValue(inputs.Spec)!, parse.GetValue(inputs.Data), read);
             report.Write(output);
             return report.Errors == 0 ? ExitCodes.Success : ExitCodes.InputError;
         }));

@@ -12,9 +12,11 @@ public static class CommonOptions
         Required = true,
     };
 
-    public static Option<string[]> Formats() => new("--format", "-f")
+    /// <param name="alsoWritten">What the command writes whatever the formats (e.g. "results.json and manifest.json are always written."), or null.</param>
+    public static Option<string[]> Formats(string? alsoWritten = null) => new("--format", "-f")
     {
-        Description = $"Output formats, comma-separated or repeated: {string.Join(", ", OutputFormats.Names)} (default: {string.Join(",", OutputFormats.Default)}). results.json is always written.",
+        Description = $"Output formats, comma-separated or repeated: {string.Join(", ", OutputFormats.Names)} (default: {string.Join(",", OutputFormats.Default)})." +
+                      (alsoWritten is null ? string.Empty : " " + alsoWritten),
         AllowMultipleArgumentsPerToken = true,
     };
 
@@ -42,6 +44,27 @@ public static class CommonOptions
         Description = "Control characters in data values, which Word and Excel cannot store: 'refuse' (stop with an error naming file, line and variable; default) or 'replace' (show U+FFFD and warn).",
         DefaultValueFactory = _ => "refuse",
     };
+
+    /// <summary>
+    /// The tables --tables selects: null (every table) when the option is not given; a usage error when it is given with
+    /// nothing in it (e.g. --tables ''), which would otherwise run no table and still rewrite results.json and the manifest.
+    /// </summary>
+    public static bool TryTableSelection(ParseResult parse, Option<string[]> option, TextWriter error, out string[]? selected)
+    {
+        selected = null;
+        if (parse.GetResult(option) is null)
+        {
+            return true;
+        }
+        var values = parse.GetValue(option) ?? [];
+        if (values.All(v => v.Split(',').All(string.IsNullOrWhiteSpace)))
+        {
+            error.WriteLine("outputforge: error: --tables: the selection is empty; give table ids or patterns (e.g. --tables 14.2.1.1,'14.3.*'), or leave out --tables for every table");
+            return false;
+        }
+        selected = values;
+        return true;
+    }
 
     public static bool TryDataOptions(string? controlCharacters, TextWriter error, out Data.DataReadOptions options)
     {

@@ -32,7 +32,7 @@ public static class DemoCommand
             DefaultValueFactory = _ => DemoDataFormat.Csv,
         };
         dataFormat.AcceptOnlyFromAmong([.. DemoDataFormat.All]);
-        var formats = CommonOptions.Formats();
+        var formats = CommonOptions.Formats("results.json and manifest.json are always written.");
         var quiet = CommonOptions.Quiet();
         var verbose = CommonOptions.Verbose();
         var timestamp = CommonOptions.Timestamp();

@@ -17,7 +17,7 @@ public static class DemoSizeOption
     {
         var option = new Option<string>("--size")
         {
-            Description = "standard: the ordinary demo study (15 tables); pooled: a pooled-analysis study for speed measurements (about 2.1 million BDS records, 200,000 adverse events, 60 tables).",
+            Description = $"standard: the ordinary demo study ({DemoSpecFiles.TableCount} tables); pooled: a pooled-analysis study for speed measurements (about 2.1 million BDS records, 200,000 adverse events, {PooledSpecSet.TableCount} tables).",
             DefaultValueFactory = _ => Standard,
         };
         option.AcceptOnlyFromAmong(Standard, Pooled);

@@ -19,6 +19,7 @@ public static class ShellsCommand
         var output = CommonOptions.Output("Folder for the shells (shell-<id>.docx, .xlsx, ...), created if needed.");
         var formats = CommonOptions.Formats();
         var quiet = CommonOptions.Quiet();
+        var timestamp = CommonOptions.Timestamp();
         var tables = new Option<string[]>("--tables", "-t")
         {
             Description = "Only these tables, by id or pattern ('14.2.*'), comma-separated or repeated.",
@@ -26,18 +27,18 @@ public static class ShellsCommand
         };
         var command = new Command("shells", "Write mock shells of the tables (placeholders instead of numbers); needs no data.")
         {
-            spec, output, formats, quiet, tables,
+            spec, output, formats, quiet, tables, timestamp,
         };
         command.SetAction(parse => FailureReport.Guard(error, () =>
         {
             var renderers = CommonOptions.Renderers(parse.GetValue(formats), error, out var valid);
-            if (!valid)
+            if (!valid || !CommonOptions.TryRunTime(parse.GetValue(timestamp), error, out var runTime)
+                || !CommonOptions.TryTableSelection(parse, tables, error, out var selected))
             {
                 return ExitCodes.Usage;
             }
-            var selected = parse.GetValue(tables);
-            ShellPackage.Write(parse.GetValue(spec)!, parse.GetValue(output)!, renderers, selected is { Length: > 0 } ? selected : null,
-                CommonOptions.Log(error, parse.GetValue(quiet), verbose: false));
+            ShellPackage.Write(parse.GetValue(spec)!, parse.GetValue(output)!, renderers, selected,
+                CommonOptions.Log(error, parse.GetValue(quiet), verbose: false), runTime);
             return ExitCodes.Success;
         }));
         return command;

@@ -14,6 +14,13 @@ public static class FisherExactTest
 {
     public const string MethodName = "Fisher's exact test";
 
+    /// <summary>The method's name when the p-value is the Monte Carlo estimate.</summary>
+    public const string MonteCarloMethodName = "Fisher's exact test (Monte Carlo estimate)";
+
+    /// <summary>What a reader must be told beside a Monte Carlo p-value: that it is an estimate, how precise, and how to reproduce it.</summary>
+    public static string MonteCarloNote(FisherMonteCarloEstimate estimate) => string.Create(System.Globalization.CultureInfo.InvariantCulture,
+        $"The table is too large for exact enumeration within the work limit: the p-value of Fisher's exact test is a Monte Carlo estimate (Agresti, Wackerly and Boyett 1979), {estimate.PValue:0.0000} with 99% CI {estimate.Lower:0.0000} to {estimate.Upper:0.0000}, from {estimate.Samples:N0} tables sampled with the observed margins (Patefield 1981), seed {estimate.Seed}.");
+
     /// <summary>Relative tolerance for "no more probable than the observed table" (R, fisher.test).</summary>
     internal const double RelativeTolerance = 1e-7;
 
@@ -69,7 +76,14 @@ public static class FisherExactTest
     /// of <see cref="FisherTwoRowEnumeration"/>, otherwise <see cref="FisherNetworkEnumeration"/>; a
     /// table too large to enumerate within the work limit is reported as not estimable, never approximated.
     /// </summary>
-    public static TestResult Compute(int[,] table)
+    public static TestResult Compute(int[,] table) => Compute(table, null);
+
+    /// <summary>
+    /// As <see cref="Compute(int[,])"/>; a table beyond exact enumeration gets, when <paramref name="monteCarlo"/> is
+    /// given, the Monte Carlo estimate of <see cref="FisherMonteCarlo"/> instead of NE, with a note giving the estimate,
+    /// its 99% interval, the number of sampled tables and the seed.
+    /// </summary>
+    public static TestResult Compute(int[,] table, FisherMonteCarloSettings? monteCarlo)
     {
         TableMargins.Validate(table);
         if (table.GetLength(0) < 2 || table.GetLength(1) < 2)
@@ -92,8 +106,15 @@ public static class FisherExactTest
             return TwoByTwo(reduced[0, 0], reduced[0, 1], reduced[1, 0], reduced[1, 1]) with { Notes = notes };
         }
         double? p = r == 2 || c == 2 ? FisherTwoRowEnumeration.PValue(reduced) : FisherNetworkEnumeration.PValue(reduced);
-        return p is null
-            ? TestResult.NotEstimable(MethodName, "the table is too large for exact enumeration within the work limit")
-            : new TestResult(MethodName, null, null, p.Value) { Notes = notes };
+        if (p is not null)
+        {
+            return new TestResult(MethodName, null, null, p.Value) { Notes = notes };
+        }
+        if (monteCarlo is null)
+        {
+            return TestResult.NotEstimable(MethodName, "the table is too large for exact enumeration within the work limit");
+        }
+        var estimate = FisherMonteCarlo.Estimate(reduced, monteCarlo);
+        return new TestResult(MonteCarloMethodName, null, null, estimate.PValue) { Notes = [.. notes, MonteCarloNote(estimate)] };
     }
 }

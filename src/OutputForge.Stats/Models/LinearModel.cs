@@ -50,7 +50,10 @@ public static class LinearModel
         var s2 = rss / df;
         var rInverse = r.Inverse();
         var covariance = rInverse * rInverse.Transpose() * s2;
-        return new LinearModelFit(design, b, covariance, s2, df, rss, null);
+        return new LinearModelFit(design, b, covariance, s2, df, rss, null)
+        {
+            HasDegenerateVariance = DegenerateVariance.Holds(rss, y.DotProduct(y), n),
+        };
     }
 
     private static LinearModelFit NotEstimable(LinearModelDesign design, string reason) =>

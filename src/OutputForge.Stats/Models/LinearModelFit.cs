@@ -30,6 +30,12 @@ public sealed class LinearModelFit
     public double ResidualVariance { get; }
     public double ResidualStandardDeviation => Math.Sqrt(ResidualVariance);
     public int ResidualDegreesOfFreedom { get; }
+
+    /// <summary>
+    /// The residual variance is zero up to rounding relative to the response's scale (<see cref="DegenerateVariance"/>):
+    /// the coefficients fit exactly, but standard errors, intervals and tests are rounding noise.
+    /// </summary>
+    public bool HasDegenerateVariance { get; init; }
     public double ResidualSumOfSquares { get; }
 
     public Vector<double> Coefficients => _coefficients ?? throw new InvalidOperationException(NotEstimableReason);

@@ -16,9 +16,9 @@ public static class LogRankTest
     /// <param name="data">The observations' times and event flags.</param>
     /// <param name="group">Group index (0..k-1) of each observation.</param>
     /// <param name="stratum">Stratum index of each observation, or null for an unstratified test.</param>
-    /// <param name="stratumNames">How the notes name each stratum index (e.g. its values); the index itself when null.</param>
-    public static TestResult Compute(SurvivalData data, IReadOnlyList<int> group, IReadOnlyList<int>? stratum = null,
-        IReadOnlyList<string>? stratumNames = null)
+    /// <remarks>A stratum with one group only, or without events, adds nothing to the test; it is reported in
+    /// <see cref="TestResult.StratumRemarks"/> by its index, for the caller to name.</remarks>
+    public static TestResult Compute(SurvivalData data, IReadOnlyList<int> group, IReadOnlyList<int>? stratum = null)
     {
         var method = stratum is null ? Method : StratifiedMethod;
         if (group.Count != data.Count || (stratum is not null && stratum.Count != data.Count))
@@ -34,7 +34,7 @@ public static class LogRankTest
         var indexOf = groups.Select((g, i) => (g, i)).ToDictionary(p => p.g, p => p.i);
         var observedMinusExpected = new double[k];
         var variance = new double[k, k];
-        var notes = new List<string>();
+        var remarks = new List<StratumRemark>();
         var strata = Enumerable.Range(0, data.Count).GroupBy(i => stratum?[i] ?? 0).OrderBy(g => g.Key);
         foreach (var rows in strata)
         {
@@ -42,10 +42,7 @@ public static class LogRankTest
             var eventsHere = rows.Count(i => data.Events[i]);
             if (stratum is not null && (groupsHere < 2 || eventsHere == 0))
             {
-                var name = stratumNames?[rows.Key] ?? rows.Key.ToString(System.Globalization.CultureInfo.InvariantCulture);
-                notes.Add(groupsHere < 2
-                    ? $"stratum {name} has subjects of one group only and adds nothing to the test"
-                    : $"stratum {name} has no events and adds nothing to the test");
+                remarks.Add(new StratumRemark(rows.Key, groupsHere < 2 ? StratumRemarkReason.OneGroupOnly : StratumRemarkReason.NoEvents));
             }
             AddStratum(data, rows.ToList(), group, indexOf, observedMinusExpected, variance);
         }
@@ -53,13 +50,13 @@ public static class LogRankTest
         var v = Matrix<double>.Build.Dense(k - 1, k - 1, (i, j) => variance[i, j]);
         if (v.Rank() < k - 1)
         {
-            return TestResult.NotEstimable(method, "the variance of observed minus expected events is singular (no events, or a group with no subjects at risk at any event time)") with { Notes = notes };
+            return TestResult.NotEstimable(method, "the variance of observed minus expected events is singular (no events, or a group with no subjects at risk at any event time)") with { StratumRemarks = remarks };
         }
         var statistic = u.DotProduct(v.Solve(u));
         var df = k - 1;
         // Upper tail through the regularized incomplete gamma function, which stays accurate for tiny p.
         var p = MathNet.Numerics.SpecialFunctions.GammaUpperRegularized(df / 2.0, statistic / 2.0);
-        return new TestResult(method, statistic, df, p) { Notes = notes };
+        return new TestResult(method, statistic, df, p) { StratumRemarks = remarks };
     }
 
     /// <summary>Adds one stratum's O - E and hypergeometric covariance at each distinct event time.</summary>

@@ -20,18 +20,19 @@ public static class CellFactory
     public static ResultCell Count(string column, int n) =>
         new(column, "{n}", [StatisticValue.Count(SubjectCount, n)]);
 
-    /// <summary>An interval's bounds, multiplied by <paramref name="scale"/> (100 for percent).</summary>
-    public static ResultCell Interval(string column, IntervalResult interval, double scale, int decimals, string method)
+    /// <summary>An interval's bounds, multiplied by <paramref name="scale"/> (100 for percent), with their confidence level (two-sided) when given.</summary>
+    public static ResultCell Interval(string column, IntervalResult interval, double scale, int decimals, string method, double? level = null)
     {
+        var sided = level is null ? (Sidedness?)null : Sidedness.TwoSided;
         if (!interval.IsEstimable)
         {
             return new ResultCell(column, "{lower}",
-                [StatisticValue.NotEstimable(Lower, ValueFormat.Decimal, interval.NotEstimableReason!, method)]);
+                [StatisticValue.NotEstimable(Lower, ValueFormat.Decimal, interval.NotEstimableReason!, method) with { Level = level, Sided = sided }]);
         }
         return new ResultCell(column, "({lower}, {upper})",
         [
-            new StatisticValue(Lower, interval.Lower * scale, ValueFormat.Decimal, decimals, Method: method),
-            new StatisticValue(Upper, interval.Upper * scale, ValueFormat.Decimal, decimals, Method: method),
+            new StatisticValue(Lower, interval.Lower * scale, ValueFormat.Decimal, decimals, Method: method) { Level = level, Sided = sided },
+            new StatisticValue(Upper, interval.Upper * scale, ValueFormat.Decimal, decimals, Method: method) { Level = level, Sided = sided },
         ]);
     }
 
@@ -49,9 +50,10 @@ public static class CellFactory
         if (!test.IsEstimable)
         {
             return new ResultCell(column, "{pValue}",
-                [StatisticValue.NotEstimable(PValue, ValueFormat.PValue, test.NotEstimableReason!, test.Method)]);
+                [StatisticValue.NotEstimable(PValue, ValueFormat.PValue, test.NotEstimableReason!, test.Method) with { Sided = Sidedness.TwoSided }]);
         }
-        var values = new List<StatisticValue> { new(PValue, test.PValue, ValueFormat.PValue, Method: test.Method) };
+        // Every p-value of the tool is two-sided (docs/results.md).
+        var values = new List<StatisticValue> { new(PValue, test.PValue, ValueFormat.PValue, Method: test.Method) { Sided = Sidedness.TwoSided } };
         if (test.Statistic is { } statistic)
         {
             values.Add(new StatisticValue(TestStatistic, statistic, ValueFormat.Decimal, 3, Method: test.Method));

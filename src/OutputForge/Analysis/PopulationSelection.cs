@@ -6,7 +6,9 @@ namespace OutputForge.Analysis;
 
 /// <summary>
 /// The subjects of one analysis population (optionally narrowed by a table's subset), grouped by
-/// treatment arm in display order. Subjects with no arm value are left out, and a warning says how many.
+/// treatment arm in display order. Subjects with no arm value are left out, and a warning says how many. An arm the
+/// study spec lists, or one of the population that the table's subset empties, keeps its column with N=0 and a warning
+/// (which the table prints as a footnote).
 /// </summary>
 public sealed class PopulationSelection
 {
@@ -50,10 +52,21 @@ public sealed class PopulationSelection
         var subjects = adsl.Get(AdamConformance.SubjectVariable);
 
         var armByValue = new Dictionary<string, (double Order, List<string> Subjects)>(StringComparer.Ordinal);
+        // The arms of the population before the table's subset, with their order: an arm the subset empties keeps its column.
+        var populationArms = new Dictionary<string, double>(StringComparer.Ordinal);
         var withoutArm = 0;
         for (var row = 0; row < adsl.RowCount; row++)
         {
-            if (!where.Matches(row) || (subset is not null && !subset.Matches(row)))
+            if (!where.Matches(row))
+            {
+                continue;
+            }
+            if (subset is not null && treatment.GetText(row) is { } populationArm && !populationArms.ContainsKey(populationArm))
+            {
+                var populationRank = order?.GetNumber(row) ?? double.NaN;
+                populationArms[populationArm] = double.IsNaN(populationRank) ? double.MaxValue : populationRank;
+            }
+            if (subset is not null && !subset.Matches(row))
             {
                 continue;
             }
@@ -82,6 +95,11 @@ public sealed class PopulationSelection
             throw new SpecException(study.Source.Problem(SpecProblemCode.UnknownDataValue, "/treatment/control",
                 $"control arm '{study.Treatment.Control}' is not a value of {treatment.Name} in population '{table.Population}'{NearestName.Hint(study.Treatment.Control, armByValue.Keys.ToList())}"));
         }
+        var emptyArms = EmptyArms(study, populationArms, armByValue);
+        foreach (var (value, rank) in emptyArms)
+        {
+            armByValue[value] = (rank, []);
+        }
         var arms = armByValue
             .OrderBy(a => a.Value.Order)
             .ThenBy(a => a.Key, StringComparer.Ordinal)
@@ -108,6 +126,11 @@ public sealed class PopulationSelection
             }
         }
         var warnings = new List<string>();
+        foreach (var arm in arms.Where(a => emptyArms.ContainsKey(a.Value)))
+        {
+            var selected = table.Subset is null ? $"population '{table.Population}'" : $"population '{table.Population}' with the subset {table.Subset}";
+            warnings.Add($"arm {arm.Label} has no subjects in {selected}: its column shows N=0.");
+        }
         if (withoutArm > 0)
         {
             warnings.Add($"{withoutArm} subject{(withoutArm == 1 ? "" : "s")} of the population with no value of {treatment.Name} {(withoutArm == 1 ? "is" : "are")} not counted.");
@@ -116,6 +139,29 @@ public sealed class PopulationSelection
         {
             _counts = arms.ToDictionary(a => a, a => armByValue[a.Value].Subjects.Count),
         };
+    }
+
+    /// <summary>
+    /// The arms with no subject selected that still get a column (N=0): those the study spec lists under treatment.arms
+    /// (with their listed order) and those of the population that the table's subset leaves empty. An arm never
+    /// disappears from a table without a word: reviewers expect every randomized arm.
+    /// </summary>
+    private static Dictionary<string, double> EmptyArms(StudySpec study, Dictionary<string, double> populationArms,
+        Dictionary<string, (double Order, List<string> Subjects)> armByValue)
+    {
+        var empty = new Dictionary<string, double>(StringComparer.Ordinal);
+        foreach (var (value, rank) in populationArms.Where(a => !armByValue.ContainsKey(a.Key)))
+        {
+            empty[value] = rank;
+        }
+        foreach (var listed in study.Treatment.Arms ?? [])
+        {
+            if (!armByValue.ContainsKey(listed.Value))
+            {
+                empty.TryAdd(listed.Value, listed.Order);
+            }
+        }
+        return empty;
     }
 
     /// <summary>What <see cref="Select"/> reads of ADSL: the subject, the population's and subset's conditions, the treatment and its order.</summary>

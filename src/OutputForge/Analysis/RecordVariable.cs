@@ -52,4 +52,10 @@ public sealed class RecordVariable
     public double Number(int recordRow, string subject) => Row(recordRow, subject) is var r && r >= 0 ? _column.GetNumber(r) : double.NaN;
 
     public bool IsNumeric => _column.Kind == VariableKind.Number;
+
+    /// <summary>Why the variable is not numeric, where a value shows it (e.g. "'abc' on line 5 is not a number"); empty otherwise.</summary>
+    public string NotNumericEvidence => _column.TextEvidence is { } evidence ? $" ({evidence} is not a number)" : string.Empty;
+
+    /// <summary>True when the variable has no value at all (a column left empty, typed as text).</summary>
+    public bool IsEmpty => _column.DistinctValues().Count == 0;
 }

@@ -29,6 +29,8 @@ internal sealed class ColumnBuilder
     /// <summary>True when canonical values were stored as dates (day numbers), false when as numbers: a column holds only one of the two.</summary>
     private bool _canonicalDates;
     private string? _evidence;
+    /// <summary>The first value that reads as a number OutputForge cannot use (<see cref="UnusableNumber"/>), with its line.</summary>
+    private (string Value, int Line, string Problem)? _unusable;
     private int _count;
 
     public ColumnBuilder(string name, int capacity)
@@ -102,14 +104,23 @@ internal sealed class ColumnBuilder
         var number = double.NaN;
         if (_numeric)
         {
-            if (double.TryParse(value, NumberStyles.Float, CultureInfo.InvariantCulture, out var parsed) && double.IsFinite(parsed))
+            var isNumber = double.TryParse(value, NumberStyles.Float, CultureInfo.InvariantCulture, out var parsed);
+            var problem = UnusableNumber.Problem(value, isNumber, parsed);
+            if (isNumber && problem is null)
             {
                 number = parsed;
+            }
+            else if (problem is not null)
+            {
+                // A broken number (NaN, an overflow, a decimal comma) keeps the column numeric: if every other value is a
+                // number, the column is a numeric one with a bad value, reported at its line when the column is built.
+                _unusable ??= (value, line, problem);
+                _evidence ??= $"'{Shorten(value)}' on line {line}";
             }
             else
             {
                 _numeric = false;
-                _evidence = $"'{Shorten(value)}' on line {line}";
+                _evidence ??= $"'{Shorten(value)}' on line {line}";
             }
         }
         if (_dates)
@@ -141,15 +152,18 @@ internal sealed class ColumnBuilder
         _count++;
     }
 
-    public DataColumn Build() => Join([this]);
+    /// <summary>The column of the file <paramref name="path"/> (for the message of an unusable number).</summary>
+    public DataColumn Build(string path) => Join([this], path);
 
     /// <summary>
     /// The column of builders that filled consecutive parts of one file (in file order, sharing one store): typed as
     /// if one builder had read every value (numeric only when every part is, and so on), its rows moved together.
     /// Canonical values a part stored as numbers or dates become their text again where the column turns out to be
-    /// text: the same text as written (<see cref="CanonicalText"/>).
+    /// text: the same text as written (<see cref="CanonicalText"/>). A numeric column holding a number OutputForge
+    /// cannot use (<see cref="UnusableNumber"/>) is a <see cref="DataException"/> at that value's line of
+    /// <paramref name="path"/>.
     /// </summary>
-    public static DataColumn Join(IReadOnlyList<ColumnBuilder> parts)
+    public static DataColumn Join(IReadOnlyList<ColumnBuilder> parts, string path)
     {
         var name = parts[0]._name;
         var store = parts[0]._store;
@@ -159,6 +173,10 @@ internal sealed class ColumnBuilder
             return new DataColumn(name, VariableKind.Text, new string?[count], null, count);
         }
         var numeric = parts.All(p => p._numeric);
+        if (numeric && parts.Select(p => p._unusable).FirstOrDefault(u => u is not null) is { } unusable)
+        {
+            throw new DataException(path, unusable.Line, name, $"'{Shorten(unusable.Value)}' {unusable.Problem}");
+        }
         if (numeric || parts.All(p => p._dates))
         {
             foreach (var part in parts.Where(p => p._decimals is null))

@@ -6,7 +6,8 @@ namespace OutputForge.Data;
 /// <summary>
 /// Reads one ADaM-style CSV file (a header row of variable names, RFC 4180 quoting, UTF-8) into a
 /// <see cref="Dataset"/> with typed columns. Every problem is a <see cref="DataException"/> naming
-/// the file, line and variable.
+/// the file, line and variable. Trailing blanks of a value are dropped (transport-file padding), so
+/// every key and text comparison (USUBJID, arms, PARAMCD, AVISIT, conditions) ignores them.
 /// </summary>
 public static class CsvDatasetReader
 {
@@ -115,10 +116,28 @@ public static class CsvDatasetReader
             {
                 warn(ReplacedWarning(path, replaced));
             }
-            return new Dataset(name, path, rows, columns.OfType<ColumnBuilder>().Select(c => c.Build()).ToList(), new ArraySegment<int>(lines, 0, rows))
+            var built = new List<DataColumn>(columns.Length);
+            DataException? first = null;
+            foreach (var column in columns.OfType<ColumnBuilder>())
             {
-                VariableNames = header,
-            };
+                try
+                {
+                    built.Add(column.Build(path));
+                }
+                catch (DataException e) when (first is null || e.Line < first.Line)
+                {
+                    // An unusable number: the one on the earliest line (then the leftmost column) is reported.
+                    first = e;
+                }
+                catch (DataException)
+                {
+                }
+            }
+            if (first is not null)
+            {
+                throw first;
+            }
+            return new Dataset(name, path, rows, built, new ArraySegment<int>(lines, 0, rows)) { VariableNames = header };
         }
         catch (CsvFormatException e)
         {
@@ -186,6 +205,17 @@ public static class CsvDatasetReader
                     continue;
                 }
                 var value = reader.GetString(c);
+                if (value.EndsWith(' '))
+                {
+                    // Trailing blanks are the padding of fixed-length text in SAS transport files, not part of the value
+                    // (ADaM compares text without them): "S-001 " is subject S-001, and a value of blanks only is missing.
+                    value = value.TrimEnd(' ');
+                    if (value.Length == 0)
+                    {
+                        columns[c].AddMissing();
+                        continue;
+                    }
+                }
                 if (value.Length > MaxFieldLength)
                 {
                     throw new DataException(path, line, header[c],

@@ -175,7 +175,23 @@ public sealed class CsvFileParts
         }
         var kept = Enumerable.Range(0, _header.Length).Where(c => _columns[0][c] is not null).ToArray();
         var columns = new DataColumn[kept.Length];
-        Parallel.For(0, kept.Length, k => columns[k] = ColumnBuilder.Join(_columns.Select(part => part[kept[k]]!).ToList()));
+        var errors = new DataException?[kept.Length];
+        Parallel.For(0, kept.Length, k =>
+        {
+            try
+            {
+                columns[k] = ColumnBuilder.Join(_columns.Select(part => part[kept[k]]!).ToList(), _path);
+            }
+            catch (DataException e)
+            {
+                errors[k] = e;
+            }
+        });
+        // An unusable number: the one on the earliest line (then the leftmost column), as a reader from the start finds it.
+        if (errors.Where(e => e is not null).OrderBy(e => e!.Line).FirstOrDefault() is { } first)
+        {
+            throw first;
+        }
         var rows = _read.Sum(r => r.Rows);
         ColumnBuilder.MoveRowsTogether(_read.Select(r => r.Rows).ToList(), _rowOffsets, _lines);
         return new Dataset(_name, _path, rows, columns, new ArraySegment<int>(_lines, 0, rows)) { VariableNames = _header };

@@ -65,7 +65,23 @@ public sealed class DataColumn : IVariable
     /// <summary>For a text column whose first values were numbers: the first value that is not (for messages).</summary>
     public string? TextEvidence { get; init; }
 
-    string? IVariable.KindNote => TextEvidence;
+    string? IVariable.KindNote => TextEvidence is null || Owner is null ? TextEvidence : $"{TextEvidence} of {Path.GetFileName(Owner.File)}";
+
+    /// <summary>The dataset the column belongs to (set when the dataset is made), for the places named in messages.</summary>
+    internal Dataset? Owner { get; set; }
+
+    public string? FirstValueNot(Func<string, bool> accept)
+    {
+        for (var row = 0; row < _length; row++)
+        {
+            if (GetText(row) is { } value && !accept(value))
+            {
+                var shown = value.Length <= 40 ? value : value[..40] + "...";
+                return Owner is null ? $"'{shown}' in row {row + 1}" : $"'{shown}' on line {Owner.LineOfRow[row]} of {Path.GetFileName(Owner.File)}";
+            }
+        }
+        return null;
+    }
 
     public bool IsMissing(int row) => _decimals is null ? _text![row] is null : _decimals[row] == MissingValue;
 

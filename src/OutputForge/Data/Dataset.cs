@@ -15,6 +15,10 @@ public sealed class Dataset : IVariableSource
         Columns = columns;
         LineOfRow = lineOfRow;
         _columns = columns.ToDictionary(c => c.Name, StringComparer.OrdinalIgnoreCase);
+        foreach (var column in columns)
+        {
+            column.Owner ??= this;
+        }
     }
 
     /// <summary>The dataset's name in the spec, e.g. "adsl".</summary>

@@ -8,6 +8,17 @@ public static class DemoSpecFiles
 {
     private const string DemoPrefix = "OutputForge.DemoSpecs.";
 
+    /// <summary>How many tables the demo study spec lists (its "tables"), read from the embedded study.json so help texts never drift from it.</summary>
+    public static int TableCount
+    {
+        get
+        {
+            using var stream = typeof(DemoSpecFiles).Assembly.GetManifestResourceStream(DemoPrefix + "study.json")!;
+            using var study = System.Text.Json.JsonDocument.Parse(stream, new System.Text.Json.JsonDocumentOptions { CommentHandling = System.Text.Json.JsonCommentHandling.Skip });
+            return study.RootElement.GetProperty("tables").GetArrayLength();
+        }
+    }
+
     /// <summary>Writes specs/schema/*.json and specs/demo/** under <paramref name="root"/>; returns the study file's path.</summary>
     public static string Write(string root)
     {

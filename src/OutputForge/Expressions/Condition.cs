@@ -100,6 +100,10 @@ public sealed class Condition
 
     private static Func<int, bool> BindComparison(IVariable variable, ComparisonOperator op, Literal literal)
     {
+        if (literal.IsText && variable.Kind != VariableKind.Date && IsoDateText.IsDate(literal.Text!))
+        {
+            return CompareWithDate(variable, op, literal);
+        }
         if (literal.IsText)
         {
             return variable.Kind switch
@@ -125,6 +129,27 @@ public sealed class Condition
         return CompareNumbers(variable, op, literal.Number!.Value);
     }
 
+    /// <summary>
+    /// A variable that is not a date column compared with an ISO date: a text column of ISO 8601 dates and date-times
+    /// compares as text (chronological for that form); a value in any other form, which would compare wrongly and
+    /// silently drop or keep its record, is refused with its place in the data.
+    /// </summary>
+    private static Func<int, bool> CompareWithDate(IVariable variable, ComparisonOperator op, Literal literal)
+    {
+        if (variable.Kind == VariableKind.Number)
+        {
+            throw new ConditionSyntaxException(
+                $"{variable.Name} holds numbers, not dates: it cannot be compared with the date '{literal.Text}'", literal.Position);
+        }
+        if (variable.FirstValueNot(IsoDateText.IsDateOrDateTime) is { } value)
+        {
+            throw new ConditionSyntaxException(
+                $"{variable.Name} is compared with the date '{literal.Text}', but {value} is not an ISO 8601 date (expected YYYY-MM-DD, or a partial date or date-time such as 2025-03 or 2025-03-01T10:00); correct the data",
+                literal.Position);
+        }
+        return CompareTexts(variable, op, literal.Text!);
+    }
+
     private static double ParseDate(IVariable variable, Literal literal)
     {
         if (!DateOnly.TryParseExact(literal.Text, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out var date))
@@ -137,6 +162,9 @@ public sealed class Condition
 
     private static Func<int, bool> CompareTexts(IVariable variable, ComparisonOperator op, string value)
     {
+        // The data's trailing blanks are dropped when read (transport padding); so are the literal's, so that
+        // 'Placebo ' and 'Placebo' are the same value on both sides.
+        value = value.TrimEnd(' ');
         return row =>
         {
             var actual = variable.GetText(row);

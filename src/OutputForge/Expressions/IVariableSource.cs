@@ -10,6 +10,11 @@ public interface IVariable
     VariableKind Kind { get; }
     /// <summary>Why the variable has its kind, where that may surprise (e.g. "'abc' on line 5"); null otherwise.</summary>
     string? KindNote => null;
+    /// <summary>
+    /// The first non-missing value that <paramref name="accept"/> refuses, described with its place in the data (e.g.
+    /// "'01MAR2025' on line 5 of adsl.csv"); null when every value is accepted.
+    /// </summary>
+    string? FirstValueNot(Func<string, bool> accept) => null;
     bool IsMissing(int row);
     /// <summary>The value as written in the data (for text comparisons); null when missing.</summary>
     string? GetText(int row);

@@ -6,7 +6,7 @@ namespace OutputForge.Layout;
 /// <summary>
 /// Turns a <see cref="TableResult"/> into the display that every renderer draws: header rows with
 /// "(N=xx)" under each column, formatted cells, footnotes (method notes, then warnings, then the
-/// spec's own), and the source line.
+/// spec's own; worded and lettered by <see cref="TableNotes"/>), and the source line.
 /// </summary>
 public static class TableLayoutBuilder
 {
@@ -19,11 +19,12 @@ public static class TableLayoutBuilder
         NumberDisplay display = NumberDisplay.Values, IReadOnlyList<ColumnGroup>? groups = null)
     {
         var shell = display == NumberDisplay.Placeholders;
+        var notes = TableNotes.Of(table);
         var columns = new List<LayoutColumn> { new("label", CellAlignment.Left) };
         columns.AddRange(table.Columns.Select(c => new LayoutColumn(c.Key, CellAlignment.Center)));
         var headers = new List<HeaderRow>
         {
-            new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(c.Label))]),
+            new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(notes.ColumnLabel(c)))]),
             new([new HeaderCell(string.Empty), .. table.Columns.Select(c => new HeaderCell(
                 c.SubjectCount is { } n ? (shell ? "(N=xx)" : string.Create(CultureInfo.InvariantCulture, $"(N={n})")) : string.Empty))]),
         };
@@ -33,7 +34,7 @@ public static class TableLayoutBuilder
         }
         var records = new List<ResultRecord>();
         var rows = new List<BodyRow>();
-        var columnLabel = table.Columns.ToDictionary(c => c.Key, c => c.Label, StringComparer.Ordinal);
+        var columnLabel = table.Columns.ToDictionary(c => c.Key, notes.ColumnLabel, StringComparer.Ordinal);
         foreach (var column in table.Columns.Where(c => c.SubjectCount is not null && !shell))
         {
             records.Add(new ResultRecord(table.TableId, "header", column.Key, StatisticNames.Denominator, column.SubjectCount,
@@ -42,6 +43,7 @@ public static class TableLayoutBuilder
         }
         foreach (var row in table.Rows)
         {
+            var rowLabel = notes.RowLabel(row);
             var cells = new List<LayoutCell>();
             foreach (var column in table.Columns)
             {
@@ -54,7 +56,12 @@ public static class TableLayoutBuilder
                 foreach (var value in cell.Values)
                 {
                     records.Add(new ResultRecord(table.TableId, row.Key, column.Key, value.Statistic, value.Value,
-                        CellText.Format(value, table), row.Label, columnLabel[column.Key], value.Method, value.NotEstimableReason));
+                        CellText.Format(value, table), rowLabel, columnLabel[column.Key], value.Method, value.NotEstimableReason)
+                    {
+                        Level = value.Level,
+                        Sided = value.Sided,
+                        Footnotes = notes.LettersOf(row, column),
+                    });
                 }
             }
             var kind = row.Kind switch
@@ -63,13 +70,13 @@ public static class TableLayoutBuilder
                 ResultRowKind.Blank => RowKind.Blank,
                 _ => RowKind.Data,
             };
-            rows.Add(new BodyRow(row.Label, row.Indent, cells, kind));
+            rows.Add(new BodyRow(rowLabel, row.Indent, cells, kind));
         }
         rows = [.. NumberAlignment.Apply(rows)];
-        var footnotes = new List<string>(table.MethodNotes);
+        var footnotes = new List<string>(notes.Footnotes);
         if (!shell)
         {
-            footnotes.AddRange(table.Warnings.Select(w => "Warning: " + w));
+            footnotes.AddRange(notes.Warnings.Select(w => "Warning: " + w));
         }
         if (rows.Any(r => r.Cells.Any(c => c.Text == CellText.NotEstimable)))
         {

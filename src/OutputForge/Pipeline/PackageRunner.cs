@@ -27,9 +27,10 @@ public static class PackageRunner
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder, package.Folders);
         log.Detail($"specs: {package.Tables.Count} table specs read in {clock.Elapsed.TotalMilliseconds:0} ms");
-        var dataFolder = request.DataFolder ?? DefaultDataFolder(package);
+        var dataFolder = PackageInputs.DataFolder(package, request.DataFolder);
         OutputPlace.CheckApart(request.OutputFolder, outputLock.Folder, dataFolder, study.Folder);
-        var selected = TableSelection.Select(study, package.Tables, request.Tables);
+        // The selection is a command-line choice: a pattern that matches no table stops the run before any data is read.
+        var selected = TableSelection.Select(package.Tables, request.Tables);
         var dataWarnings = new List<string>();
         var reading = Stopwatch.StartNew();
         var projection = request.ReadEveryColumn ? null : RunColumns.For(study, selected);
@@ -55,7 +56,12 @@ public static class PackageRunner
         var studyLine = StudyLine(study);
         var building = Stopwatch.StartNew();
         var context = new LayoutContext(templates, ColumnGroupsOf(study));
-        var workbook = request.Combined && selected.Count > 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
+        // With --tables the combined files still cover every table of the folder: the kept tables are rebuilt, and used only
+        // where they come out byte for byte as the files kept in the folder (KeptTablesForCombined).
+        var keptForCombined = request.Combined && request.Tables is not null
+            ? package.Tables.Where(t => !selected.Contains(t)).ToList()
+            : [];
+        var workbook = request.Combined && selected.Count > 0 && keptForCombined.Count == 0 && request.Renderers.Any(r => r is ExcelTableRenderer)
             ? new CombinedWorkbookBuilder(selected.Select(t => t.Id).ToList(), run.RunTime)
             : null;
         BuiltTable[] built;
@@ -69,6 +75,14 @@ public static class PackageRunner
             throw;
         }
         log.Detail($"tables: {built.Length} built in {building.Elapsed.TotalMilliseconds:0} ms on {Environment.ProcessorCount} cores");
+        var keptLaidOut = keptForCombined.Count == 0
+            ? []
+            : KeptTablesForCombined.Rebuild(keptForCombined, request.OutputFolder, run,
+                (table, keptRun) =>
+                {
+                    var kept = BuildTable(table, request, study, data, dataWarnings, inputs, keptRun, studyLine, page, context);
+                    return (kept.Table, kept.Files);
+                });
         log.Detail(CollectorFacts.Describe());
         var writing = new StageTimes();
         var manifestTables = built.Select(b => b.Manifest).ToList();
@@ -100,7 +114,7 @@ public static class PackageRunner
             {
                 if (request.Combined && laidOut.Count > 0)
                 {
-                    combined = CombinedOutputs.Render(request.Renderers, laidOut.Select(t => t.Table).ToList(), run.RunTime, workbook);
+                    combined = CombinedOutputs.Render(request.Renderers, [.. laidOut.Select(t => t.Table), .. keptLaidOut], run.RunTime, workbook);
                 }
             },
             () =>
@@ -234,23 +248,7 @@ public static class PackageRunner
         {
             files.Add((OutputFileNames.ForFigure(table.Id, picture.Name), picture.Png));
         }
-        return new BuiltTable(laidOut, result.Warnings, manifest, files, times);
-    }
-
-    private static string DefaultDataFolder(SpecPackage package)
-    {
-        var study = package.Study;
-        if (study.Data.Folder is null)
-        {
-            throw new SpecException(study.Source.Problem("/data",
-                "no data folder: give --data on the command line or data.folder in the study spec"));
-        }
-        var folder = Path.GetFullPath(Path.Combine(study.Folder, study.Data.Folder));
-        if (!package.Folders.Allows(folder))
-        {
-            throw new SpecException(study.Source.Problem("/data/folder", package.Folders.Explain(study.Data.Folder) + ", or give --data"));
-        }
-        return folder;
+        return new BuiltTable(laidOut, TableNotes.Of(result).Warnings, manifest, files, times);
     }
 
     /// <summary>The study identification of the page header: "QF217-301 (Sponsor)".</summary>

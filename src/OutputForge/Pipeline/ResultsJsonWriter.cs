@@ -99,6 +99,14 @@ public static class ResultsJsonWriter
         }
     }
 
+    private static string SidedName(Sidedness sided) => sided switch
+    {
+        Sidedness.TwoSided => "two-sided",
+        Sidedness.Lower => "lower",
+        Sidedness.Upper => "upper",
+        _ => throw new ArgumentOutOfRangeException(nameof(sided), sided, "unknown sidedness"),
+    };
+
     private static void WriteRecord(Utf8JsonWriter json, ResultRecord record)
     {
         json.WriteStartObject();
@@ -124,6 +132,23 @@ public static class ResultsJsonWriter
         if (record.Note is not null)
         {
             json.WriteString("note", record.Note);
+        }
+        if (record.Level is { } level)
+        {
+            json.WriteNumber("level", level);
+        }
+        if (record.Sided is { } sided)
+        {
+            json.WriteString("sided", SidedName(sided));
+        }
+        if (record.Footnotes.Count > 0)
+        {
+            json.WriteStartArray("footnotes");
+            foreach (var letter in record.Footnotes)
+            {
+                json.WriteStringValue(letter);
+            }
+            json.WriteEndArray();
         }
         json.WriteEndObject();
     }

@@ -28,4 +28,7 @@ public sealed record RunRequest(string SpecPath, string? DataFolder, string Outp
 
     /// <summary>Table ids or patterns to produce ("14.2.*"); null means every table of the package.</summary>
     public IReadOnlyList<string>? Tables { get; init; }
+
+    /// <summary>The options that decide what the run reads (the same ones `check` takes).</summary>
+    public PackageInputOptions Inputs => new() { AllowedFolders = AllowedFolders, DataOptions = DataOptions, Tables = Tables };
 }

@@ -4,6 +4,7 @@ namespace OutputForge.Results;
 /// One number of one table as written to results.json: where it stands (table, row and column
 /// keys, with their displayed labels), what it is (statistic), its raw value at full precision
 /// and its text as displayed. A number that could not be estimated has a null value and a note.
+/// It also says which confidence level and sidedness it comes from, and which footnotes its row and column refer to.
 /// </summary>
 public sealed record ResultRecord(
     string Table,
@@ -15,4 +16,14 @@ public sealed record ResultRecord(
     string RowLabel,
     string ColumnLabel,
     string? Method,
-    string? Note);
+    string? Note)
+{
+    /// <summary>The confidence level of an interval bound (0.95); null where none applies.</summary>
+    public double? Level { get; init; }
+
+    /// <summary>The tails a p-value or an interval covers; null where none applies.</summary>
+    public Sidedness? Sided { get; init; }
+
+    /// <summary>The letters of the footnotes its row and column refer to, as printed ("[a]").</summary>
+    public IReadOnlyList<string> Footnotes { get; init; } = [];
+}

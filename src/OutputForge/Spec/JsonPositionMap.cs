@@ -15,19 +15,48 @@ public sealed class JsonPositionMap
     {
     }
 
+    /// <summary>Keys given twice in one object, at their second place (the JSON readers would silently keep the last).</summary>
+    public IReadOnlyList<(string Pointer, int Line, int Column, int FirstLine)> DuplicateKeys => _duplicates;
+
+    private readonly List<(string Pointer, int Line, int Column, int FirstLine)> _duplicates = [];
+
     public static JsonPositionMap Build(byte[] utf8)
     {
         var map = new JsonPositionMap();
+        map.Walk(utf8, new List<string>(), out _);
+        return map;
+    }
+
+    /// <summary>
+    /// The JSON path of the place where a JSON text that does not parse fails (e.g. "$.a.b[3]" for nesting too deep), as
+    /// far as the text reads; "$" when it fails at the start.
+    /// </summary>
+    public static string FailurePath(byte[] utf8)
+    {
+        var path = new List<string>();
+        string? pendingName = null;
+        try
+        {
+            new JsonPositionMap().Walk(utf8, path, out pendingName);
+        }
+        catch (JsonException)
+        {
+        }
+        return ToJsonPath(Pointer(pendingName is null ? path : [.. path, pendingName]));
+    }
+
+    private void Walk(byte[] utf8, List<string> path, out string? pendingName)
+    {
+        var map = this;
         var lineStarts = LineStarts(utf8);
         var reader = new Utf8JsonReader(utf8, new JsonReaderOptions
         {
             CommentHandling = JsonCommentHandling.Skip,
             AllowTrailingCommas = true,
         });
-        var path = new List<string>();
         var arrayIndex = new Stack<int>();
         var inArray = new Stack<bool>();
-        string? pendingName = null;
+        pendingName = null;
         while (reader.Read())
         {
             switch (reader.TokenType)
@@ -70,7 +99,6 @@ public sealed class JsonPositionMap
                     break;
             }
         }
-        return map;
     }
 
     private static string? NextSegment(ref string? pendingName, Stack<bool> inArray, Stack<int> arrayIndex)
@@ -96,6 +124,11 @@ public sealed class JsonPositionMap
         var position = Position(offset, lineStarts, utf8);
         if (keyOnly)
         {
+            if (_positions.TryGetValue("key:" + pointer, out var first))
+            {
+                _duplicates.Add((pointer, position.Line, position.Column, first.Line));
+                return;
+            }
             _positions["key:" + pointer] = position;
         }
         else

@@ -35,6 +35,11 @@ internal static class SpecFileReader
         {
             throw new SpecException(new SpecProblem(file, null, null, "$", $"cannot read the spec file ({e.Message})") { Code = SpecProblemCode.UnreadableFile });
         }
+        if (bytes.AsSpan().StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]))
+        {
+            // A UTF-8 byte-order mark, as some editors write: accepted, as in the data files.
+            bytes = bytes[3..];
+        }
         JsonDocument document;
         try
         {
@@ -47,17 +52,27 @@ internal static class SpecFileReader
         catch (JsonException e)
         {
             var message = e.Message;
-            var cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+            // The reader's message repeats the position (0-based "LineNumber: 8 | BytePositionInLine: 2") and the path;
+            // the problem gives both once, 1-based, in its own format.
+            var cut = message.IndexOf(" LineNumber:", StringComparison.Ordinal) is > 0 and var at ? at : message.IndexOf(" Path:", StringComparison.Ordinal);
             if (cut > 0)
             {
                 message = message[..cut];
             }
             throw new SpecException(new SpecProblem(file, (int?)e.LineNumber + 1, (int?)e.BytePositionInLine + 1,
-                e.Path ?? "$", $"invalid JSON: {message.TrimEnd('.')}") { Code = SpecProblemCode.InvalidJson });
+                JsonPositionMap.FailurePath(bytes), $"invalid JSON: {Describe(bytes, message.TrimEnd('.'))}") { Code = SpecProblemCode.InvalidJson });
         }
         using (document)
         {
-            var source = new SpecSource(file, JsonPositionMap.Build(bytes));
+            var positions = JsonPositionMap.Build(bytes);
+            if (positions.DuplicateKeys.Count > 0)
+            {
+                // The readers keep the last of two equal keys without a word: a spec saying two things is refused.
+                throw new SpecException(positions.DuplicateKeys.Select(d => new SpecProblem(file, d.Line, d.Column,
+                    JsonPositionMap.ToJsonPath(d.Pointer),
+                    $"the key '{LastSegment(d.Pointer)}' is given twice in this object (first on line {d.FirstLine}); keep one") { Code = SpecProblemCode.InvalidJson }).ToList());
+            }
+            var source = new SpecSource(file, positions);
             var problems = SpecText.Problems(document.RootElement, source) is { Count: > 0 } text ? text : Validate(document.RootElement, schemaName, source);
             if (problems.Count > 0)
             {
@@ -76,6 +91,23 @@ internal static class SpecFileReader
                 throw new SpecException(source.Problem(PointerOf(e.Path), e.Message));
             }
         }
+    }
+
+    private static string LastSegment(string pointer) =>
+        pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
+
+    /// <summary>The parser's description of a syntax error, in the spec writer's terms where it is cryptic.</summary>
+    private static string Describe(byte[] bytes, string message)
+    {
+        if (message.Contains("maximum configured depth", StringComparison.OrdinalIgnoreCase))
+        {
+            return "the objects and arrays are nested more than 64 levels deep";
+        }
+        if (bytes.Length >= 2 && ((bytes[0] == 0xFF && bytes[1] == 0xFE) || (bytes[0] == 0xFE && bytes[1] == 0xFF)))
+        {
+            return "the file is UTF-16 encoded (it starts with a UTF-16 byte-order mark); save it as UTF-8";
+        }
+        return message;
     }
 
     /// <summary>"/statistics/test" for the reader's "$.statistics.test" (and "/tables/0" for "$.tables[0]").</summary>
@@ -165,6 +197,8 @@ internal static class SpecFileReader
                     with { Key = missing.Count == 1 ? missing[0] : null, Expected = missing };
             case "type":
                 return source.Problem(SpecProblemCode.WrongType, pointer, $"expected {Describe(keywordNode)}: {message}");
+            case "pattern" when evaluationPath.EndsWith("/propertyNames", StringComparison.Ordinal):
+                return KeyPatternProblem(pointer, keywordNode?.GetValue<string>(), source);
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal) && pointer.EndsWith("/file", StringComparison.Ordinal):
                 return source.Problem(pointer, "expected an XPT file name in the data folder (no folders), ending in .xpt: only an XPT transport file holds several datasets (members)");
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal) && pointer.EndsWith("/member", StringComparison.Ordinal):
@@ -174,6 +208,22 @@ internal static class SpecFileReader
             default:
                 return source.Problem(pointer, message);
         }
+    }
+
+    /// <summary>The schemas' one pattern for names chosen by the spec's author (populations, datasets).</summary>
+    private const string NamePattern = "^[a-z][a-z0-9_]*$";
+
+    /// <summary>A key that is a name of the author's choosing but not of the allowed form: what the form is, and the key that would do.</summary>
+    private static SpecProblem KeyPatternProblem(string pointer, string? pattern, SpecSource source)
+    {
+        var key = pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
+        if (pattern != NamePattern)
+        {
+            return source.KeyProblem(pointer, $"key '{key}' does not have the required form (the pattern {pattern})");
+        }
+        var lower = key.ToLowerInvariant();
+        var suggestion = System.Text.RegularExpressions.Regex.IsMatch(lower, NamePattern) ? $" (did you mean '{lower}'?)" : string.Empty;
+        return source.KeyProblem(pointer, $"key '{key}' must start with a lower-case letter and hold only lower-case letters, digits and '_'{suggestion}");
     }
 
     /// <summary>

@@ -12,6 +12,9 @@ public sealed class StudySpec
     public List<string> Tables { get; init; } = [];
     public PageSpec? Page { get; init; }
 
+    /// <summary>What Fisher's exact test reports for a table beyond exact enumeration (absent: the defaults of <see cref="ExactTestSettings"/>).</summary>
+    public ExactTestSettings? ExactTests { get; init; }
+
     [JsonIgnore]
     public SpecSource Source { get; set; } = null!;
 

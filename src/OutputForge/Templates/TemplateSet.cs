@@ -161,7 +161,7 @@ public sealed class TemplateSet : ITemplateLoader
 
     string ITemplateLoader.Load(TemplateContext context, SourceSpan callerSpan, string templatePath) => _sources[templatePath].Text;
 
-    ValueTask<string> ITemplateLoader.LoadAsync(TemplateContext context, SourceSpan callerSpan, string templatePath) =>
+    ValueTask<string?> ITemplateLoader.LoadAsync(TemplateContext context, SourceSpan callerSpan, string templatePath) =>
         new(_sources[templatePath].Text);
 
     private static string ReadStudyTemplate(string file, SpecFolderPolicy? folders)

@@ -15,6 +15,7 @@ public static class TemplateValues
 {
     public static ScriptObject For(StudySpec study, TableSpec spec, TableResult result, TableDocument document, RunFacts run)
     {
+        var notes = TableNotes.Of(result);
         var values = new ScriptObject
         {
             ["study"] = Object(
@@ -28,14 +29,14 @@ public static class TemplateValues
                 ("kind", spec.Kind),
                 ("titles", Array(result.Titles)),
                 ("spec_file", result.Provenance.SpecFile.Replace('\\', '/')),
-                ("method_notes", Array(result.MethodNotes)),
-                ("warnings", Array(result.Warnings)),
+                ("method_notes", Array(notes.Footnotes)),
+                ("warnings", Array(notes.Warnings)),
                 ("spec_footnotes", Array(result.Footnotes)),
                 ("data_files", DataFiles(study, result, run))),
             ["population"] = Object(
                 ("key", spec.Population),
                 ("label", result.Population),
-                ("arms", Arms(result))),
+                ("arms", Arms(result, notes))),
             ["run"] = Object(
                 ("time", run.RunTime.UtcDateTime.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture)),
                 ("date", run.RunTime.UtcDateTime.ToString("yyyy-MM-dd", CultureInfo.InvariantCulture)),
@@ -47,14 +48,14 @@ public static class TemplateValues
         return values;
     }
 
-    private static ScriptArray Arms(TableResult result)
+    private static ScriptArray Arms(TableResult result, TableNotes notes)
     {
         var arms = new ScriptArray();
         foreach (var column in result.Columns)
         {
             arms.Add(Object(
                 ("key", column.Key),
-                ("label", column.Label),
+                ("label", notes.ColumnLabel(column)),
                 ("n", column.SubjectCount is { } n ? n : null)));
         }
         return arms;

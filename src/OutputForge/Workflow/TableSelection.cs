@@ -9,7 +9,8 @@ namespace OutputForge.Workflow;
 /// </summary>
 public static class TableSelection
 {
-    public static IReadOnlyList<TableSpec> Select(StudySpec study, IReadOnlyList<TableSpec> tables, IReadOnlyList<string>? patterns)
+    /// <exception cref="TableSelectionException">A pattern matches no table id.</exception>
+    public static IReadOnlyList<TableSpec> Select(IReadOnlyList<TableSpec> tables, IReadOnlyList<string>? patterns)
     {
         if (patterns is null || patterns.Count == 0)
         {
@@ -19,7 +20,7 @@ public static class TableSelection
         var unmatched = expanded.Where(p => !tables.Any(t => Matches(t.Id, p))).ToList();
         if (unmatched.Count > 0)
         {
-            throw study.Source.Error("/tables", $"--tables: no table id matches {string.Join(", ", unmatched.Select(u => $"'{u}'"))} (ids: {string.Join(", ", tables.Select(t => t.Id))})");
+            throw new TableSelectionException($"--tables: no table id matches {string.Join(", ", unmatched.Select(u => $"'{u}'"))} (ids: {string.Join(", ", tables.Select(t => t.Id))})");
         }
         return tables.Where(t => expanded.Any(p => Matches(t.Id, p))).ToList();
     }

@@ -66,7 +66,7 @@ public sealed class AdverseEventAnalysisTests
         // Abdominal pain: active 0 of 4, placebo 1 of 2. With one subject having the event, the tables are
         // "on active" (probability 4/6) or "on placebo" (2/6, observed): two-sided p = 2/6 (hand computation).
         Assert.Equal(2.0 / 6.0, SummaryStudy.Value(result, "soc:Gastrointestinal disorders/pt:Abdominal pain", "p-value-active", "pValue")!.Value, 12);
-        Assert.Contains(result.MethodNotes, n => n.StartsWith("[a] Two-sided p-value from Fisher's exact test", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.StartsWith("[a] Two-sided p-value from Fisher's exact test", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -52,7 +52,7 @@ public sealed class ExactOddsRatioResponderTests
         Assert.Equal(4.91837380038, Value(result, "odds-ratio", "estimate").Value!.Value, 4.91837380038 * 1e-8);
         Assert.Equal(0.218049513241, Value(result, "odds-ratio-ci", "lower").Value!.Value, 0.218049513241 * 1e-8);
         Assert.Equal(391.992373383, Value(result, "odds-ratio-ci", "upper").Value!.Value, 391.992373383 * 1e-8);
-        Assert.Contains(result.MethodNotes, n => n.Contains("exact conditional (Cornfield)"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.Contains("exact conditional (Cornfield)"));
     }
 
     [Fact]

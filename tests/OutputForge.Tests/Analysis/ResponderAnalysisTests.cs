@@ -43,7 +43,7 @@ public sealed class ResponderAnalysisTests
         Assert.Equal("Fisher's exact test", pValue.Method);
         // Table [[2, 0], [1, 1]]: both possible tables have probability 1/2, so the two-sided p is 1 (hand computation).
         Assert.Equal(1.0, pValue.Value!.Value, 12);
-        Assert.Contains(result.MethodNotes, n => n.Contains("Fisher's exact test was used for every comparison"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.Contains("Fisher's exact test was used for every comparison"));
     }
 
     [Fact]
@@ -62,7 +62,7 @@ public sealed class ResponderAnalysisTests
         Assert.Equal(1, Value(observed, "responders", "active", "N"));
         Assert.Equal(100, Value(observed, "responders", "active", "percent"));
         Assert.Equal(1, Value(observed, "evaluated", "active", "n"));
-        Assert.Contains(observed.MethodNotes, n => n.Contains("are excluded"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(observed).Footnotes, n => n.Contains("are excluded"));
     }
 
     [Theory]
@@ -81,8 +81,8 @@ public sealed class ResponderAnalysisTests
         Assert.Equal(method, pValue.Method);
         Assert.Equal(p, pValue.Value!.Value, 12);
         Assert.Equal(statistic, cell.Values.Single(v => v.Statistic == StatisticNames.TestStatistic).Value!.Value, 12);
-        Assert.Contains(result.MethodNotes, n => n.Contains(choice == "yates" ? "Yates' continuity correction, unstratified" : "likelihood-ratio chi-square test, unstratified"));
-        Assert.Contains(result.Warnings, w => w.Contains("chi-square approximation may be poor"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.Contains(choice == "yates" ? "Yates' continuity correction, unstratified" : "likelihood-ratio chi-square test, unstratified"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("chi-square approximation may be poor"));
     }
 
     [Fact]
@@ -91,7 +91,7 @@ public sealed class ResponderAnalysisTests
         using var study = new MiniStudy(table: MiniStudy.TableJson.Replace("\"kind\": \"responders\",",
             "\"kind\": \"responders\", \"statistics\": { \"test\": \"chi-square\" },"));
         var result = Analyze(study);
-        Assert.Contains(result.Warnings, w => w.Contains("expected cell counts are below 5") && w.Contains("chi-square approximation may be poor"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("expected cell counts are below 5") && w.Contains("chi-square approximation may be poor"));
     }
 
     [Fact]
@@ -100,6 +100,6 @@ public sealed class ResponderAnalysisTests
         using var study = new MiniStudy(adsl: MiniStudy.Adsl + "T1,T1-006,,,Y,50\n");
         var result = Analyze(study);
         Assert.Equal(4, result.Columns.Sum(c => c.SubjectCount));
-        Assert.Contains(result.Warnings, w => w.Contains("1 subject of the population with no value of TRT01P is not counted"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("1 subject of the population with no value of TRT01P is not counted"));
     }
 }

@@ -84,11 +84,11 @@ public sealed class StratifiedResponderAnalysisTests
         // Warnings reach the run log and, through the layout, the footnotes ("Warning: ...").
         foreach (var text in expected)
         {
-            Assert.Contains(text, result.Warnings);
+            Assert.Contains(text, OutputForge.Layout.TableNotes.Of(result).Warnings);
         }
-        Assert.Contains(result.MethodNotes, n => n.StartsWith("[d] Mantel-Haenszel common difference", StringComparison.Ordinal) && n.Contains("Sato"));
-        Assert.Contains(result.MethodNotes, n => n.StartsWith("Strata: each combination of STRAT1R / STRAT2R values (ADSL)", StringComparison.Ordinal));
-        Assert.Contains(result.Warnings, w => w.Contains("odds ratio", StringComparison.Ordinal) && w.StartsWith("NE (not estimable)", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.StartsWith("[d] Mantel-Haenszel common difference", StringComparison.Ordinal) && n.Contains("Sato"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.StartsWith("Strata: each combination of STRAT1R / STRAT2R values (ADSL)", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("odds ratio", StringComparison.Ordinal) && w.StartsWith("NE (not estimable)", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -111,8 +111,8 @@ public sealed class StratifiedResponderAnalysisTests
         Assert.Equal(4, Value(result, "relative-risk", "estimate").Value!.Value, 12);
         Assert.Equal("Katz log", Value(result, "relative-risk", "estimate").Method);
         Assert.NotNull(Value(result, "odds-ratio", "estimate").NotEstimableReason);
-        Assert.Contains(result.MethodNotes, n => n.StartsWith("[d] Relative risk", StringComparison.Ordinal));
-        Assert.Contains(result.MethodNotes, n => n.StartsWith("[e] Odds ratio", StringComparison.Ordinal) && n.Contains("Woolf"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.StartsWith("[d] Relative risk", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.StartsWith("[e] Odds ratio", StringComparison.Ordinal) && n.Contains("Woolf"));
     }
 
     [Fact]
@@ -123,7 +123,7 @@ public sealed class StratifiedResponderAnalysisTests
         Assert.Equal(1, result.Rows.Single(r => r.Key == "derived").Cells.Single(c => c.Column == "active").Values[0].Value);
         Assert.Equal(3, result.Rows.Single(r => r.Key == "evaluated").Cells.Single(c => c.Column == "placebo").Values[0].Value);
         Assert.Equal(3, result.Rows.Single(r => r.Key == "responders").Cells.Single(c => c.Column == "placebo").Values.Single(v => v.Statistic == "N").Value);
-        Assert.Contains(result.MethodNotes, n => n.Contains("observed cases") && n.Contains("DTYPE not blank") && n.Contains("subjects without a record are left out"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.Contains("observed cases") && n.Contains("DTYPE not blank") && n.Contains("subjects without a record are left out"));
     }
 
     [Fact]
@@ -135,7 +135,7 @@ public sealed class StratifiedResponderAnalysisTests
         var b = Analyze(excluded);
         Assert.Equal(Value(a, "stratified-difference", "estimate").Value, Value(b, "stratified-difference", "estimate").Value);
         Assert.DoesNotContain(b.Rows, r => r.Key == "derived");
-        Assert.Contains(b.MethodNotes, n => n.Contains("Subjects with no assessment are excluded."));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(b).Footnotes, n => n.Contains("Subjects with no assessment are excluded."));
     }
 
     [Fact]
@@ -148,8 +148,8 @@ public sealed class StratifiedResponderAnalysisTests
         var result = Analyze(study);
         Assert.Equal("no stratum has subjects in both groups", Value(result, "stratified-difference", "estimate").NotEstimableReason);
         Assert.Equal("no stratum has subjects in both groups", Value(result, "cmh-p-value", "pValue").NotEstimableReason);
-        Assert.Contains(result.Warnings, w => w.Contains("stratum P / X", StringComparison.Ordinal) && w.Contains("no subjects of Active"));
-        Assert.Contains(result.Warnings, w => w.StartsWith("NE (not estimable) in \"CMH p-value [e]\"", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("stratum P / X", StringComparison.Ordinal) && w.Contains("no subjects of Active"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.StartsWith("NE (not estimable) in \"CMH p-value [e]\"", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -159,6 +159,6 @@ public sealed class StratifiedResponderAnalysisTests
         var result = Analyze(study);
         // sum (a - E) = 1 and sum V = 0.5 (see above): (1 - 0.5)^2 / 0.5 = 0.5, hand computation.
         Assert.Equal(0.5, Value(result, "cmh-p-value", "statistic").Value!.Value, 12);
-        Assert.Contains(result.MethodNotes, n => n.StartsWith("[e] ", StringComparison.Ordinal) && n.Contains("with continuity correction"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.StartsWith("[e] ", StringComparison.Ordinal) && n.Contains("with continuity correction"));
     }
 }

@@ -253,7 +253,7 @@ public static class BadInputCases
         yield return A("header only", AdslHeader, "ADSL has a header but no subjects");
         yield return A("duplicate column names", "STUDYID,USUBJID,TRT01P,TRT01PN,ITTFL,ITTFL\nT1,T1-001,Placebo,0,Y,Y\n", "line 1", "variable ITTFL", "appears twice");
         yield return A("empty column name", "STUDYID,,TRT01P\nT1,x,y\n", "line 1", "column 2 of the header has no variable name");
-        yield return new BadInputCase("text in a numeric variable", ["t1.json", "$.subset", "AGE holds text ('abc' on line 3 is not a number)"])
+        yield return new BadInputCase("text in a numeric variable", ["t1.json", "$.subset", "AGE holds text ('abc' on line 3 of adsl.csv is not a number)"])
         {
             Table = [("\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"AGE >= 18\",")],
             Adsl = Utf8(Adsl.Replace("T1,T1-002,Placebo,0,Y,51", "T1,T1-002,Placebo,0,Y,abc")),
@@ -278,6 +278,33 @@ public static class BadInputCases
         {
             Adeff = Utf8(Adeff.Replace("PARAMCD", "PARAM")),
         };
+
+        // data integrity: values that would silently change the numbers, and how spec files are read
+        const string Dates = "STUDYID,USUBJID,TRT01P,TRT01PN,ITTFL,AGE,TRTSDT\n";
+        const string DateSubset = "\"kind\": \"responders\", \"subset\": \"TRTSDT >= '2025-01-01'\",";
+        yield return new BadInputCase("date not in ISO form in a compared column", ["t1.json", "$.subset", "'01MAR2025' on line 3 of adsl.csv is not an ISO 8601 date (expected YYYY-MM-DD"])
+        {
+            Table = [("\"kind\": \"responders\",", DateSubset)],
+            Adsl = Utf8(Dates + "T1,T1-001,Placebo,0,Y,40,2025-02-01\nT1,T1-002,Placebo,0,Y,51,01MAR2025\nT1,T1-003,Active,1,Y,38,2025-03-02\nT1,T1-004,Active,1,Y,66,2025-03-03\n"),
+        };
+        yield return T("number column compared with a date", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"subset\": \"AGE < '2025-01-01'\",", "$.subset", "AGE holds numbers, not dates");
+        yield return A("subject id with a trailing blank", Adsl + "T1,T1-001 ,Placebo,0,Y,40\n", "line 7", "subject T1-001 has a second ADSL row (first on line 2)");
+        yield return E("BDS subject id with a trailing blank, not in ADSL", Adeff + "T1,T1-009 ,RESP,Week 8,Y,Y\n", "line 6", "subject T1-009 is not in ADSL");
+        yield return A("decimal comma in ADSL", Adsl.Replace("T1,T1-002,Placebo,0,Y,51", "T1,T1-002,Placebo,0,Y,\"51,5\""), "line 3", "variable AGE", "'51,5' is not a number: write numbers with a decimal point");
+        yield return E("decimal comma in BDS", Adeff.Replace("ANL01FL\n", "ANL01FL,AVAL\n").Replace(",Y\n", ",Y,1.5\n").Replace("T1,T1-003,RESP,Week 4,Y,Y,1.5", "T1,T1-003,RESP,Week 4,Y,Y,\"1,5\""), "line 4", "variable AVAL", "'1,5' is not a number");
+        yield return A("thousands separator", Adsl.Replace("T1,T1-002,Placebo,0,Y,51", "T1,T1-002,Placebo,0,Y,\"1,051\""), "line 3", "variable AGE", "'1,051' is not a number");
+        yield return A("NaN in a numeric variable", Adsl.Replace("T1,T1-003,Active,1,Y,38", "T1,T1-003,Active,1,Y,NaN"), "line 4", "variable AGE", "'NaN' is not a number (leave a missing value empty");
+        yield return A("infinity in a numeric variable", Adsl.Replace("T1,T1-003,Active,1,Y,38", "T1,T1-003,Active,1,Y,-Infinity"), "line 4", "variable AGE", "'-Infinity' is infinite");
+        yield return A("overflowing number", Adsl.Replace("T1,T1-004,Active,1,Y,66", "T1,T1-004,Active,1,Y,1e400"), "line 5", "variable AGE", "'1e400' overflows");
+        yield return A("number beyond 1e100", Adsl.Replace("T1,T1-004,Active,1,Y,66", "T1,T1-004,Active,1,Y,1e300"), "line 5", "variable AGE", "'1e300' is beyond 1e100 in magnitude");
+        yield return T("key given twice", "\"kind\": \"responders\",", "\"kind\": \"responders\", \"population\": \"itt\",", "$.population", "the key 'population' is given twice in this object (first on line 4)");
+        yield return S("nested key given twice", "\"where\": \"ITTFL = 'Y'\"", "\"where\": \"ITTFL = 'Y'\", \"where\": \"ITTFL = 'N'\"", "$.populations.itt.where", "the key 'where' is given twice");
+        yield return new BadInputCase("nesting deeper than 64 levels", ["t1.json", "$.title[0][0]", "nested more than 64 levels deep"])
+        {
+            TableText = "{ \"id\": \"1\", \"title\": " + new string('[', 70) + new string(']', 70) + " }",
+        };
+        yield return new BadInputCase("empty table selection", ["--tables: the selection is empty"]) { ExtraArguments = ["--tables", ""] };
+        yield return new BadInputCase("table selection of commas only", ["--tables: the selection is empty"]) { ExtraArguments = ["--tables", ",,"] };
 
         // files and folders
         yield return S("table spec outside the spec folder", "\"t1.json\"", "\"../t1.json\"", "$.tables[0]", "outside the spec's folder", "--allow-folder");

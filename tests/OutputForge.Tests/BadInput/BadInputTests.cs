@@ -23,7 +23,7 @@ public sealed class BadInputTests
     public void The_battery_has_at_least_a_hundred_cases() => Assert.True(BadInputCases.All().Count() >= 100);
 
     private static Dictionary<string, string> Snapshot(string folder) =>
-        Directory.GetFiles(folder).ToDictionary(Path.GetFileName, f => Convert.ToHexString(SHA256.HashData(File.ReadAllBytes(f))))!;
+        Directory.GetFiles(folder).ToDictionary(f => Path.GetFileName(f), f => Convert.ToHexString(SHA256.HashData(File.ReadAllBytes(f))));
 
     [Theory]
     [MemberData(nameof(Cases))]

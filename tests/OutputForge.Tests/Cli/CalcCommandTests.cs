@@ -142,10 +142,10 @@ public sealed class CalcCommandTests
     [InlineData("2 x 2 tables only", "table", "--counts", "1,2,3;4,5,6", "--test", "yates")]
     [InlineData("same shape", "stratified", "--counts", "1,2;3,4|1,2,3;4,5,6")]
     [InlineData("--level", "proportion", "--events", "1", "--n", "3", "--method", "wilson", "--level", "95")]
-    public void Bad_arguments_get_one_line_and_exit_code_2(string message, params string[] args)
+    public void Bad_arguments_are_usage_errors_with_one_line_and_exit_code_1(string message, params string[] args)
     {
         var (code, output, error) = Run(args);
-        Assert.Equal(ExitCodes.InputError, code);
+        Assert.Equal(ExitCodes.Usage, code);
         Assert.Empty(output);
         var line = Assert.Single(error.Split('\n', StringSplitOptions.RemoveEmptyEntries));
         Assert.Contains(message, line);

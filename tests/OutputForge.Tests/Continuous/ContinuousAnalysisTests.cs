@@ -71,7 +71,7 @@ public sealed class ContinuousAnalysisTests
         var result = Analyze(study);
         Assert.Null(Value(result, "week-4-lsmean", "placebo", "estimate"));
         Assert.Null(Value(result, "week-4-lsdiff", "active", "estimate"));
-        Assert.Contains(result.Warnings, w => w.Contains("the ANCOVA could not be fitted") && w.Contains("rank deficient"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("the ANCOVA could not be fitted") && w.Contains("rank deficient"));
     }
 
     [Fact]
@@ -81,7 +81,7 @@ public sealed class ContinuousAnalysisTests
         using var study = new MiniStudy(adsl: Adsl, adeff: adeff, table: Table("""{ "covariates": ["BASE"] }"""));
         var result = Analyze(study);
         Assert.Null(Value(result, "week-4-lsmean", "active", "estimate"));
-        Assert.Contains(result.Warnings, w => w.Contains("the ANCOVA could not be fitted") && w.Contains("fewer than two arms"));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("the ANCOVA could not be fitted") && w.Contains("fewer than two arms"));
     }
 
     [Fact]

@@ -1,3 +1,4 @@
+using OutputForge.Layout;
 using OutputForge.Tests.Support;
 
 namespace OutputForge.Tests.Demographics;
@@ -57,7 +58,7 @@ public sealed class DemographicsAnalysisTests
         Assert.Equal("5 (71.4)", SummaryStudy.Displayed(result, "SEX/F", "total"));
         // scipy 1.10.1: stats.chi2_contingency([[2, 3], [1, 1]], correction=False) = 0.05833333333333332, p 0.809149834631498.
         Assert.Equal(0.809149834631498, SummaryStudy.Value(result, "SEX", "p-value", "pValue")!.Value, 12);
-        Assert.Contains(result.Warnings, w => w.StartsWith("Sex: 4 of 4 expected counts are below 5", StringComparison.Ordinal));
+        Assert.Contains(TableNotes.Of(result).Warnings, w => w.StartsWith("Sex: 4 of 4 expected counts are below 5", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -97,8 +98,8 @@ public sealed class DemographicsAnalysisTests
         using var study = new SummaryStudy(Table.Replace("\"label\": \"Sex\",", "\"label\": \"Sex\", \"levels\": [ { \"value\": \"M\", \"label\": \"Male\" }, { \"value\": \"U\" } ],"));
         var result = study.Analyze();
         Assert.Equal(["SEX/M", "SEX/U", "SEX/F"], result.Rows.Where(r => r.Key.StartsWith("SEX/", StringComparison.Ordinal)).Select(r => r.Key));
-        Assert.Contains(result.Warnings, w => w.Contains("SEX value 'F' is not in the spec's levels"));
-        Assert.Contains(result.Warnings, w => w.Contains("SEX level 'U' has no subjects"));
+        Assert.Contains(TableNotes.Of(result).Warnings, w => w.Contains("SEX value 'F' is not in the spec's levels"));
+        Assert.Contains(TableNotes.Of(result).Warnings, w => w.Contains("SEX level 'U' has no subjects"));
     }
 
     [Fact]

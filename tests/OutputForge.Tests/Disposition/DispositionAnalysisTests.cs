@@ -1,3 +1,5 @@
+using OutputForge.Layout;
+using OutputForge.Results;
 using OutputForge.Tests.Support;
 
 namespace OutputForge.Tests.Disposition;
@@ -41,8 +43,13 @@ public sealed class DispositionAnalysisTests
         // Status [[2, 3], [2, 1]]: hypergeometric probabilities 5/70, 30/70, 30/70, 5/70 for 1..4 completers on
         // placebo; the observed 30/70 is the largest, so the two-sided p is 1 (hand computation).
         Assert.Equal(1.0, SummaryStudy.Value(result, "EOSSTT", "p-value", "pValue")!.Value, 12);
-        Assert.Contains(result.Warnings, w => w.StartsWith("Reason: 4 of 4 expected counts are below 5", StringComparison.Ordinal));
-        Assert.Contains(result.MethodNotes, n => n.Contains("Fisher's exact test for Status") && n.Contains("Pearson's chi-square test for Reason"));
+        var notes = TableNotes.Of(result);
+        Assert.Contains(notes.Warnings, w => w.StartsWith("Reason: 4 of 4 expected counts are below 5", StringComparison.Ordinal));
+        Assert.Contains(notes.Footnotes, n => n.StartsWith("[a] ", StringComparison.Ordinal)
+            && n.Contains("Fisher's exact test for Status") && n.Contains("Pearson's chi-square test for Reason"));
+        // The warning is data: its kind, what it is about and its numbers (Reason's 2 x 2 table, every expected count below 5).
+        var small = Assert.Single(result.Notes, n => n.Kind == NoteKind.SmallExpectedCounts);
+        Assert.Equal(("Reason", 4.0, 4.0), (small.Subject.What, small.Number("below"), small.Number("cells")));
     }
 
     [Fact]

@@ -9,7 +9,7 @@ namespace OutputForge.Tests.EndToEnd;
 public sealed class KilledRunTests
 {
     private static Dictionary<string, string> Snapshot(string folder) =>
-        Directory.GetFiles(folder).ToDictionary(Path.GetFileName, f => Convert.ToHexString(SHA256.HashData(File.ReadAllBytes(f))))!;
+        Directory.GetFiles(folder).ToDictionary(f => Path.GetFileName(f), f => Convert.ToHexString(SHA256.HashData(File.ReadAllBytes(f))));
 
     [Fact]
     public void Killing_a_run_while_it_writes_leaves_the_old_outputs_intact()

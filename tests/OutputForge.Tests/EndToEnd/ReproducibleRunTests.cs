@@ -15,7 +15,7 @@ public sealed class ReproducibleRunTests
         // manifest.json records the command line, which names each run's own output folder.
         return Directory.GetFiles(Path.Combine(folder, "output"))
             .Where(f => Path.GetFileName(f) != "manifest.json")
-            .ToDictionary(Path.GetFileName, f => Convert.ToHexString(SHA256.HashData(File.ReadAllBytes(f))))!;
+            .ToDictionary(f => Path.GetFileName(f), f => Convert.ToHexString(SHA256.HashData(File.ReadAllBytes(f))));
     }
 
     [Fact]

@@ -9,7 +9,7 @@ public sealed class RegularFileTests
     private static Exception Refuse(string problem) => new InvalidDataException(problem);
 
     [Fact]
-    public void A_named_pipe_is_refused_without_waiting_for_a_writer()
+    public async Task A_named_pipe_is_refused_without_waiting_for_a_writer()
     {
         if (OperatingSystem.IsWindows())
         {
@@ -22,8 +22,8 @@ public sealed class RegularFileTests
             mkfifo.WaitForExit();
         }
         var read = Task.Run(() => RegularFile.ReadAllBytes(pipe, 1 << 20, "allowed", Refuse));
-        Assert.True(Task.WhenAny(read, Task.Delay(TimeSpan.FromSeconds(20))).Result == read, "reading a named pipe hung");
-        var error = Assert.Throws<InvalidDataException>(() => read.GetAwaiter().GetResult());
+        Assert.True(await Task.WhenAny(read, Task.Delay(TimeSpan.FromSeconds(20))) == read, "reading a named pipe hung");
+        var error = await Assert.ThrowsAsync<InvalidDataException>(() => read);
         Assert.Contains("a named pipe (FIFO), not a regular file", error.Message);
     }
 

@@ -12,8 +12,10 @@ namespace OutputForge.Tests.Properties;
 /// <summary>
 /// The reader's typed columns (numbers and dates held without their text when it can be rebuilt) give exactly
 /// what the plain rule gives: a column is numeric when every non-missing value parses as an invariant-culture
-/// finite number, a date when every non-missing value is YYYY-MM-DD, text otherwise; every value's text reads
-/// back as written and every number equals double.Parse of the text, bit for bit.
+/// finite number of magnitude at most 1e100, a date when every non-missing value is YYYY-MM-DD, text otherwise; a
+/// column whose every value parses as a number but some are not finite or beyond 1e100 is an error at the first such
+/// line; every value's text reads back as written, without trailing blanks, and every number equals double.Parse of
+/// the text, bit for bit.
 /// </summary>
 public sealed class CsvTypingEquivalenceProperties : IDisposable
 {
@@ -57,13 +59,21 @@ public sealed class CsvTypingEquivalenceProperties : IDisposable
             }
             var path = _folder.File(Guid.NewGuid().ToString("N") + ".csv");
             File.WriteAllBytes(path, Encoding.UTF8.GetBytes(text.ToString()));
+            // "." alone is missing, as an empty field; trailing blanks are dropped, and blanks only are missing.
+            var written = columns.Select(c => c.Select(v => v == "." ? "" : v.TrimEnd(' ')).Select(v => v.Length == 0 ? null : v).ToArray()).ToArray();
+            if (written.Select(FirstUnusableRow).Where(r => r >= 0).DefaultIfEmpty(-1).Min() is var unusable && unusable >= 0)
+            {
+                var error = Assert.Throws<DataException>(() => CsvDatasetReader.Read("x", path));
+                Assert.Equal(unusable + 2, error.Line);
+                return;
+            }
             var data = CsvDatasetReader.Read("x", path);
             // Rows of three empty fields are records too (the header has three columns).
             Assert.Equal(rows, data.RowCount);
             for (var c = 0; c < 3; c++)
             {
                 var column = data.Columns[c];
-                var values = columns[c].Select(v => v.Length == 0 || v == "." ? null : v).ToArray(); // "." alone is missing, as an empty field
+                var values = written[c];
                 Assert.Equal(PlainKind(values), column.Kind);
                 for (var r = 0; r < rows; r++)
                 {
@@ -78,12 +88,26 @@ public sealed class CsvTypingEquivalenceProperties : IDisposable
         });
     }
 
+    private static bool Usable(double number) => double.IsFinite(number) && Math.Abs(number) <= 1e100;
+
+    /// <summary>
+    /// In a column whose every value parses as a number, the first row holding one that is not finite or beyond 1e100
+    /// (docs/conditions.md, "Types"); -1 when there is none or the column holds other text.
+    /// </summary>
+    private static int FirstUnusableRow(string?[] values)
+    {
+        var parsed = values.Select(v => v is null ? (Parsed: true, Number: 0.0)
+            : (Parsed: double.TryParse(v, NumberStyles.Float, CultureInfo.InvariantCulture, out var d), Number: d)).ToList();
+        if (!parsed.All(p => p.Parsed)) return -1;
+        return parsed.FindIndex(p => !Usable(p.Number));
+    }
+
     /// <summary>The typing rule stated plainly, value by value (docs/conditions.md, "Types").</summary>
     private static VariableKind PlainKind(string?[] values)
     {
         var present = values.OfType<string>().ToList();
         if (present.Count == 0) return VariableKind.Text;
-        if (present.All(v => double.TryParse(v, NumberStyles.Float, CultureInfo.InvariantCulture, out var d) && double.IsFinite(d)))
+        if (present.All(v => double.TryParse(v, NumberStyles.Float, CultureInfo.InvariantCulture, out var d) && Usable(d)))
             return VariableKind.Number;
         if (present.All(v => v.Length == 10 && DateOnly.TryParseExact(v, "yyyy-MM-dd", CultureInfo.InvariantCulture, DateTimeStyles.None, out _)))
             return VariableKind.Date;

@@ -6,7 +6,7 @@ namespace OutputForge.Tests.Snapshots;
 /// Snapshots of every output of the demo package, found in the output folder (so a new table
 /// kind added to the demo is covered as soon as its snapshots are approved): the text preview
 /// (the layout as normalized text), a projection of each .docx and each .xlsx, the combined ones
-/// included. The demo runs at a fixed --timestamp so the snapshots are stable.
+/// included, and results.json (<see cref="ResultsJsonProjection"/>). The demo runs at a fixed --timestamp so the snapshots are stable.
 /// To approve changes: OUTPUTFORGE_APPROVE=1 dotnet test --filter DemoSnapshotTests, then review git diff.
 /// </summary>
 public sealed class DemoSnapshotTests : IClassFixture<DemoSnapshotTests.DemoPackage>
@@ -35,6 +35,13 @@ public sealed class DemoSnapshotTests : IClassFixture<DemoSnapshotTests.DemoPack
     public DemoSnapshotTests(DemoPackage demo) => _demo = demo;
 
     public static TheoryData<string> Formats => new() { "txt", "docx", "xlsx" };
+
+    [Fact]
+    public void Results_json_matches_its_approved_snapshot()
+    {
+        var failure = SnapshotFile.Compare("results.json", ResultsJsonProjection.Of(Path.Combine(_demo.Output, "results.json")));
+        Assert.True(failure is null, failure);
+    }
 
     [Theory]
     [MemberData(nameof(Formats))]

@@ -26,7 +26,7 @@ public sealed class SubgroupEdgeCaseTests
         var effect = Value(result, "region1-south", "active-vs-placebo", "estimate");
         Assert.Null(effect.Value);
         Assert.Contains("fewer than the minimum of 5", effect.NotEstimableReason);
-        Assert.Contains(result.Warnings, w => w.StartsWith("REGION1 South, Active vs Placebo: difference not estimated: Active has 3 subjects and Placebo has 3 subjects, fewer than the minimum of 5", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.StartsWith("REGION1 South, Active vs Placebo: difference not estimated: Active has 3 subjects and Placebo has 3 subjects, fewer than the minimum of 5", StringComparison.Ordinal));
         Assert.NotNull(Value(result, "region1-north", "active-vs-placebo", "estimate").Value);
     }
 
@@ -40,7 +40,7 @@ public sealed class SubgroupEdgeCaseTests
         var p = Value(result, "region1-interaction", "active-vs-placebo", "pValue");
         Assert.Null(p.Value);
         Assert.Contains("quasi-complete separation", p.NotEstimableReason);
-        Assert.Contains(result.Warnings, w => w.Contains("REGION1 interaction, Active vs Placebo: no p-value", StringComparison.Ordinal)
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("REGION1 interaction, Active vs Placebo: no p-value", StringComparison.Ordinal)
             && w.Contains("separation", StringComparison.Ordinal));
     }
 
@@ -60,7 +60,7 @@ public sealed class SubgroupEdgeCaseTests
         var cells = Balanced.Append(new Cell("Active", "M", "West", 4, 4)).ToArray();
         var result = Analyze("""{ "variables": [ { "variable": "REGION1", "levels": [ { "value": "North" }, { "value": "South" }, { "value": "West" } ] } ], "interaction": "breslow-day-tarone", "minimumPerArm": 1 }""", cells);
         Assert.Equal(0, Value(result, "region1-west", "placebo", "N").Value);
-        Assert.Contains(result.Warnings, w => w.Contains("level West was left out of the interaction test", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("level West was left out of the interaction test", StringComparison.Ordinal));
         Assert.NotNull(Value(result, "region1-interaction", "active-vs-placebo", "pValue").Value);
     }
 
@@ -69,7 +69,7 @@ public sealed class SubgroupEdgeCaseTests
     {
         var result = Analyze("""{ "variables": [ { "variable": "REGION1", "label": "Region", "levels": [ { "value": "North", "label": "Northern sites" } ] } ] }""", Balanced);
         Assert.Equal("Northern sites", result.Rows.Single(r => r.Key == "region1-north").Label);
-        Assert.Contains(result.Warnings, w => w.Contains("6 subjects have a value of REGION1 that the spec does not list ('South')", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("6 subjects have a value of REGION1 that the spec does not list ('South')", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -32,7 +32,7 @@ public sealed class SubgroupOracleTests(DemoRunFixture demo) : IClassFixture<Dem
         var (study, table, data) = Demo();
         var result = new SubgroupAnalysis().Analyze(study, table, data);
         DemoEfficacyOracle.AssertAgrees(result, "demo_subgroup_oracles.json", TableId, 1e-9);
-        Assert.Empty(result.Warnings);
+        Assert.Empty(OutputForge.Layout.TableNotes.Of(result).Warnings);
     }
 
     [PilotDataFact]

@@ -1,3 +1,4 @@
+using OutputForge.Layout;
 using OutputForge.Kinds.TimeToEvent;
 using OutputForge.Data;
 using OutputForge.Results;
@@ -50,7 +51,7 @@ public sealed class TimeToEventAnalysisTests
         Assert.Equal(6, Value(result, "median", "placebo", "median"));
         // Day 20 is beyond every subject's time: not estimable, and the reason is kept.
         Assert.Null(Value(result, "km-at-20", "placebo", "estimate"));
-        Assert.Contains(result.Warnings, w => w.Contains("beyond the last observed time"));
+        Assert.Contains(TableNotes.Of(result).Warnings, w => w.Contains("beyond the last observed time"));
         Assert.NotNull(Value(result, "hazard-ratio", "active", "estimate"));
     }
 
@@ -61,7 +62,7 @@ public sealed class TimeToEventAnalysisTests
         using var study = new MiniStudy(adsl: Adsl, adeff: adtte, table: Table("{}"));
         var result = Analyze(study);
         Assert.Null(Value(result, "hazard-ratio", "active", "estimate"));
-        Assert.Contains(result.Warnings, w => w.Contains("no events in Active") && w.Contains("monotone"));
+        Assert.Contains(TableNotes.Of(result).Warnings, w => w.Contains("no events in Active") && w.Contains("monotone"));
     }
 
     [Fact]
@@ -70,8 +71,8 @@ public sealed class TimeToEventAnalysisTests
         using var study = new MiniStudy(adsl: Adsl, adeff: Adtte, table: Table("""{ "strata": ["REG"] }"""));
         var result = Analyze(study);
         Assert.Equal(3, Value(result, "analysed", "active", "n"));
-        Assert.Contains(result.Warnings, w => w.Contains("1 subject has no value of REG"));
-        Assert.Contains(result.MethodNotes, n => n.Contains("stratified by REG"));
+        Assert.Contains(TableNotes.Of(result).Warnings, w => w.Contains("1 subject has no value of REG"));
+        Assert.Contains(TableNotes.Of(result).Footnotes, n => n.Contains("stratified by REG"));
     }
 
     [Fact]
@@ -81,8 +82,13 @@ public sealed class TimeToEventAnalysisTests
         var adsl = Adsl.Replace("T1,T1-002,Placebo,0,Y,B", "T1,T1-002,Placebo,0,Y,C").Replace("T1,T1-008,Active,1,Y,", "T1,T1-008,Active,1,Y,B");
         using var study = new MiniStudy(adsl: adsl, adeff: Adtte, table: Table("""{ "strata": ["REG"] }"""));
         var result = Analyze(study);
-        Assert.Contains(result.Warnings, w => w.Contains("log-rank test: stratum 'C' has subjects of one group only"));
-        Assert.DoesNotContain(result.Warnings, w => w.Contains("stratum 2"));
+        var warnings = TableNotes.Of(result).Warnings;
+        Assert.Contains(warnings, w => w.Contains("log-rank test: stratum 'C' has subjects of one group only"));
+        Assert.DoesNotContain(warnings, w => w.Contains("stratum 2"));
+        // The warning is data: the stratum by its values and the reason as a code, worded by Layout.
+        var remark = Assert.Single(result.Notes, n => n.Kind == NoteKind.StratumAddsNothing);
+        Assert.Equal(["C"], remark.Subject.Stratum!);
+        Assert.Equal("one-group-only", remark.Text("reason"));
     }
 
     [Fact]

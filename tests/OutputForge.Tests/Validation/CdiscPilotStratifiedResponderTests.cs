@@ -66,6 +66,6 @@ public sealed class CdiscPilotStratifiedResponderTests
     public void A_stratum_left_out_of_the_breslow_day_test_is_named_in_the_run_log()
     {
         var result = Analyze();
-        Assert.Contains(result.Warnings, w => w.StartsWith("Xanomeline High Dose vs Placebo: Stratum 718 ", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.StartsWith("Xanomeline High Dose vs Placebo: Stratum 718 ", StringComparison.Ordinal));
     }
 }

@@ -92,7 +92,7 @@ public sealed class CdiscPilotValidationTests
     {
         var (result, _) = LayOut()[DemographicsTable];
         // Duration of disease group: expected counts 12 x 84 / 254 = 3.97 < 5 (hand computation from the published counts).
-        Assert.Contains(result.Warnings, w => w.StartsWith("Duration of disease group: 3 of 6 expected counts are below 5", StringComparison.Ordinal));
+        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.StartsWith("Duration of disease group: 3 of 6 expected counts are below 5", StringComparison.Ordinal));
     }
 
     /// <summary>Which laid-out row and what displayed text a reference value stands for.</summary>

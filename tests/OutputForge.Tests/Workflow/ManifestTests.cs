@@ -79,14 +79,17 @@ public sealed class ManifestTests(WorkflowDemoFixture demo) : IClassFixture<Work
     }
 
     [Fact]
-    public void ATablePatternThatMatchesNothingIsAnInputError()
+    public void ATablePatternThatMatchesNothingIsAUsageErrorFoundBeforeTheDataIsRead()
     {
         using var folder = new TempFolder();
-        var (code, _, error) = WorkflowDemoFixture.Run(["run", "--spec", Path.Combine(demo.Root, "specs", "demo"), "--data", demo.Data,
+        // The data folder does not exist: the selection must be refused before any dataset is looked for.
+        var (code, _, error) = WorkflowDemoFixture.Run(["run", "--spec", Path.Combine(demo.Root, "specs", "demo"), "--data", folder.File("no-data"),
             "--out", folder.File("run"), "--tables", "14.9.*"]);
 
-        Assert.Equal(2, code);
-        Assert.Contains("--tables: no table id matches '14.9.*'", error);
+        Assert.Equal(1, code);
+        var line = Assert.Single(error.Split('\n', StringSplitOptions.RemoveEmptyEntries));
+        Assert.StartsWith("outputforge: error: --tables: no table id matches '14.9.*' (ids: 14.1.1,", line);
+        Assert.DoesNotContain("study.json", line);
         Assert.False(Directory.Exists(folder.File("run")));
     }
 }

@@ -1,22 +1,25 @@
-using System.Globalization;
+using OutputForge.Results;
 using OutputForge.Stats;
 
 namespace OutputForge.Analysis.Summaries;
 
 /// <summary>
 /// The test of a levels x arms table that a spec names (chi-square, likelihood-ratio or Fisher), with its
-/// warnings: the test's own notes (empty rows or columns left out) and, for the chi-square tests, Cochran's
-/// (1954) caution when expected counts fall below 5.
+/// warnings as notes about <c>what</c> (the block or variable tested): for the chi-square tests Cochran's (1954)
+/// caution when expected counts fall below 5, the test's own remarks (empty rows or columns left out), and a test
+/// that gave no result.
 /// </summary>
 public static class AssociationTest
 {
-    public static (TestResult Test, List<string> Warnings) Run(SummaryTest choice, int[,] table, string what)
+    /// <param name="monteCarlo">Fisher's exact test's fallback beyond exact enumeration (<see cref="ExactTestFallback"/>); null: NE.</param>
+    public static (TestResult Test, List<ResultNote> Warnings) Run(SummaryTest choice, int[,] table, string what, Stats.Exact.FisherMonteCarloSettings? monteCarlo = null)
     {
-        var warnings = new List<string>();
+        var warnings = new List<ResultNote>();
+        var subject = new NoteSubject(What: what);
         TestResult test;
         if (choice == SummaryTest.Fisher)
         {
-            test = FisherExactTest.Compute(table);
+            test = FisherExactTest.Compute(table, monteCarlo);
         }
         else
         {
@@ -24,14 +27,14 @@ public static class AssociationTest
             var expected = ContingencyTable.Diagnose(WithoutEmptyLines(table));
             if (test.IsEstimable && expected.CellsBelowFive > 0)
             {
-                warnings.Add(string.Create(CultureInfo.InvariantCulture,
-                    $"{what}: {expected.CellsBelowFive} of {expected.CellCount} expected counts are below 5 (smallest {expected.MinimumExpected:0.00}); the chi-square approximation may be poor."));
+                warnings.Add(ResultNote.Warning(NoteKind.SmallExpectedCounts, subject,
+                    ("below", expected.CellsBelowFive), ("cells", expected.CellCount), ("smallest", expected.MinimumExpected)));
             }
         }
-        warnings.AddRange(test.Notes.Select(n => $"{what}: {n}"));
+        warnings.AddRange(test.Notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark, subject, ("text", n))));
         if (!test.IsEstimable)
         {
-            warnings.Add($"{what}: {test.Method} not estimable: {test.NotEstimableReason}.");
+            warnings.Add(ResultNote.Warning(NoteKind.TestNotEstimable, subject, ("method", test.Method), ("reason", test.NotEstimableReason!)));
         }
         return (test, warnings);
     }

@@ -1,4 +1,3 @@
-using System.Globalization;
 using OutputForge.Analysis;
 using OutputForge.Analysis.Summaries;
 using OutputForge.Data;
@@ -40,7 +39,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         var control = selection.Control;
         var active = settings.Test == SummaryTest.Fisher ? selection.Arms.Where(a => !a.IsControl).ToList() : [];
         var resultColumns = SummaryColumns.ToResultColumns(columns);
-        resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value [a]", null)));
+        resultColumns.AddRange(active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value", null) { NoteRefs = [PairwiseTestNote] }));
         var context = new RowContext(settings, columns, selection, active, control,
             settings.Severity?.Levels ?? [], resultColumns.Select(c => c.Key).ToList());
 
@@ -78,19 +77,21 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             }
         }
 
-        warnings.AddRange(context.Warnings.Distinct());
-        warnings.AddRange(SummaryRows.NotEstimableWarnings(rows));
         var notes = Notes(settings, selection, control, active.Count > 0);
         if (context.NeitherArmHasTheEvent)
         {
-            notes.Insert(1, "Where neither arm of a comparison has the event, only one table fits the margins and the p-value is 1.");
+            notes.Insert(1, ResultNote.Footnote("single-table", NoteKind.SingleTableFits));
         }
-        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, notes,
+        notes.AddRange(context.Warnings.DistinctBy(n => (n.Subject, n.Text("text"))));
+        notes.AddRange(NotEstimableNotes.Of(rows));
+        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, [],
             warnings, table.Footnotes, new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", settings.Dataset]),
-            settings.Percent.Decimals, settings.PValueFloor, SummaryColumns.StyleOf(settings.Percent));
+            settings.Percent.Decimals, settings.PValueFloor, SummaryColumns.StyleOf(settings.Percent)) { Notes = notes };
     }
 
     public static string PValueKey(TreatmentArm arm) => $"p-value-{arm.Key}";
+
+    private const string PairwiseTestNote = "pairwise-test";
 
     /// <summary>The arms whose count orders rows by frequency: one arm, or all of them ("total").</summary>
     private static IReadOnlySet<TreatmentArm> SortColumn(AdverseEventsSettings settings, PopulationSelection selection, SpecSource source)
@@ -144,44 +145,52 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         };
     }
 
-    private static List<string> Notes(AdverseEventsSettings settings, PopulationSelection selection, TreatmentArm control, bool tested)
+    private static List<ResultNote> Notes(AdverseEventsSettings settings, PopulationSelection selection, TreatmentArm control, bool tested)
     {
-        var notes = new List<string>();
+        var notes = new List<ResultNote>();
         if (tested)
         {
-            notes.Add($"[a] Two-sided p-value from Fisher's exact test of each arm against {control.Label} (subjects with vs without the event), unstratified.");
+            notes.Add(ResultNote.Footnote(PairwiseTestNote, NoteKind.PairwiseEventTest, ("method", FisherExactTest.MethodName), ("control", control.Label)));
         }
-        notes.Add($"N = number of subjects in each column ({selection.Label}); n (%) = subjects with at least one event, percentages of N. A subject is counted once per row, whatever the number of events.");
+        notes.Add(ResultNote.Footnote("denominators", NoteKind.EventDenominators, ("population", selection.Label)));
         if (settings.Events)
         {
-            notes.Add("[E] = number of events.");
+            notes.Add(ResultNote.Footnote("event-counts", NoteKind.EventCounts));
         }
         if (settings.Severity is { } severity)
         {
-            notes.Add($"Severity rows: each subject is counted once per row, at the maximum severity of its events in that row ({string.Join(" < ", severity.Levels.Select(l => l.Label ?? l.Value))}){(settings.Events ? "; [E] is given on the rows above them only" : string.Empty)}.");
+            notes.Add(ResultNote.Footnote("severity", NoteKind.SeverityRows,
+                ("levels", severity.Levels.Select(l => l.Label ?? l.Value).ToList()), ("withEvents", settings.Events)));
         }
         if (settings.Where is not null)
         {
-            notes.Add($"Events counted: {settings.Where}.");
+            notes.Add(ResultNote.Footnote("events-counted", NoteKind.EventsCounted, ("condition", settings.Where)));
         }
         if (settings.Threshold is { } threshold)
         {
-            var where = threshold.In.Kind switch { ArmChoiceKind.AnyArm => "any arm", ArmChoiceKind.Total => "all arms combined", _ => threshold.In.Text };
-            notes.Add(string.Create(CultureInfo.InvariantCulture,
-                $"Preferred terms reported by at least {threshold.Percent:0.###}% of subjects in {where}; a system organ class row counts all of its events, including terms not shown."));
+            notes.Add(ResultNote.Footnote("threshold", NoteKind.TermThreshold, ("percent", threshold.Percent),
+                ("place", PlaceOf(threshold.In)), ("arm", threshold.In.Text)));
         }
         notes.Add(settings.Sort.By == LevelSorting.Frequency
-            ? $"Sorted by decreasing number of subjects in {(settings.Sort.Column.Kind == ArmChoiceKind.Total ? "all arms combined" : settings.Sort.Column.Text)}, then alphabetically."
-            : "Sorted alphabetically.");
+            ? ResultNote.Footnote("order", NoteKind.RowOrder, ("place", PlaceOf(settings.Sort.Column)), ("arm", settings.Sort.Column.Text))
+            : ResultNote.Footnote("order", NoteKind.RowOrder));
         return notes;
     }
+
+    /// <summary>Where a count is taken, as a note says it: "any-arm", "total" or "arm" (the arm then in the note's "arm").</summary>
+    private static string PlaceOf(ArmChoice choice) => choice.Kind switch
+    {
+        ArmChoiceKind.AnyArm => "any-arm",
+        ArmChoiceKind.Total => "total",
+        _ => "arm",
+    };
 
     /// <summary>Builds a row (and its severity rows) from the records it counts.</summary>
     private sealed class RowContext(AdverseEventsSettings settings, IReadOnlyList<SummaryColumn> columns, PopulationSelection selection,
         IReadOnlyList<TreatmentArm> active, TreatmentArm control, IReadOnlyList<LevelSpec> severities, List<string> columnKeys)
     {
         public List<string> ColumnKeys { get; } = columnKeys;
-        public List<string> Warnings { get; } = [];
+        public List<ResultNote> Warnings { get; } = [];
         public bool NeitherArmHasTheEvent { get; private set; }
 
         public IEnumerable<ResultRow> Rows(string key, string label, int indent, IReadOnlyCollection<AdverseEventRecord> records)
@@ -218,7 +227,8 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             }
             else
             {
-                Warnings.AddRange(test.Notes.Select(n => $"{label}, {arm.Label} vs {control.Label}: {n}"));
+                Warnings.AddRange(test.Notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark,
+                    new NoteSubject(What: label, Arm: arm.Label, Control: control.Label), ("text", n))));
             }
             return CellFactory.PValueOf(PValueKey(arm), test);
         }

@@ -57,7 +57,10 @@ internal sealed class ResponseCategories
     public int IndexOf(DataColumn column, int row)
     {
         var text = column.GetText(row);
-        var number = column.GetNumber(row);
+        // A column made text by some other value still holds numbers in its other rows: read them as numbers, so the
+        // message names the value that is no category, not a number that is one.
+        var number = column.Kind == Expressions.VariableKind.Number ? column.GetNumber(row)
+            : double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var parsed) ? parsed : double.NaN;
         for (var i = 0; i < Items.Count; i++)
         {
             var c = Items[i];

@@ -43,9 +43,9 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         var selection = PopulationSelection.Select(study, table, data);
         var records = VisitRecords.Select(table, data);
         var dataset = records.Dataset;
-        var value = RecordVariable.Find(settings.Value, dataset, data, table.Source, "/continuous/value");
-        var baseline = settings.Baseline is null ? null : RecordVariable.Find(settings.Baseline, dataset, data, table.Source, "/continuous/baseline");
-        var change = settings.Change is null ? null : RecordVariable.Find(settings.Change, dataset, data, table.Source, "/continuous/change");
+        var value = Summarized(RecordVariable.Find(settings.Value, dataset, data, table.Source, "/continuous/value"), table.Source, "/continuous/value");
+        var baseline = settings.Baseline is null ? null : Summarized(RecordVariable.Find(settings.Baseline, dataset, data, table.Source, "/continuous/baseline"), table.Source, "/continuous/baseline");
+        var change = settings.Change is null ? null : Summarized(RecordVariable.Find(settings.Change, dataset, data, table.Source, "/continuous/change"), table.Source, "/continuous/change");
         // The model analyses the change from baseline, or the value itself for an endpoint without a baseline.
         var response = change ?? value;
         var model = settings.Model;
@@ -60,9 +60,9 @@ public sealed class ContinuousAnalysis : ITableAnalysis
 
         var columns = selection.Arms.Select(a => new ResultColumn(a.Key, a.Label, selection.Count(a))).ToList();
         var d = settings.Decimals;
-        var level = MethodCatalog.LevelText(statistics.Level);
+        var level = statistics.Level;
         var rows = new List<ResultRow>();
-        var warnings = new List<string>(selection.Warnings);
+        var warnings = new List<ResultNote>();
         var modelled = new List<(string Visit, ContinuousAncova Ancova)>();
         var control = selection.Control;
 
@@ -92,36 +92,41 @@ public sealed class ContinuousAnalysis : ITableAnalysis
                 AddModelRows(rows, visitKey, ancova, columns, selection, d, level, change is null ? "value" : "change from baseline");
                 if (ancova.NotEstimableReason is not null)
                 {
-                    warnings.Add($"{visit}: the ANCOVA could not be fitted: {ancova.NotEstimableReason}.");
+                    warnings.Add(ResultNote.Warning(NoteKind.ModelNotFitted, new NoteSubject(Visit: visit),
+                        ("model", "ANCOVA"), ("reason", ancova.NotEstimableReason)));
                 }
                 else if (ancova.DoseNotEstimableReason is not null)
                 {
-                    warnings.Add($"{visit}: the dose-response model could not be fitted: {ancova.DoseNotEstimableReason}.");
+                    warnings.Add(ResultNote.Warning(NoteKind.ModelNotFitted, new NoteSubject(Visit: visit),
+                        ("model", "dose-response model"), ("reason", ancova.DoseNotEstimableReason)));
                 }
                 foreach (var arm in selection.Arms.Where(a => ancova.CountInModel[a] == 0 && ancova.NotEstimableReason is null))
                 {
-                    warnings.Add($"{visit}: no subject of {arm.Label} has {response.Name} and all model covariates; it has no LS mean.");
+                    warnings.Add(ResultNote.Warning(NoteKind.ArmNotInModel, new NoteSubject(Visit: visit, Arm: arm.Label), ("response", response.Name)));
                 }
             }
             rows.Add(Blank(visitKey, columns));
         }
         rows.RemoveAt(rows.Count - 1);
 
-        var notes = new List<string>
+        var notes = new List<ResultNote>
         {
-            $"N = number of subjects in the {selection.Label}; n = subjects with a value. Values are summarized over the subjects with a record at the visit.",
+            ResultNote.Footnote("denominators", NoteKind.VisitDenominators, ("population", selection.Label)),
         };
         if (model is not null)
         {
-            notes.Add("[a] " + ModelNote(model, response.Name, level, control, modelled));
+            notes.Add(ModelNote(model, response.Name, level, control, modelled));
             if (dose is not null)
             {
-                notes.Add($"[b] Dose-response test: the same model with treatment entered as the number {dose.Name} instead of a factor; two-sided t test of its slope (slope per unit of {dose.Name} kept in results.json).");
+                notes.Add(ResultNote.Footnote(DoseResponseNote, NoteKind.DoseResponseTest, ("dose", dose.Name)));
             }
         }
-        warnings.AddRange(NotEstimableWarnings(rows));
-        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
-            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), statistics.PercentDecimals, statistics.PValueFloor);
+        warnings.AddRange(NotEstimableNotes.Of(rows));
+        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, [], selection.Warnings, table.Footnotes,
+            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), statistics.PercentDecimals, statistics.PValueFloor)
+        {
+            Notes = [.. notes, .. warnings],
+        };
     }
 
     /// <summary>The subjects of each arm with a record at the visit, in record order, from one pass over the visit's records.</summary>
@@ -141,7 +146,11 @@ public sealed class ContinuousAnalysis : ITableAnalysis
 
     private static RecordVariable Numeric(RecordVariable variable, SpecSource source, string pointer, string hint) =>
         variable.IsNumeric ? variable : throw new SpecException(source.Problem(pointer,
-            $"{variable.Name} in {variable.DatasetFile} is not numeric; {hint}"));
+            $"{variable.Name} in {variable.DatasetFile} is not numeric{variable.NotNumericEvidence}; {hint}"));
+
+    /// <summary>A summarized variable must hold numbers (a text value would silently leave the summaries); an empty column has n = 0.</summary>
+    private static RecordVariable Summarized(RecordVariable variable, SpecSource source, string pointer) =>
+        variable.IsNumeric || variable.IsEmpty ? variable : Numeric(variable, source, pointer, "a continuous summary needs numbers");
 
     private static void AddSummary(List<ResultRow> rows, string key, string label, RecordVariable variable,
         Dictionary<TreatmentArm, List<(string Subject, int Row)>> subjectsOf, IReadOnlyList<ResultColumn> columns, int d)
@@ -191,16 +200,19 @@ public sealed class ContinuousAnalysis : ITableAnalysis
     }
 
     private static void AddModelRows(List<ResultRow> rows, string visitKey, ContinuousAncova ancova, IReadOnlyList<ResultColumn> columns,
-        PopulationSelection selection, int d, string level, string analysed)
+        PopulationSelection selection, int d, double level, string analysed)
     {
         var armOfColumn = selection.Arms.ToDictionary(a => a.Key);
         var control = selection.Control;
-        rows.Add(new ResultRow($"{visitKey}-ancova", $"ANCOVA of {analysed} [a]", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
+        rows.Add(new ResultRow($"{visitKey}-ancova", $"ANCOVA of {analysed}", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList())
+        {
+            NoteRefs = [AncovaNote],
+        });
         rows.Add(new ResultRow($"{visitKey}-model-n", "n in model", 2,
             columns.Select(c => CellFactory.Count(c.Key, ancova.CountInModel[armOfColumn[c.Key]])).ToList()));
         rows.Add(new ResultRow($"{visitKey}-lsmean", "LS mean (SE)", 2, columns.Select(c =>
             ancova.LsMeans.TryGetValue(armOfColumn[c.Key], out var m)
-                ? EstimateWithError(c.Key, m, d)
+                ? EstimateWithError(c.Key, m, d, level)
                 : NotEstimable(c.Key, "{estimate} ({se})", ancova.NotEstimableReason ?? "no subjects of this arm in the model")).ToList()));
         var vsControl = ancova.Comparisons.Where(x => x.Reference == control).ToList();
         AddComparisonRows(rows, $"{visitKey}-lsdiff", $"Difference vs {control.Label}", vsControl, columns, d, level, 2);
@@ -212,24 +224,27 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         if (ancova.DoseSlope is not null || ancova.DoseNotEstimableReason is not null)
         {
             var method = "t test of the dose slope";
-            rows.Add(new ResultRow($"{visitKey}-dose-response", "Dose-response test p-value [b]", 2, columns.Select(c =>
+            rows.Add(new ResultRow($"{visitKey}-dose-response", "Dose-response test p-value", 2, columns.Select(c =>
                 c.Key != control.Key
                     ? CellFactory.Empty(c.Key)
                     : ancova.DoseSlope is { } slope
                         ? new ResultCell(c.Key, "{pValue}",
                         [
-                            new StatisticValue(PValue, slope.PValue, ValueFormat.PValue, Method: method),
+                            new StatisticValue(PValue, slope.PValue, ValueFormat.PValue, Method: method) { Sided = Sidedness.TwoSided },
                             new StatisticValue(Estimate, slope.Estimate, ValueFormat.Decimal, d + 3, Method: method),
                             new StatisticValue(StandardError, slope.StandardError, ValueFormat.Decimal, d + 3, Method: method),
                             new StatisticValue(TestStatistic, slope.T, ValueFormat.Decimal, 3, Method: method),
                             new StatisticValue(DegreesOfFreedom, slope.DegreesOfFreedom, ValueFormat.Decimal, 0, Method: method),
                         ])
-                        : NotEstimable(c.Key, "{pValue}", ancova.DoseNotEstimableReason!)).ToList()));
+                        : NotEstimable(c.Key, "{pValue}", ancova.DoseNotEstimableReason!)).ToList())
+            {
+                NoteRefs = [DoseResponseNote],
+            });
         }
     }
 
     private static void AddComparisonRows(List<ResultRow> rows, string key, string label, IReadOnlyList<ContinuousAncova.Comparison> comparisons,
-        IReadOnlyList<ResultColumn> columns, int d, string level, int indent)
+        IReadOnlyList<ResultColumn> columns, int d, double level, int indent)
     {
         ResultCell CellOf(string column, Func<LinearContrastResult, ResultCell> make, string pattern)
         {
@@ -242,27 +257,31 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         rows.Add(new ResultRow($"{key}-label", label, indent, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
         indent++;
         rows.Add(new ResultRow(key, "LS mean difference (SE)", indent,
-            columns.Select(c => CellOf(c.Key, r => EstimateWithError(c.Key, r, d), "{estimate} ({se})")).ToList()));
-        rows.Add(new ResultRow($"{key}-ci", $"{level} CI", indent, columns.Select(c => CellOf(c.Key, r => new ResultCell(c.Key, "({lower}, {upper})",
+            columns.Select(c => CellOf(c.Key, r => EstimateWithError(c.Key, r, d, level), "{estimate} ({se})")).ToList()));
+        rows.Add(new ResultRow($"{key}-ci", "{level} CI", indent, columns.Select(c => CellOf(c.Key, r => new ResultCell(c.Key, "({lower}, {upper})",
         [
-            new StatisticValue(Lower, r.Lower, ValueFormat.Decimal, d + 1, Method: method),
-            new StatisticValue(Upper, r.Upper, ValueFormat.Decimal, d + 1, Method: method),
-        ]), "({lower}, {upper})")).ToList()));
+            new StatisticValue(Lower, r.Lower, ValueFormat.Decimal, d + 1, Method: method) { Level = level, Sided = Sidedness.TwoSided },
+            new StatisticValue(Upper, r.Upper, ValueFormat.Decimal, d + 1, Method: method) { Level = level, Sided = Sidedness.TwoSided },
+        ]), "({lower}, {upper})")).ToList())
+        {
+            Level = level,
+        });
         rows.Add(new ResultRow($"{key}-p-value", "p-value", indent, columns.Select(c => CellOf(c.Key, r => new ResultCell(c.Key, "{pValue}",
         [
-            new StatisticValue(PValue, r.PValue, ValueFormat.PValue, Method: method),
+            new StatisticValue(PValue, r.PValue, ValueFormat.PValue, Method: method) { Sided = Sidedness.TwoSided },
             new StatisticValue(TestStatistic, r.T, ValueFormat.Decimal, 3, Method: method),
             new StatisticValue(DegreesOfFreedom, r.DegreesOfFreedom, ValueFormat.Decimal, 0, Method: method),
         ]), "{pValue}")).ToList()));
     }
 
-    private static ResultCell EstimateWithError(string column, LinearContrastResult r, int d) =>
+    /// <summary>An estimate with its standard error shown, and its interval's bounds at <paramref name="level"/> kept in the results.</summary>
+    private static ResultCell EstimateWithError(string column, LinearContrastResult r, int d, double level) =>
         new(column, "{estimate} ({se})",
         [
             new StatisticValue(Estimate, r.Estimate, ValueFormat.Decimal, d + 1),
             new StatisticValue(StandardError, r.StandardError, ValueFormat.Decimal, d + 2),
-            new StatisticValue(Lower, r.Lower, ValueFormat.Decimal, d + 1),
-            new StatisticValue(Upper, r.Upper, ValueFormat.Decimal, d + 1),
+            new StatisticValue(Lower, r.Lower, ValueFormat.Decimal, d + 1) { Level = level, Sided = Sidedness.TwoSided },
+            new StatisticValue(Upper, r.Upper, ValueFormat.Decimal, d + 1) { Level = level, Sided = Sidedness.TwoSided },
         ]);
 
     private static ResultCell NotEstimable(string column, string pattern, string reason) =>
@@ -272,20 +291,17 @@ public sealed class ContinuousAnalysis : ITableAnalysis
                 pattern.Contains("{pValue}") ? ValueFormat.PValue : ValueFormat.Decimal, reason),
         ]);
 
-    private static string ModelNote(ContinuousModelSettings model, string response, string level, TreatmentArm control,
+    private const string AncovaNote = "ancova";
+
+    private const string DoseResponseNote = "dose-response";
+
+    private static ResultNote ModelNote(ContinuousModelSettings model, string response, double level, TreatmentArm control,
         IReadOnlyList<(string Visit, ContinuousAncova Ancova)> modelled)
     {
-        var terms = new List<string> { "treatment (factor)" };
-        terms.AddRange(model.Covariates.Select(c => $"{c} (covariate)"));
-        terms.AddRange(model.Factors.Select(f => $"{f} (factor)"));
-        var excluded = modelled.Where(m => m.Ancova.Excluded > 0).Select(m => $"{m.Visit}: {m.Ancova.Excluded}").ToList();
-        var balance = model.Factors.Count > 0
-            ? $"LS means at the observed mean of {(model.Covariates.Count > 0 ? string.Join(", ", model.Covariates) : "no covariate")} with the levels of {string.Join(", ", model.Factors)} weighted equally"
-            : model.Covariates.Count > 0 ? $"LS means at the observed mean of {string.Join(", ", model.Covariates)}" : "LS means";
-        return $"ANCOVA (general linear model, least squares) of {response} with {string.Join(", ", terms)}, fitted at each visit separately " +
-            $"on the subjects with {response} and every model variable; {balance}. Differences are each arm minus {control.Label} " +
-            $"(or as labelled), with {level} CIs and two-sided p-values from the t distribution on the residual degrees of freedom." +
-            (excluded.Count > 0 ? $" Subjects with a value but a missing covariate, left out of the model: {string.Join("; ", excluded)}." : string.Empty);
+        var excluded = modelled.Where(m => m.Ancova.Excluded > 0).ToList();
+        return ResultNote.Footnote(AncovaNote, NoteKind.AncovaModel, ("response", response), ("covariates", model.Covariates.ToList()),
+            ("factors", model.Factors.ToList()), ("control", control.Label), ("level", level),
+            ("excludedVisits", excluded.Select(m => m.Visit).ToList()), ("excludedCounts", excluded.Select(m => m.Ancova.Excluded).ToList()));
     }
 
     private static List<(TreatmentArm First, TreatmentArm Second)> ResolvePairs(ContinuousModelSettings model, PopulationSelection selection, SpecSource source)
@@ -328,10 +344,4 @@ public sealed class ContinuousAnalysis : ITableAnalysis
 
     private static ResultRow Blank(string key, IReadOnlyList<ResultColumn> columns) =>
         new($"{key}-blank", string.Empty, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Blank);
-
-    private static IEnumerable<string> NotEstimableWarnings(IEnumerable<ResultRow> rows) =>
-        rows.SelectMany(r => r.Cells.SelectMany(c => c.Values
-                .Where(v => v.NotEstimableReason is not null)
-                .Select(v => $"NE (not estimable) in \"{r.Label}\", column {c.Column}: {v.NotEstimableReason}.")))
-            .Distinct();
 }

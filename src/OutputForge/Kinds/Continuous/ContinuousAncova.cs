@@ -65,6 +65,10 @@ internal sealed class ContinuousAncova
         {
             return Failed(fit.NotEstimableReason!);
         }
+        if (fit.HasDegenerateVariance)
+        {
+            return Failed(DegenerateVariance.Reason);
+        }
         var lsMeans = fitted.ToDictionary(a => a, a => LeastSquaresMeans.Mean(fit, treatment, a.Value, level));
         var comparisons = comparisonsWanted.Select(p => counts[p.First] == 0 || counts[p.Second] == 0
                 ? new Comparison(p.First, p.Second, null, $"no subjects of {(counts[p.First] == 0 ? p.First : p.Second).Label} in the model")

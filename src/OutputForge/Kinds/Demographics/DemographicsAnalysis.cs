@@ -19,6 +19,8 @@ public sealed class DemographicsAnalysis : ITableAnalysis
 {
     public const string PValueColumn = "p-value";
 
+    private const string AcrossArmsNote = "across-arms-test";
+
     /// <summary>The one-way ANOVA F test across the arms, as a test result (its degrees of freedom are the numerator's).</summary>
     private static TestResult AnovaTest(IReadOnlyList<IReadOnlyList<double>> arms)
     {
@@ -49,11 +51,11 @@ public sealed class DemographicsAnalysis : ITableAnalysis
         var tested = settings.Variables.Any(v => v.Test != SummaryTest.None);
         if (tested)
         {
-            resultColumns.Add(new ResultColumn(PValueColumn, "p-value [a]", null));
+            resultColumns.Add(new ResultColumn(PValueColumn, "p-value", null) { NoteRefs = [AcrossArmsNote] });
         }
         var columnKeys = resultColumns.Select(c => c.Key).ToList();
         var rows = new List<ResultRow>();
-        var warnings = new List<string>(selection.Warnings);
+        var warnings = new List<ResultNote>();
         var testsUsed = new List<(string Variable, string Method)>();
         for (var i = 0; i < settings.Variables.Count; i++)
         {
@@ -74,19 +76,20 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 if (column.Kind != Expressions.VariableKind.Number)
                 {
                     throw new SpecException(table.Source.Problem(pointer + "/type",
-                        $"{spec.Variable} is not numeric in {Path.GetFileName(adsl.File)}, so it cannot be summarized as continuous (use \"categorical\")"));
+                        $"{spec.Variable} is not numeric in {Path.GetFileName(adsl.File)}{(column.TextEvidence is { } evidence ? $" ({evidence} is not a number)" : "")}, so it cannot be summarized as continuous (use \"categorical\")"));
                 }
                 var (continuousRows, armValues, continuousWarnings) = ContinuousSummary.Summarize(spec, settings, column, subjects,
                     selection.Arms, columns, table.Source, pointer);
                 blockRows = continuousRows;
-                warnings.AddRange(continuousWarnings.Select(w => $"{label}: {w}"));
+                warnings.AddRange(continuousWarnings.Select(w => ResultNote.Warning(NoteKind.Text, new NoteSubject(What: label), ("text", w))));
                 if (spec.Test == SummaryTest.Anova)
                 {
                     test = AnovaTest(armValues);
-                    warnings.AddRange(test.Notes.Select(n => $"{label}: {n}"));
+                    warnings.AddRange(test.Notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark, new NoteSubject(What: label), ("text", n))));
                     if (!test.IsEstimable)
                     {
-                        warnings.Add($"{label}: {test.Method} not estimable: {test.NotEstimableReason}.");
+                        warnings.Add(ResultNote.Warning(NoteKind.TestNotEstimable, new NoteSubject(What: label),
+                            ("method", test.Method), ("reason", test.NotEstimableReason!)));
                     }
                 }
             }
@@ -95,10 +98,10 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 var request = new CategoricalRequest(spec.Variable, spec.Variable, null, spec.Levels, spec.OrderBy, spec.Order, spec.Missing, pointer);
                 var block = CategoricalSummary.Summarize(request, adsl, subjects, selection.Arms, columns, settings.Percent, table.Source, 1);
                 blockRows = block.Rows.ToList();
-                warnings.AddRange(block.Warnings.Select(w => $"{label}: {w}"));
+                warnings.AddRange(block.Warnings.Select(w => ResultNote.Warning(NoteKind.Text, new NoteSubject(What: label), ("text", w))));
                 if (spec.Test != SummaryTest.None)
                 {
-                    (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label);
+                    (test, var testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, label, ExactTestFallback.For(study));
                     warnings.AddRange(testWarnings);
                 }
             }
@@ -115,18 +118,16 @@ public sealed class DemographicsAnalysis : ITableAnalysis
             rows.Add(SummaryRows.Heading(spec.Variable, label, columnKeys, headingCells));
             rows.AddRange(blockRows);
         }
-        var notes = new List<string>
-        {
-            $"N = number of subjects in each column ({selection.Label}); percentages are of N. n = number of subjects with a value.",
-        };
+        var notes = new List<ResultNote>();
         if (tested)
         {
-            notes.Insert(0, "[a] Two-sided p-value across the treatment arms (Total not included): " +
-                string.Join("; ", testsUsed.GroupBy(t => t.Method).Select(g => $"{g.Key} for {string.Join(", ", g.Select(t => t.Variable))}")) + ".");
+            notes.Add(ResultNote.Footnote(AcrossArmsNote, NoteKind.AcrossArmsTest,
+                ("methods", testsUsed.Select(t => t.Method).ToList()), ("subjects", testsUsed.Select(t => t.Variable).ToList())));
         }
-        warnings.AddRange(SummaryRows.NotEstimableWarnings(rows));
-        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, notes, warnings, table.Footnotes,
+        notes.Add(ResultNote.Footnote("denominators", NoteKind.Denominators, ("population", selection.Label), ("withValue", true)));
+        warnings.AddRange(NotEstimableNotes.Of(rows));
+        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, [], selection.Warnings, table.Footnotes,
             new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl"]), settings.Percent.Decimals, settings.PValueFloor,
-            SummaryColumns.StyleOf(settings.Percent));
+            SummaryColumns.StyleOf(settings.Percent)) { Notes = [.. notes, .. warnings] };
     }
 }

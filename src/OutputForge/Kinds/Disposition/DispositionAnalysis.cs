@@ -17,6 +17,8 @@ public sealed class DispositionAnalysis : ITableAnalysis
 {
     public const string PValueColumn = "p-value";
 
+    private const string AcrossArmsNote = "across-arms-test";
+
     public VariableReads Reads(StudySpec study, TableSpec table)
     {
         var reads = PopulationSelection.Reads(study, table, new VariableReads());
@@ -40,11 +42,11 @@ public sealed class DispositionAnalysis : ITableAnalysis
         var tested = settings.Blocks.Any(b => b.Test != SummaryTest.None);
         if (tested)
         {
-            resultColumns.Add(new ResultColumn(PValueColumn, "p-value [a]", null));
+            resultColumns.Add(new ResultColumn(PValueColumn, "p-value", null) { NoteRefs = [AcrossArmsNote] });
         }
         var columnKeys = resultColumns.Select(c => c.Key).ToList();
         var rows = new List<ResultRow>();
-        var warnings = new List<string>(selection.Warnings);
+        var warnings = new List<ResultNote>();
         var testsUsed = new List<(string Block, string Method)>();
         for (var i = 0; i < settings.Blocks.Count; i++)
         {
@@ -56,11 +58,11 @@ public sealed class DispositionAnalysis : ITableAnalysis
             }
             var request = new CategoricalRequest(spec.Variable, key, spec.Where, spec.Levels, spec.OrderBy, spec.Order, spec.Missing, $"/disposition/blocks/{i}");
             var block = CategoricalSummary.Summarize(request, adsl, subjects, selection.Arms, columns, settings.Percent, table.Source, 1);
-            warnings.AddRange(block.Warnings.Select(w => $"{spec.Label}: {w}"));
+            warnings.AddRange(block.Warnings.Select(w => ResultNote.Warning(NoteKind.Text, new NoteSubject(What: spec.Label), ("text", w))));
             var headingCells = new List<ResultCell>();
             if (spec.Test != SummaryTest.None)
             {
-                var (test, testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, spec.Label);
+                var (test, testWarnings) = AssociationTest.Run(spec.Test, block.LevelsByArm, spec.Label, ExactTestFallback.For(study));
                 warnings.AddRange(testWarnings);
                 headingCells.Add(CellFactory.PValueOf(PValueColumn, test));
                 testsUsed.Add((spec.Label, test.Method));
@@ -72,18 +74,16 @@ public sealed class DispositionAnalysis : ITableAnalysis
             rows.Add(SummaryRows.Heading(key, spec.Label, columnKeys, headingCells));
             rows.AddRange(block.Rows);
         }
-        var notes = new List<string>
-        {
-            $"N = number of subjects in each column ({selection.Label}); percentages are of N.",
-        };
+        var notes = new List<ResultNote>();
         if (tested)
         {
-            notes.Insert(0, "[a] Two-sided p-value across the treatment arms (Total not included): " +
-                string.Join("; ", testsUsed.GroupBy(t => t.Method).Select(g => $"{g.Key} for {string.Join(", ", g.Select(t => t.Block))}")) + ".");
+            notes.Add(ResultNote.Footnote(AcrossArmsNote, NoteKind.AcrossArmsTest,
+                ("methods", testsUsed.Select(t => t.Method).ToList()), ("subjects", testsUsed.Select(t => t.Block).ToList())));
         }
-        warnings.AddRange(SummaryRows.NotEstimableWarnings(rows));
-        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, notes, warnings, table.Footnotes,
+        notes.Add(ResultNote.Footnote("denominators", NoteKind.Denominators, ("population", selection.Label)));
+        warnings.AddRange(NotEstimableNotes.Of(rows));
+        return new TableResult(table.Id, table.Title, selection.Label, resultColumns, rows, [], selection.Warnings, table.Footnotes,
             new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl"]), settings.Percent.Decimals, settings.PValueFloor,
-            SummaryColumns.StyleOf(settings.Percent));
+            SummaryColumns.StyleOf(settings.Percent)) { Notes = [.. notes, .. warnings] };
     }
 }

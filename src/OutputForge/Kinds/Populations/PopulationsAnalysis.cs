@@ -61,14 +61,13 @@ public sealed class PopulationsAnalysis : ITableAnalysis
             rows.Add(new ResultRow(key, label, 0,
                 columns.Select(c => CountCells.CountPercent(c.Key, inRow.Count(s => c.Holds(s.Arm)), c.N, settings.Percent)).ToList()));
         }
-        var notes = new List<string>
-        {
-            $"N = number of subjects in each column ({selection.Label}); percentages are of N. Columns are the arms of {selection.TreatmentVariable}.",
-        };
-        var warnings = new List<string>(selection.Warnings);
-        warnings.AddRange(SummaryRows.NotEstimableWarnings(rows));
-        return new TableResult(table.Id, table.Title, selection.Label, SummaryColumns.ToResultColumns(columns), rows, notes, warnings,
+        List<ResultNote> notes =
+        [
+            ResultNote.Footnote("denominators", NoteKind.Denominators, ("population", selection.Label), ("armVariable", selection.TreatmentVariable)),
+            .. NotEstimableNotes.Of(rows),
+        ];
+        return new TableResult(table.Id, table.Title, selection.Label, SummaryColumns.ToResultColumns(columns), rows, [], selection.Warnings,
             table.Footnotes, new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl"]), settings.Percent.Decimals,
-            PercentStyle: SummaryColumns.StyleOf(settings.Percent));
+            PercentStyle: SummaryColumns.StyleOf(settings.Percent)) { Notes = notes };
     }
 }

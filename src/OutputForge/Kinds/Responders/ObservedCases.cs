@@ -28,8 +28,4 @@ public static class ObservedCases
         }
         return derived;
     }
-
-    public static string Note(string populationLabel, string dataset) =>
-        $"N = subjects in the {populationLabel}; percentages are of the subjects with a record (observed cases: records as {dataset} has them, " +
-        $"including its derived records, {DerivationVariable} not blank, where the endpoint selects them); subjects without a record are left out.";
 }

@@ -46,7 +46,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
 
         var proportionMethod = statistics.ProportionInterval;
         var differenceMethod = statistics.DifferenceInterval;
-        var level = MethodCatalog.LevelText(statistics.Level);
+        var level = statistics.Level;
         var decimals = statistics.PercentDecimals;
         var control = selection.Control;
         var comparisons = selection.Arms.Where(a => !a.IsControl)
@@ -58,12 +58,12 @@ public sealed class ResponderAnalysis : ITableAnalysis
             Section("endpoint", endpoint.Label ?? DefaultLabel(endpoint), columns),
             new("responders", "Responders, n (%)", 1,
                 columnCounts.Select(c => CellFactory.CountPercent(c.Key, c.Counts.Responders, c.Counts.Denominator, decimals)).ToList()),
-            new("responders-ci", $"{level} CI [a]", 2,
+            new("responders-ci", "{level} CI", 2,
                 columnCounts.Select(c => CellFactory.Interval(c.Key,
                     c.Counts.Denominator == 0
                         ? IntervalResult.NotEstimable("no subjects in the denominator")
                         : ProportionInterval.Compute(c.Counts.Responders, c.Counts.Denominator, proportionMethod, statistics.Level),
-                    100, decimals, MethodCatalog.Describe(proportionMethod))).ToList()),
+                    100, decimals, MethodCatalog.Describe(proportionMethod), level)).ToList()) { Level = level, NoteRefs = [ResponderNotes.Proportion] },
             new("nonresponders", "Non-responders, n (%)", 1,
                 columnCounts.Select(c => CellFactory.CountPercent(c.Key, c.Counts.NonResponders, c.Counts.Denominator, decimals)).ToList()),
         };
@@ -93,33 +93,39 @@ public sealed class ResponderAnalysis : ITableAnalysis
         }
         rows.Add(Blank(columns));
         rows.Add(Section("comparison", $"Comparison with {control.Label}", columns));
-        rows.Add(ComparisonRow("difference", "Difference in proportions, % [b]", columns, comparisons,
-            c => CellFactory.Estimate(c.Arm.Key, c.Difference, 100, decimals, MethodCatalog.Describe(differenceMethod))));
-        rows.Add(ComparisonRow("difference-ci", $"{level} CI [b]", columns, comparisons,
-            c => CellFactory.Interval(c.Arm.Key, c.Difference, 100, decimals, MethodCatalog.Describe(differenceMethod))));
-        rows.Add(ComparisonRow("p-value", "p-value [c]", columns, comparisons, c => CellFactory.PValueOf(c.Arm.Key, c.Test)));
+        rows.Add(ComparisonRow("difference", "Difference in proportions, %", columns, comparisons,
+            c => CellFactory.Estimate(c.Arm.Key, c.Difference, 100, decimals, MethodCatalog.Describe(differenceMethod))) with { NoteRefs = [ResponderNotes.Difference] });
+        rows.Add(ComparisonRow("difference-ci", "{level} CI", columns, comparisons,
+            c => CellFactory.Interval(c.Arm.Key, c.Difference, 100, decimals, MethodCatalog.Describe(differenceMethod), level))
+            with { Level = level, NoteRefs = [ResponderNotes.Difference] });
+        rows.Add(ComparisonRow("p-value", "p-value", columns, comparisons, c => CellFactory.PValueOf(c.Arm.Key, c.Test)) with { NoteRefs = [ResponderNotes.Test] });
         var extra = ExtraComparisons(table, selection, data, records, response, missingAreNonResponders, counts, columns, statistics.Level, decimals);
         rows.AddRange(extra?.Rows ?? []);
 
-        var notes = new List<string>
+        var notes = new List<ResultNote>
         {
-            $"[a] {MethodCatalog.Describe(proportionMethod)} {level} confidence interval for the proportion of responders.",
-            $"[b] Difference in proportions of responders (each arm minus {control.Label}), in percentage points, with the {MethodCatalog.Describe(differenceMethod)} {level} confidence interval.",
-            "[c] " + TestNote(comparisons, statistics.Test, control),
+            ResultNote.Footnote(ResponderNotes.Proportion, NoteKind.ProportionInterval, ("method", MethodCatalog.Describe(proportionMethod)), ("level", level)),
+            ResultNote.Footnote(ResponderNotes.Difference, NoteKind.DifferenceInterval, ("method", MethodCatalog.Describe(differenceMethod)),
+                ("level", level), ("control", control.Label)),
+            TestNote(comparisons, statistics.Test, control),
         };
         notes.AddRange(extra?.Notes ?? []);
-        notes.Add(endpoint.Missing switch
-        {
-            MissingResponse.NonResponder => $"N = number of subjects in the {selection.Label}; percentages are of N. Subjects with no assessment are counted as non-responders.",
-            MissingResponse.Observed => ObservedCases.Note(selection.Label, endpoint.Dataset),
-            _ => $"N = number of subjects in the {selection.Label}; percentages are of the subjects evaluated. Subjects with no assessment are excluded.",
-        });
-        var warnings = new List<string>(selection.Warnings);
+        notes.Add(ResultNote.Footnote("denominators", NoteKind.ResponderDenominators, ("population", selection.Label),
+            ("missing", endpoint.Missing switch
+            {
+                MissingResponse.NonResponder => "non-responder",
+                MissingResponse.Observed => "observed",
+                _ => "exclude",
+            }), ("dataset", endpoint.Dataset), ("derivation", ObservedCases.DerivationVariable)));
+        var warnings = new List<ResultNote>();
         warnings.AddRange(extra?.Warnings ?? []);
         warnings.AddRange(SmallCountWarnings(comparisons, statistics.Test, control));
-        warnings.AddRange(NotEstimableWarnings(rows));
-        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
-            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor);
+        warnings.AddRange(NotEstimableNotes.Of(rows));
+        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, [], selection.Warnings, table.Footnotes,
+            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor)
+        {
+            Notes = [.. notes, .. warnings],
+        };
     }
 
     /// <summary>The stratified rows and the ratio rows, when the table's "responders" settings ask for them.</summary>
@@ -165,7 +171,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
             ratios = actives.Select(a => ResponderRatios.Unstratified(a, counts[a], counts[control], withRelativeRisk, oddsMethod is not null,
                 oddsMethod ?? OddsRatioIntervalMethod.Woolf, level)).ToList();
         }
-        return StratifiedAndRatioRows.Build(settings, strata, stratified, ratios, columns, control, level, decimals, new FootnoteLetters('d'), population);
+        return StratifiedAndRatioRows.Build(settings, strata, stratified, ratios, columns, control, level, decimals, population);
     }
 
     /// <summary>The counts of <paramref name="arm"/> among <paramref name="armOfSubject"/> (the population, or a part of it such as a subgroup).</summary>
@@ -210,17 +216,20 @@ public sealed class ResponderAnalysis : ITableAnalysis
                 ? cell(comparison)
                 : CellFactory.Empty(column.Key)).ToList());
 
-    private static string TestNote(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
+    /// <summary>
+    /// The unstratified test's footnote: the test the spec names, or (with "auto") the test each comparison used; a
+    /// comparison without a p-value (NE, e.g. against an arm without subjects) used no test and is not named.
+    /// </summary>
+    private static ResultNote TestNote(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
     {
         if (choice != TableTest.Auto)
         {
-            return $"Two-sided p-value from {NamedTest(choice)}, unstratified.";
+            return ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("method", NamedTest(choice)));
         }
-        var used = comparisons.Select(c => c.Test.Method).Distinct().ToList();
-        var detail = used.Count == 1
-            ? $"; {used[0]} was used for every comparison"
-            : "; " + string.Join("; ", comparisons.Select(c => $"{c.Test.Method} for {c.Arm.Label} vs {control.Label}"));
-        return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
+        var tested = comparisons.Where(c => c.Test.IsEstimable).ToList();
+        return ResultNote.Footnote(ResponderNotes.Test, NoteKind.UnstratifiedTest, ("automatic", true),
+            ("methods", tested.Select(c => c.Test.Method).ToList()), ("arms", tested.Select(c => c.Arm.Label).ToList()),
+            ("allTested", tested.Count == comparisons.Count), ("control", control.Label));
     }
 
     private static string NamedTest(TableTest choice) => choice switch
@@ -231,7 +240,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
         _ => "Pearson's chi-square test",
     };
 
-    private static IEnumerable<string> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
+    private static IEnumerable<ResultNote> SmallCountWarnings(IReadOnlyList<ResponderComparison> comparisons, TableTest choice, TreatmentArm control)
     {
         // Every large-sample test the spec forces gets Cochran's caution; "auto" switches to Fisher instead.
         if (choice is TableTest.Auto or TableTest.Fisher)
@@ -240,14 +249,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         }
         foreach (var c in comparisons.Where(c => c.Expected.CellsBelowFive > 0))
         {
-            yield return string.Create(System.Globalization.CultureInfo.InvariantCulture,
-                $"{c.Arm.Label} vs {control.Label}: {c.Expected.CellsBelowFive} of {c.Expected.CellCount} expected cell counts are below 5 (smallest {c.Expected.MinimumExpected:0.00}); the chi-square approximation may be poor.");
+            yield return ResultNote.Warning(NoteKind.SmallExpectedCounts, new NoteSubject(Arm: c.Arm.Label, Control: control.Label),
+                ("below", c.Expected.CellsBelowFive), ("cells", c.Expected.CellCount), ("smallest", c.Expected.MinimumExpected), ("ofCells", true));
         }
     }
-
-    private static IEnumerable<string> NotEstimableWarnings(IEnumerable<ResultRow> rows) =>
-        rows.SelectMany(r => r.Cells.SelectMany(c => c.Values
-                .Where(v => v.NotEstimableReason is not null)
-                .Select(v => $"NE (not estimable) in \"{r.Label}\", column {c.Column}: {v.NotEstimableReason}.")))
-            .Distinct();
 }

@@ -26,6 +26,12 @@ public sealed record ResponderComparison(
         };
         var expected = ContingencyTable.Diagnose(table);
         var test = TableTests.Compute(table, testChoice);
+        if (active.Denominator == 0 || control.Denominator == 0)
+        {
+            // A table with an empty row admits only itself, so an exact test gives p = 1: a number that says nothing
+            // about an arm without subjects, shown as NE instead.
+            test = TestResult.NotEstimable(test.Method, $"no subjects in {(active.Denominator == 0 ? arm.Label : "the control arm")}");
+        }
         return new ResponderComparison(arm, difference, test, expected);
     }
 }

@@ -13,20 +13,20 @@ namespace OutputForge.Kinds.Responders;
 public sealed class StratifiedAndRatioRows
 {
     private readonly List<ResultRow> _rows = [];
-    private readonly List<string> _notes = [];
-    private readonly List<string> _warnings = [];
+    private readonly List<ResultNote> _notes = [];
+    private readonly List<ResultNote> _warnings = [];
 
     public IReadOnlyList<ResultRow> Rows => _rows;
-    public IReadOnlyList<string> Notes => _notes;
-    public IReadOnlyList<string> Warnings => _warnings;
+    public IReadOnlyList<ResultNote> Notes => _notes;
+    public IReadOnlyList<ResultNote> Warnings => _warnings;
 
     public static StratifiedAndRatioRows Build(ResponderSettings settings, ResponderStrata? strata,
         IReadOnlyList<StratifiedComparison> stratified, IReadOnlyList<ResponderRatios> ratios, IReadOnlyList<ResultColumn> columns,
-        TreatmentArm control, double level, int percentDecimals, FootnoteLetters letters, IReadOnlyDictionary<string, int> populationOfStratum)
+        TreatmentArm control, double level, int percentDecimals, IReadOnlyDictionary<string, int> populationOfStratum)
     {
         var result = new StratifiedAndRatioRows();
-        var levelText = MethodCatalog.LevelText(level);
         var indent = strata is null ? 1 : 2;
+        var ofStrata = strata is not null;
         if (strata is not null)
         {
             result._rows.Add(new ResultRow("stratified", $"Stratified by {string.Join(" and ", strata.Variables)}", 1,
@@ -34,46 +34,46 @@ public sealed class StratifiedAndRatioRows
             var spec = settings.Stratified!;
             var mn = spec.Difference == StratifiedDifference.MiettinenNurminen;
             var differenceMethod = mn ? StratifiedMiettinenNurminen.MethodName : "Mantel-Haenszel, Sato variance";
-            var d = letters.Next();
-            result._rows.Add(Row("stratified-difference", $"Difference in proportions, % {d}", indent, columns, stratified,
-                c => CellFactory.Estimate(c.Arm.Key, c.Difference, 100, percentDecimals, differenceMethod)));
-            result._rows.Add(Row("stratified-difference-ci", $"{levelText} CI {d}", indent, columns, stratified,
-                c => CellFactory.Interval(c.Arm.Key, c.Difference, 100, percentDecimals, differenceMethod)));
-            result._notes.Add(mn
-                ? $"{d} Common difference (arm minus {control.Label}), weights n1 n2 / (n1 + n2); stratified Miettinen-Nurminen score {levelText} CI (Miettinen and Nurminen 1985); estimate: the score's root, equal to the weighted difference."
-                : $"{d} Mantel-Haenszel common difference (arm minus {control.Label}), weights n1 n2 / (n1 + n2); {levelText} CI from Sato's variance (Sato 1989).");
-            var e = letters.Next();
-            result._rows.Add(Row("cmh-p-value", $"CMH p-value {e}", indent, columns, stratified, c => WithStrata(CellFactory.PValueOf(c.Arm.Key, c.Test), c.StrataUsed)));
-            result._notes.Add($"{e} Two-sided p-value of the Cochran-Mantel-Haenszel test{(spec.Test == StratifiedTest.CmhCorrected ? " with continuity correction" : "")}, each arm against {control.Label}.");
+            var d = ResponderNotes.StratifiedDifference;
+            result._rows.Add(Row("stratified-difference", "Difference in proportions, %", indent, columns, stratified,
+                c => CellFactory.Estimate(c.Arm.Key, c.Difference, 100, percentDecimals, differenceMethod)) with { NoteRefs = [d] });
+            result._rows.Add(Row("stratified-difference-ci", "{level} CI", indent, columns, stratified,
+                c => CellFactory.Interval(c.Arm.Key, c.Difference, 100, percentDecimals, differenceMethod, level)) with { Level = level, NoteRefs = [d] });
+            result._notes.Add(ResultNote.Footnote(d, NoteKind.StratifiedDifference, ("scoreInterval", mn), ("control", control.Label), ("level", level)));
+            var e = ResponderNotes.Cmh;
+            result._rows.Add(Row("cmh-p-value", "CMH p-value", indent, columns, stratified, c => WithStrata(CellFactory.PValueOf(c.Arm.Key, c.Test), c.StrataUsed))
+                with { NoteRefs = [e] });
+            result._notes.Add(ResultNote.Footnote(e, NoteKind.CmhTest, ("corrected", spec.Test == StratifiedTest.CmhCorrected), ("control", control.Label)));
             if (spec.Homogeneity)
             {
-                var f = letters.Next();
-                result._rows.Add(Row("homogeneity-p-value", $"Breslow-Day p-value {f}", indent, columns, stratified, c => CellFactory.PValueOf(c.Arm.Key, c.Homogeneity!)));
-                result._notes.Add($"{f} Breslow-Day test (Tarone's correction) of equal odds ratios; strata where all or none responded are left out.");
+                var f = ResponderNotes.Homogeneity;
+                result._rows.Add(Row("homogeneity-p-value", "Breslow-Day p-value", indent, columns, stratified, c => CellFactory.PValueOf(c.Arm.Key, c.Homogeneity!))
+                    with { NoteRefs = [f] });
+                result._notes.Add(ResultNote.Footnote(f, NoteKind.HomogeneityTest));
             }
         }
         var oddsMethod = settings.OddsRatioInterval;
         var ratioDecimals = settings.RatioDecimals;
         if (settings.Ratios.Contains(RatioMeasure.RelativeRisk))
         {
-            var g = letters.Next();
+            var g = ResponderNotes.RelativeRisk;
             var method = strata is null ? "Katz log" : "Mantel-Haenszel, Greenland-Robins";
-            result._rows.Add(Row("relative-risk", $"Relative risk {g}", indent, columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method)));
-            result._rows.Add(Row("relative-risk-ci", $"{levelText} CI {g}", indent, columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method)));
-            result._notes.Add(strata is null
-                ? $"{g} Relative risk of response (each arm / {control.Label}), log (Katz) {levelText} CI."
-                : $"{g} Mantel-Haenszel relative risk of response (each arm / {control.Label}), {levelText} CI from the Greenland-Robins variance.");
+            result._rows.Add(Row("relative-risk", "Relative risk", indent, columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method))
+                with { NoteRefs = [g] });
+            result._rows.Add(Row("relative-risk-ci", "{level} CI", indent, columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.RelativeRisk!, 1, ratioDecimals, method, level))
+                with { Level = level, NoteRefs = [g] });
+            result._notes.Add(ResultNote.Footnote(g, NoteKind.RelativeRisk, ("stratified", ofStrata), ("control", control.Label), ("level", level)));
         }
         if (settings.Ratios.Contains(RatioMeasure.OddsRatio))
         {
-            var h = letters.Next();
+            var h = ResponderNotes.OddsRatio;
             var describe = OddsRatioIntervalMethods.Describe(oddsMethod, strata is not null);
             var method = strata is null ? describe : $"Mantel-Haenszel, {describe}";
-            result._rows.Add(Row("odds-ratio", $"Odds ratio {h}", indent, columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method)));
-            result._rows.Add(Row("odds-ratio-ci", $"{levelText} CI {h}", indent, columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method)));
-            result._notes.Add(strata is null
-                ? $"{h} Odds ratio of response (each arm to {control.Label}), {describe} {levelText} CI."
-                : $"{h} Mantel-Haenszel odds ratio of response (each arm to {control.Label}), {describe} {levelText} CI.");
+            result._rows.Add(Row("odds-ratio", "Odds ratio", indent, columns, ratios, c => CellFactory.Estimate(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method))
+                with { NoteRefs = [h] });
+            result._rows.Add(Row("odds-ratio-ci", "{level} CI", indent, columns, ratios, c => CellFactory.Interval(c.Arm.Key, c.OddsRatio!, 1, ratioDecimals, method, level))
+                with { Level = level, NoteRefs = [h] });
+            result._notes.Add(ResultNote.Footnote(h, NoteKind.OddsRatio, ("stratified", ofStrata), ("method", describe), ("control", control.Label), ("level", level)));
         }
         if (strata is not null)
         {
@@ -84,24 +84,23 @@ public sealed class StratifiedAndRatioRows
 
     private void StrataNotes(ResponderStrata strata, IReadOnlyList<StratifiedComparison> stratified, IReadOnlyDictionary<string, int> populationOfStratum)
     {
-        _notes.Add($"Strata: each combination of {strata.VariablesText} values (ADSL); each comparison uses its two arms only.");
-        var remarks = new List<string>();
+        _notes.Add(ResultNote.Footnote("strata", NoteKind.StrataDefinition, ("variables", strata.Variables.ToList())));
         if (strata.EmptyCombinations.Count > 0)
         {
-            remarks.Add($"Empty {(strata.EmptyCombinations.Count == 1 ? "stratum" : "strata")} (no subject of the population): {string.Join("; ", strata.EmptyCombinations)}.");
+            _warnings.Add(ResultNote.Warning(NoteKind.EmptyStrata, NoteSubject.None, ("strata", strata.EmptyCombinations.ToList())));
         }
         var single = strata.Levels.Where(l => populationOfStratum.GetValueOrDefault(l) == 1).ToList();
         if (single.Count > 0)
         {
-            remarks.Add($"{(single.Count == 1 ? "Stratum" : "Strata")} with one subject in the population: {string.Join("; ", single)}.");
+            _warnings.Add(ResultNote.Warning(NoteKind.SingleSubjectStrata, NoteSubject.None, ("strata", single)));
         }
         if (strata.WithoutValue > 0)
         {
-            remarks.Add($"{strata.WithoutValue} subject{(strata.WithoutValue == 1 ? " has" : "s have")} no value of {strata.VariablesText} and {(strata.WithoutValue == 1 ? "is" : "are")} left out of the stratified analysis.");
+            _warnings.Add(ResultNote.Warning(NoteKind.NoStratumValue, NoteSubject.None, ("subjects", strata.WithoutValue),
+                ("variables", strata.Variables.ToList()), ("leftOutOf", "stratified-analysis")));
         }
-        remarks.AddRange(stratified.SelectMany(c => c.Notes));
         // Warnings go to the run log and are printed under the table as "Warning: ..." footnotes by the layout.
-        _warnings.AddRange(remarks);
+        _warnings.AddRange(stratified.SelectMany(c => c.Notes));
     }
 
     private static ResultCell WithStrata(ResultCell cell, int strataUsed) =>

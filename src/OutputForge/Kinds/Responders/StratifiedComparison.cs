@@ -1,5 +1,6 @@
 using System.Text.RegularExpressions;
 using OutputForge.Analysis;
+using OutputForge.Results;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Responders;
@@ -19,12 +20,12 @@ public sealed partial record StratifiedComparison(
     IntervalResult? RelativeRisk,
     IntervalResult? OddsRatio,
     int StrataUsed,
-    IReadOnlyList<string> Notes)
+    IReadOnlyList<ResultNote> Notes)
 {
     public static StratifiedComparison Compute(TreatmentArm arm, TreatmentArm control, IReadOnlyList<ResponderSubject> subjects,
         ResponderStrata strata, ResponderStratification spec, double level, bool withRelativeRisk, OddsRatioIntervalMethod? oddsRatioMethod)
     {
-        var notes = new List<string>();
+        var notes = new List<ResultNote>();
         var used = new List<StratumCounts>();
         var usedNames = new List<string>();
         // One pass sorts the two arms' subjects into their strata, rather than one scan of all subjects per stratum.
@@ -55,9 +56,10 @@ public sealed partial record StratifiedComparison(
             if (active.Count == 0 || reference.Count == 0)
             {
                 var count = active.Count + reference.Count;
+                var subject = new NoteSubject(Arm: arm.Label, Control: control.Label, Stratum: [stratum]);
                 notes.Add(count == 0
-                    ? $"{arm.Label} vs {control.Label}: stratum {stratum} has no subjects in these two arms and was left out."
-                    : $"{arm.Label} vs {control.Label}: stratum {stratum} ({(count == 1 ? "1 subject" : $"{count} subjects")}) has no subjects of {(active.Count == 0 ? arm.Label : control.Label)} and was left out.");
+                    ? ResultNote.Warning(NoteKind.DroppedStratum, subject, ("subjects", 0))
+                    : ResultNote.Warning(NoteKind.DroppedStratum, subject, ("subjects", count), ("withoutArm", active.Count == 0 ? arm.Label : control.Label)));
                 continue;
             }
             used.Add(new StratumCounts(active.Count(s => s.Responded), active.Count, reference.Count(s => s.Responded), reference.Count));
@@ -75,13 +77,13 @@ public sealed partial record StratifiedComparison(
             OddsRatioIntervalMethod.Woolf => MantelHaenszelOddsRatio.Compute(used, level),
             _ => throw new ArgumentOutOfRangeException(nameof(oddsRatioMethod), oddsRatioMethod, "Unknown odds ratio interval."),
         };
-        var prefix = $"{arm.Label} vs {control.Label}: ";
+        var remarks = new HashSet<string>(StringComparer.Ordinal);
         foreach (var note in difference.Notes.Concat(test.Notes).Concat(homogeneity?.Notes ?? []).Concat(relativeRisk?.Notes ?? []).Concat(oddsRatio?.Notes ?? []))
         {
-            var named = prefix + StratumNumber().Replace(note, m => $"Stratum {usedNames[int.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture) - 1]} ", 1);
-            if (!notes.Contains(named, StringComparer.Ordinal))
+            var named = StratumNumber().Replace(note, m => $"Stratum {usedNames[int.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture) - 1]} ", 1);
+            if (remarks.Add(named))
             {
-                notes.Add(named);
+                notes.Add(ResultNote.Warning(NoteKind.MethodRemark, new NoteSubject(Arm: arm.Label, Control: control.Label), ("text", named)));
             }
         }
         return new StratifiedComparison(arm, difference, test, homogeneity, relativeRisk, oddsRatio, used.Count, notes);

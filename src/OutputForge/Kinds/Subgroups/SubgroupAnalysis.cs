@@ -56,9 +56,13 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         }
 
         var armColumns = selection.Arms.Select(a => new ResultColumn(a.Key, a.Label, selection.Count(a))).ToList();
-        var effectColumns = active.Select(a => new ResultColumn(EffectKey(a, control), $"{a.Label}\nvs {control.Label}\n{measure.Label}\n({level} CI) [a]", null)).ToList();
+        var effectColumns = active.Select(a => new ResultColumn(EffectKey(a, control), $"{a.Label}\nvs {control.Label}\n{measure.Label}\n({{level}} CI)", null)
+        {
+            Level = statistics.Level,
+            NoteRefs = [EffectNote],
+        }).ToList();
         var columns = armColumns.Concat(effectColumns).ToList();
-        var warnings = new List<string>(selection.Warnings);
+        var warnings = new List<ResultNote>();
         var plot = new List<ForestPlotRow>();
 
         ResultRow CountRow(string key, string label, int indent, IEnumerable<KeyValuePair<string, TreatmentArm>> subjects, string where)
@@ -72,11 +76,11 @@ public sealed class SubgroupAnalysis : ITableAnalysis
                 var effect = Effect(measure, counts[arm], counts[control], settings.MinimumPerArm, arm, control);
                 effects.Add(effect);
                 cells.Add(SubgroupCells.Effect(EffectKey(arm, control), effect, measure));
-                var what = $"{where}, {arm.Label} vs {control.Label}";
-                warnings.AddRange(effect.Notes.Select(n => $"{what}: {n}"));
+                var what = new NoteSubject(What: where, Arm: arm.Label, Control: control.Label);
+                warnings.AddRange(effect.Notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark, what, ("text", n))));
                 if (!effect.IsEstimable)
                 {
-                    warnings.Add($"{what}: {measure.Label.Replace(", %", string.Empty, StringComparison.Ordinal).ToLowerInvariant()} not estimated: {effect.NotEstimableReason}.");
+                    warnings.Add(ResultNote.Warning(NoteKind.EffectNotEstimated, what, ("measure", measure.Code), ("reason", effect.NotEstimableReason!)));
                 }
             }
             plot.Add(new ForestPlotRow(label, indent, effects));
@@ -102,30 +106,43 @@ public sealed class SubgroupAnalysis : ITableAnalysis
                 columns, active, control, warnings));
         }
 
-        var notes = new List<string>
+        var notes = new List<ResultNote>
         {
-            missingAreNonResponders
-                ? $"n/N (%) = responders / subjects of the {selection.Label} in the arm and subgroup; subjects with no assessment are counted as non-responders. Endpoint: {endpoint.Label ?? endpoint.Response}."
-                : $"n/N (%) = responders / subjects evaluated in the arm and subgroup; subjects with no assessment are excluded. Endpoint: {endpoint.Label ?? endpoint.Response}.",
-            $"[a] {measure.Note(control.Label, level)} NE where an arm compared has fewer than {settings.MinimumPerArm} subjects in the subgroup, or where the method gives no estimate (reason under Warning).",
-            "[b] " + InteractionNote(settings.Interaction, control),
-            "Subgroup levels: " + string.Join("; ", variables.Select(v => $"{v.Label} ({v.Name}), {v.OrderNote}")) + ".",
+            ResultNote.Footnote("counts", NoteKind.SubgroupCounts, ("nonResponders", missingAreNonResponders), ("population", selection.Label),
+                ("endpoint", endpoint.Label ?? endpoint.Response!)),
+            measure.Note(EffectNote, control.Label, settings.MinimumPerArm),
+            ResultNote.Footnote(InteractionNote, NoteKind.SubgroupInteraction, ("method", settings.Interaction switch
+            {
+                InteractionTest.BreslowDay => "breslow-day",
+                InteractionTest.BreslowDayTarone => "breslow-day-tarone",
+                _ => "likelihood-ratio",
+            }), ("control", control.Label)),
+            ResultNote.Footnote("levels", NoteKind.SubgroupLevels, ("labels", variables.Select(v => v.Label).ToList()),
+                ("variables", variables.Select(v => v.Name).ToList()), ("orders", variables.Select(v => v.Order).ToList())),
         };
-        TableResult Result() => new(table.Id, table.Title, selection.Label, columns, rows, notes, warnings.Distinct().ToList(), table.Footnotes,
-            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), statistics.PercentDecimals, statistics.PValueFloor);
+        // The same remark can arise for several rows (e.g. a level and the overall row): each is said once.
+        TableResult Result() => new(table.Id, table.Title, selection.Label, columns, rows, [], selection.Warnings.Distinct().ToList(), table.Footnotes,
+            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), statistics.PercentDecimals, statistics.PValueFloor)
+        {
+            Notes = [.. notes, .. warnings.DistinctBy(NoteIdentity.Of)],
+        };
         if (!settings.ForestPlot)
         {
             return Result();
         }
         if (ForestPlotPicture.FontWarning() is { } fontWarning)
         {
-            warnings.Add(fontWarning);
+            warnings.Add(ResultNote.Warning(NoteKind.Text, NoteSubject.None, ("text", fontWarning)));
         }
         var forest = new ForestPlot(table.Id, plot, active.Select(a => a.Label).ToList(), control.Label, measure, level);
         return Result() with { Figure = ForestPlotPicture.Draw(forest) };
     }
 
     private static string EffectKey(TreatmentArm arm, TreatmentArm control) => $"{arm.Key}-vs-{control.Key}";
+
+    private const string EffectNote = "effect";
+
+    private const string InteractionNote = "interaction";
 
     /// <summary>The effect, unless an arm compared is below the spec's minimum size in the subjects counted.</summary>
     private static IntervalResult Effect(SubgroupMeasure measure, ResponderCounts active, ResponderCounts control, int minimum,
@@ -143,7 +160,7 @@ public sealed class SubgroupAnalysis : ITableAnalysis
 
     private static ResultRow InteractionRow(SubgroupVariable variable, string variableKey, InteractionTest method, PopulationSelection selection,
         EndpointRecords records, Expressions.Condition response, bool missingAreNonResponders, IReadOnlyList<ResultColumn> columns,
-        IReadOnlyList<TreatmentArm> active, TreatmentArm control, List<string> warnings)
+        IReadOnlyList<TreatmentArm> active, TreatmentArm control, List<ResultNote> warnings)
     {
         var cells = columns.Select(c => CellFactory.Empty(c.Key)).ToList();
         foreach (var arm in active)
@@ -156,24 +173,17 @@ public sealed class SubgroupAnalysis : ITableAnalysis
             }).ToList();
             var notes = new List<string>();
             var test = SubgroupInteraction.Compute(method, levelCells, notes);
-            var what = $"{variable.Label} interaction, {arm.Label} vs {control.Label}";
-            warnings.AddRange(notes.Select(n => $"{what}: {n}."));
+            var what = new NoteSubject(What: $"{variable.Label} interaction", Arm: arm.Label, Control: control.Label);
+            warnings.AddRange(notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark, what, ("text", n + "."))));
             if (!test.IsEstimable)
             {
-                warnings.Add($"{what}: no p-value: {test.NotEstimableReason}.");
+                warnings.Add(ResultNote.Warning(NoteKind.NoPValue, what, ("reason", test.NotEstimableReason!)));
             }
             var key = EffectKey(arm, control);
             cells[columns.ToList().FindIndex(c => c.Key == key)] = CellFactory.PValueOf(key, test);
         }
-        return new ResultRow(variableKey + "-interaction", "Interaction p [b]", 1, cells);
+        return new ResultRow(variableKey + "-interaction", "Interaction p", 1, cells) { NoteRefs = [InteractionNote] };
     }
-
-    private static string InteractionNote(InteractionTest method, TreatmentArm control) => method switch
-    {
-        InteractionTest.BreslowDay => $"Breslow-Day test of homogeneity of the odds ratios (arm vs {control.Label}) across the levels of the subgroup variable.",
-        InteractionTest.BreslowDayTarone => $"Breslow-Day test with Tarone's correction of homogeneity of the odds ratios (arm vs {control.Label}) across the levels of the subgroup variable.",
-        _ => $"Treatment-by-subgroup interaction: likelihood-ratio test of logistic regression models response ~ arm + subgroup + arm:subgroup vs response ~ arm + subgroup, fitted to the subjects of the arm and {control.Label}; no p-value under separation or non-convergence (reason under Warning).",
-    };
 
     private static ResultRow Blank(IReadOnlyList<ResultColumn> columns) =>
         new("blank", string.Empty, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Blank);

@@ -30,8 +30,8 @@ internal static class SubgroupCells
         return new ResultCell(column, "{estimate} ({lower}, {upper})",
         [
             new StatisticValue(Estimate, effect.Estimate * measure.Scale, ValueFormat.Decimal, measure.Decimals, Method: measure.Method),
-            new StatisticValue(Lower, effect.Lower * measure.Scale, ValueFormat.Decimal, measure.Decimals, Method: measure.Method),
-            new StatisticValue(Upper, effect.Upper * measure.Scale, ValueFormat.Decimal, measure.Decimals, Method: measure.Method),
+            new StatisticValue(Lower, effect.Lower * measure.Scale, ValueFormat.Decimal, measure.Decimals, Method: measure.Method) { Level = measure.Level, Sided = Sidedness.TwoSided },
+            new StatisticValue(Upper, effect.Upper * measure.Scale, ValueFormat.Decimal, measure.Decimals, Method: measure.Method) { Level = measure.Level, Sided = Sidedness.TwoSided },
         ]);
     }
 }

@@ -1,5 +1,6 @@
 using OutputForge.Analysis;
 using OutputForge.Kinds.Responders;
+using OutputForge.Results;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Subgroups;
@@ -31,11 +32,16 @@ internal sealed record SubgroupMeasure(EffectMeasure Name, string Label, string 
         _ => ProportionDifferenceInterval.Compute(active.Responders, active.Denominator, control.Responders, control.Denominator, DifferenceMethod, Level),
     };
 
-    /// <summary>The footnote describing the measure.</summary>
-    public string Note(string controlLabel, string levelText) => Name switch
+    /// <summary>The footnote describing the measure, and when a subgroup's effect is NE.</summary>
+    public ResultNote Note(string id, string controlLabel, int minimumPerArm) =>
+        ResultNote.Footnote(id, NoteKind.SubgroupEffect, ("measure", Code), ("method", Method), ("control", controlLabel), ("level", Level),
+            ("minimum", minimumPerArm));
+
+    /// <summary>The measure as notes name it: "difference", "odds-ratio" or "relative-risk".</summary>
+    public string Code => Name switch
     {
-        EffectMeasure.OddsRatio => $"Odds ratio of response (arm vs {controlLabel}) with the Woolf (logit) {levelText} confidence interval; not estimable when a cell of the 2 x 2 table is zero.",
-        EffectMeasure.RelativeRisk => $"Relative risk of response (arm vs {controlLabel}) with the Katz (log) {levelText} confidence interval; not estimable when an arm has no responders.",
-        _ => $"Difference in proportions of responders (arm minus {controlLabel}), in percentage points, with the {Method} {levelText} confidence interval.",
+        EffectMeasure.OddsRatio => "odds-ratio",
+        EffectMeasure.RelativeRisk => "relative-risk",
+        _ => "difference",
     };
 }

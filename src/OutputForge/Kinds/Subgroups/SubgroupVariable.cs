@@ -1,7 +1,7 @@
-using System.Globalization;
 using OutputForge.Data;
 using OutputForge.Expressions;
 using OutputForge.Naming;
+using OutputForge.Results;
 using OutputForge.Spec;
 
 namespace OutputForge.Kinds.Subgroups;
@@ -21,8 +21,13 @@ internal sealed record SubgroupVariable(
     int WithoutValue,
     IReadOnlyList<string> UnlistedValues,
     int WithUnlistedValue,
-    string OrderNote)
+    string Order)
 {
+    /// <summary><see cref="Order"/> of levels in the spec's order; otherwise <see cref="AlphabeticalOrder"/> or the name of the numeric variable that orders them.</summary>
+    public const string SpecOrder = "spec";
+
+    public const string AlphabeticalOrder = "alphabetical";
+
     /// <summary>The suffix of a variable's numeric companion, which orders its levels (ADaM: AGEGR1 -> AGEGR1N).</summary>
     public const string OrderSuffix = "N";
 
@@ -58,7 +63,7 @@ internal sealed record SubgroupVariable(
                 throw new SpecException(source.Problem(pointer + "/levels", $"level '{twice.Key}' of {column.Name} is listed more than once"));
             }
             levels = listed.Select(l => new SubgroupLevel(l.Value, l.Label ?? l.Value)).ToList();
-            orderNote = "levels in the order of the spec";
+            orderNote = SpecOrder;
         }
         else if (adsl.Find(column.Name + OrderSuffix) is { Kind: VariableKind.Number } companion)
         {
@@ -72,12 +77,12 @@ internal sealed record SubgroupVariable(
             }
             levels = present.OrderBy(v => rank.GetValueOrDefault(v, double.MaxValue)).ThenBy(v => v, StringComparer.Ordinal)
                 .Select(v => new SubgroupLevel(v, v)).ToList();
-            orderNote = $"levels ordered by {companion.Name}";
+            orderNote = companion.Name;
         }
         else
         {
             levels = present.Order(StringComparer.Ordinal).Select(v => new SubgroupLevel(v, v)).ToList();
-            orderNote = "levels in alphabetical order";
+            orderNote = AlphabeticalOrder;
         }
 
         var index0 = levels.Select((l, i) => (l.Value, i)).ToDictionary(p => p.Value, p => p.i, StringComparer.Ordinal);
@@ -103,18 +108,17 @@ internal sealed record SubgroupVariable(
         return new SubgroupVariable(column.Name, spec.Label ?? column.Label ?? column.Name, levels, levelOfSubject, without, unlistedValues.ToList(), unlisted, orderNote);
     }
 
-    /// <summary>What the warnings must say about subjects that belong to no level.</summary>
-    public IEnumerable<string> Warnings()
+    /// <summary>The warnings about subjects that belong to no level.</summary>
+    public IEnumerable<ResultNote> Warnings()
     {
+        var subject = new NoteSubject(What: Label, Parameter: Name);
         if (WithoutValue > 0)
         {
-            yield return string.Create(CultureInfo.InvariantCulture,
-                $"{WithoutValue} subject{(WithoutValue == 1 ? " has" : "s have")} no value of {Name} and {(WithoutValue == 1 ? "is" : "are")} in no {Label} subgroup.");
+            yield return ResultNote.Warning(NoteKind.InNoSubgroup, subject, ("subjects", WithoutValue));
         }
         if (WithUnlistedValue > 0)
         {
-            yield return string.Create(CultureInfo.InvariantCulture,
-                $"{WithUnlistedValue} subject{(WithUnlistedValue == 1 ? " has" : "s have")} a value of {Name} that the spec does not list ({string.Join(", ", UnlistedValues.Select(v => $"'{v}'"))}) and {(WithUnlistedValue == 1 ? "is" : "are")} in no {Label} subgroup.");
+            yield return ResultNote.Warning(NoteKind.InNoSubgroup, subject, ("subjects", WithUnlistedValue), ("unlistedValues", UnlistedValues.ToList()));
         }
     }
 }

@@ -40,7 +40,7 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
         var censor = RecordVariable.Find(settings.Censor, dataset, data, table.Source, "/timeToEvent/censor");
         var strata = settings.Strata.Select((s, i) => RecordVariable.Find(s, dataset, data, table.Source, $"/timeToEvent/strata/{i}")).ToList();
         var ties = settings.Ties;
-        var warnings = new List<string>(selection.Warnings);
+        var warnings = new List<ResultNote>();
 
         var subjects = new List<TimeToEventSubject>();
         var missingStratum = 0;
@@ -73,7 +73,7 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
         subjects.Sort((a, b) => string.CompareOrdinal(a.Subject, b.Subject));
         if (missingStratum > 0)
         {
-            warnings.Add($"{missingStratum} subject{(missingStratum == 1 ? " has" : "s have")} no value of {string.Join(", ", settings.Strata)} and {(missingStratum == 1 ? "is" : "are")} left out of the whole table.");
+            warnings.Add(ResultNote.Warning(NoteKind.NoStratumValue, NoteSubject.None, ("subjects", missingStratum), ("variables", settings.Strata.ToList())));
         }
 
         var columns = selection.Arms.Select(a => new ResultColumn(a.Key, a.Label, selection.Count(a))).ToList();
@@ -86,7 +86,7 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
         var comparisons = selection.Arms.Where(a => !a.IsControl)
             .Select(a => TimeToEventComparison.Compute(a, control, subjects, strata.Count > 0, ties, statistics.Level))
             .ToList();
-        var level = MethodCatalog.LevelText(statistics.Level);
+        var level = statistics.Level;
         var percent = statistics.PercentDecimals;
         var d = settings.Decimals;
         var cumulative = settings.Estimate == SurvivalEstimate.Event;
@@ -106,65 +106,93 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
             rows.Add(new ResultRow("no-record", "No record (not analysed), n", 1,
                 columns.Select(c => CellFactory.Count(c.Key, withoutRecord[Arm(selection, c)])).ToList()));
         }
-        rows.Add(new ResultRow("km", $"Kaplan-Meier estimate of time to event ({settings.Unit}) [a]", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
+        rows.Add(new ResultRow("km", $"Kaplan-Meier estimate of time to event ({settings.Unit})", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList())
+        {
+            NoteRefs = [MedianNote],
+        });
         var medians = selection.Arms.ToDictionary(a => a, a => curves[a].Median());
         rows.Add(new ResultRow("median", "Median", 2, columns.Select(c => MedianCell(c.Key, medians[Arm(selection, c)], curves[Arm(selection, c)], d)).ToList()));
-        rows.Add(new ResultRow("median-ci", $"{level} CI", 2, columns.Select(c => MedianIntervalCell(c.Key, medians[Arm(selection, c)], curves[Arm(selection, c)], d)).ToList()));
+        rows.Add(new ResultRow("median-ci", "{level} CI", 2, columns.Select(c => MedianIntervalCell(c.Key, medians[Arm(selection, c)], curves[Arm(selection, c)], d, level)).ToList())
+        {
+            Level = level,
+        });
 
         var timeLabels = settings.TimeLabels;
         if (settings.Times.Count > 0)
         {
-            var what = cumulative ? "Probability of event by time, % (95% CI) [b]" : "Event-free probability, % (95% CI) [b]";
-            rows.Add(new ResultRow("km-estimates", what.Replace("95%", level, StringComparison.Ordinal), 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
+            var what = cumulative ? "Probability of event by time, % ({level} CI)" : "Event-free probability, % ({level} CI)";
+            rows.Add(new ResultRow("km-estimates", what, 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList())
+            {
+                Level = level,
+                NoteRefs = [SurvivalAtNote],
+            });
             for (var i = 0; i < settings.Times.Count; i++)
             {
                 var t = settings.Times[i];
                 var label = timeLabels is not null && i < timeLabels.Count ? timeLabels[i] : "Day " + t.ToString("0.###", CultureInfo.InvariantCulture);
                 rows.Add(new ResultRow("km-at-" + ResultKeys.FromLabel(t.ToString("0.###", CultureInfo.InvariantCulture)), label, 2,
-                    columns.Select(c => EstimateAtCell(c.Key, curves[Arm(selection, c)].At(t), cumulative, percent)).ToList()));
+                    columns.Select(c => EstimateAtCell(c.Key, curves[Arm(selection, c)].At(t), cumulative, percent, level)).ToList()));
             }
         }
         rows.Add(new ResultRow("blank", string.Empty, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Blank));
         rows.Add(Section("comparison", $"Comparison with {control.Label}", columns));
-        rows.Add(ComparisonRow("log-rank", $"Log-rank test p-value [c]", columns, comparisons, c => CellFactory.PValueOf(c.Arm.Key, c.LogRank)));
-        var coxMethod = $"Cox proportional hazards, {(ties == CoxTies.Efron ? "Efron" : "Breslow")} ties";
-        rows.Add(ComparisonRow("hazard-ratio", "Hazard ratio [d]", columns, comparisons,
-            c => CellFactory.Estimate(c.Arm.Key, c.HazardRatio, 1, settings.HazardRatioDecimals, coxMethod)));
-        rows.Add(ComparisonRow("hazard-ratio-ci", $"{level} CI", columns, comparisons,
-            c => CellFactory.Interval(c.Arm.Key, c.HazardRatio, 1, settings.HazardRatioDecimals, coxMethod)));
-
-        var strataText = settings.Strata.Count > 0 ? $"stratified by {string.Join(" and ", settings.Strata)}" : "unstratified";
-        var notes = new List<string>
+        rows.Add(ComparisonRow("log-rank", "Log-rank test p-value", columns, comparisons, c => CellFactory.PValueOf(c.Arm.Key, c.LogRank)) with
         {
-            $"Time in {settings.Unit}; {settings.Censor} = 1 marks a censored time. Percentages are of the subjects analysed.",
-            $"[a] Kaplan-Meier product-limit estimate; {level} CI of the median by the method of Brookmeyer and Crowley with the log-log transformation. NE: not reached (the curve or its confidence limit does not fall to 50%).",
-            $"[c] Two-sided p-value of the log-rank test, {strataText}, of each arm against {control.Label} (those two arms only).",
-            $"[d] Hazard ratio (arm vs {control.Label}) from a Cox proportional hazards model with treatment as the only covariate, {strataText}, fitted to the two arms compared; {(ties == CoxTies.Efron ? "Efron" : "Breslow")} method for tied times; Wald {level} CI. " +
-                (cumulative ? $"A hazard ratio above 1 means the event comes sooner than on {control.Label}." : $"A hazard ratio below 1 means a lower event rate than on {control.Label}."),
+            NoteRefs = [LogRankNote],
+        });
+        var coxMethod = $"Cox proportional hazards, {(ties == CoxTies.Efron ? "Efron" : "Breslow")} ties";
+        rows.Add(ComparisonRow("hazard-ratio", "Hazard ratio", columns, comparisons,
+            c => CellFactory.Estimate(c.Arm.Key, c.HazardRatio, 1, settings.HazardRatioDecimals, coxMethod)) with
+        {
+            NoteRefs = [HazardRatioNote],
+        });
+        rows.Add(ComparisonRow("hazard-ratio-ci", "{level} CI", columns, comparisons,
+            c => CellFactory.Interval(c.Arm.Key, c.HazardRatio, 1, settings.HazardRatioDecimals, coxMethod, level)) with
+        {
+            Level = level,
+        });
+
+        var stratification = settings.Strata.ToList();
+        var notes = new List<ResultNote>
+        {
+            ResultNote.Footnote("time-units", NoteKind.TimeUnits, ("unit", settings.Unit), ("censor", settings.Censor)),
+            ResultNote.Footnote(MedianNote, NoteKind.KaplanMeierMedian, ("level", level)),
         };
         if (settings.Times.Count > 0)
         {
-            notes.Insert(2, cumulative
-                ? $"[b] 100 x (1 - S(t)) from the Kaplan-Meier curve with the log-log {level} CI of S(t), complemented; NE beyond the arm's last observed time."
-                : $"[b] 100 x S(t) from the Kaplan-Meier curve with the log-log {level} CI (Greenwood variance); NE beyond the arm's last observed time.");
+            notes.Add(ResultNote.Footnote(SurvivalAtNote, NoteKind.KaplanMeierAtTimes, ("level", level), ("cumulative", cumulative)));
         }
+        notes.Add(ResultNote.Footnote(LogRankNote, NoteKind.LogRankTest, ("strata", stratification), ("control", control.Label)));
+        notes.Add(ResultNote.Footnote(HazardRatioNote, NoteKind.CoxHazardRatio, ("strata", stratification), ("control", control.Label),
+            ("ties", ties == CoxTies.Efron ? "Efron" : "Breslow"), ("level", level), ("cumulative", cumulative)));
         foreach (var c in comparisons)
         {
-            warnings.AddRange(c.LogRank.Notes.Select(n => $"{c.Arm.Label} vs {control.Label}, log-rank test: {n}."));
+            warnings.AddRange(c.LogRank.StratumRemarks.Select(r => ResultNote.Warning(NoteKind.StratumAddsNothing,
+                new NoteSubject(What: "log-rank test", Arm: c.Arm.Label, Control: control.Label, Stratum: [c.Strata[r.Stratum]]),
+                ("reason", StratumReasons.Code(r.Reason)))));
             if (!c.HazardRatio.IsEstimable)
             {
-                warnings.Add($"{c.Arm.Label} vs {control.Label}: the Cox model gives no hazard ratio: {c.HazardRatio.NotEstimableReason}.");
+                warnings.Add(ResultNote.Warning(NoteKind.NoHazardRatio, new NoteSubject(Arm: c.Arm.Label, Control: control.Label),
+                    ("reason", c.HazardRatio.NotEstimableReason!)));
             }
         }
-        // A median or bound "not reached" is explained by note [a]; it is a property of the data, not a failure.
-        warnings.AddRange(NotEstimableWarnings(rows.Where(r => r.Key is not ("median" or "median-ci"))));
-        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
-            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), percent, statistics.PValueFloor);
+        // A median or bound "not reached" is explained by the median's footnote; it is a property of the data, not a failure.
+        warnings.AddRange(NotEstimableNotes.Of(rows.Where(r => r.Key is not ("median" or "median-ci"))));
+        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, [], selection.Warnings, table.Footnotes,
+            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), percent, statistics.PValueFloor)
+        {
+            Notes = [.. notes, .. warnings],
+        };
     }
 
     private static TreatmentArm Arm(PopulationSelection selection, ResultColumn column) => selection.Arms.First(a => a.Key == column.Key);
 
     private const string Method = "Kaplan-Meier, Brookmeyer-Crowley log-log CI";
+
+    private const string MedianNote = "km-median";
+    private const string SurvivalAtNote = "km-at-times";
+    private const string LogRankNote = "log-rank";
+    private const string HazardRatioNote = "hazard-ratio";
 
     private static ResultCell MedianCell(string column, KaplanMeierQuantile median, KaplanMeierEstimate curve, int d) =>
         median.Estimate is { } m
@@ -173,20 +201,21 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
                 curve.Count == 0 ? "no subjects" : "the median is not reached", Method)]);
 
     /// <summary>"(lower, upper)", with NE standing in for a bound the confidence curve never reaches.</summary>
-    private static ResultCell MedianIntervalCell(string column, KaplanMeierQuantile median, KaplanMeierEstimate curve, int d)
+    private static ResultCell MedianIntervalCell(string column, KaplanMeierQuantile median, KaplanMeierEstimate curve, int d, double level)
     {
         if (curve.Count == 0)
         {
             return new ResultCell(column, "{lower}", [StatisticValue.NotEstimable(Lower, ValueFormat.Decimal, "no subjects", Method)]);
         }
-        StatisticValue Bound(string name, double? value) => value is { } v
+        StatisticValue Bound(string name, double? value) => (value is { } v
             ? new StatisticValue(name, v, ValueFormat.Decimal, d, Method: Method)
-            : StatisticValue.NotEstimable(name, ValueFormat.Decimal, $"the {(name == Lower ? "lower" : "upper")} confidence limit of the median is not reached", Method);
+            : StatisticValue.NotEstimable(name, ValueFormat.Decimal, $"the {(name == Lower ? "lower" : "upper")} confidence limit of the median is not reached", Method))
+            with { Level = level, Sided = Sidedness.TwoSided };
         var pattern = $"({(median.Lower is null ? Layout.CellText.NotEstimable : "{lower}")}, {(median.Upper is null ? Layout.CellText.NotEstimable : "{upper}")})";
         return new ResultCell(column, pattern, [Bound(Lower, median.Lower), Bound(Upper, median.Upper)]);
     }
 
-    private static ResultCell EstimateAtCell(string column, IntervalResult at, bool cumulative, int decimals)
+    private static ResultCell EstimateAtCell(string column, IntervalResult at, bool cumulative, int decimals, double level)
     {
         const string method = "Kaplan-Meier, log-log CI";
         if (!at.IsEstimable)
@@ -197,8 +226,8 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
         return new ResultCell(column, "{estimate} ({lower}, {upper})",
         [
             new StatisticValue(Estimate, 100 * estimate, ValueFormat.Percent, decimals, Method: method),
-            new StatisticValue(Lower, 100 * lower, ValueFormat.Percent, decimals, Method: method),
-            new StatisticValue(Upper, 100 * upper, ValueFormat.Percent, decimals, Method: method),
+            new StatisticValue(Lower, 100 * lower, ValueFormat.Percent, decimals, Method: method) { Level = level, Sided = Sidedness.TwoSided },
+            new StatisticValue(Upper, 100 * upper, ValueFormat.Percent, decimals, Method: method) { Level = level, Sided = Sidedness.TwoSided },
         ]);
     }
 
@@ -211,10 +240,4 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
             comparisons.FirstOrDefault(c => c.Arm.Key == column.Key) is { } comparison
                 ? cell(comparison)
                 : CellFactory.Empty(column.Key)).ToList());
-
-    private static IEnumerable<string> NotEstimableWarnings(IEnumerable<ResultRow> rows) =>
-        rows.SelectMany(r => r.Cells.SelectMany(c => c.Values
-                .Where(v => v.NotEstimableReason is not null)
-                .Select(v => $"NE (not estimable) in \"{r.Label}\", column {c.Column}: {v.NotEstimableReason}.")))
-            .Distinct();
 }

@@ -9,7 +9,8 @@ namespace OutputForge.Kinds.TimeToEvent;
 /// Wald interval. An arm without events makes the partial likelihood monotone: no hazard ratio is
 /// printed and the reason is given instead.
 /// </summary>
-internal sealed record TimeToEventComparison(TreatmentArm Arm, TestResult LogRank, IntervalResult HazardRatio, int Iterations)
+/// <param name="Strata">The values of each stratum index of the log-rank test's remarks ("F / &lt;65"); empty when unstratified.</param>
+internal sealed record TimeToEventComparison(TreatmentArm Arm, TestResult LogRank, IntervalResult HazardRatio, int Iterations, IReadOnlyList<string> Strata)
 {
     public static TimeToEventComparison Compute(TreatmentArm arm, TreatmentArm control, IReadOnlyList<TimeToEventSubject> subjects,
         bool stratified, CoxTies ties, double level)
@@ -18,20 +19,19 @@ internal sealed record TimeToEventComparison(TreatmentArm Arm, TestResult LogRan
         var data = new SurvivalData(pair.Select(s => s.Time).ToList(), pair.Select(s => s.Event).ToList());
         var group = pair.Select(s => s.Arm == arm ? 1 : 0).ToList();
         IReadOnlyList<int>? strata = null;
-        IReadOnlyList<string>? names = null;
+        List<string> levels = [];
         if (stratified)
         {
-            var levels = pair.Select(s => s.Stratum!).Distinct().Order(StringComparer.Ordinal).ToList();
+            // The remarks name a stratum by its values ("F / <65"), as the reader of the table knows it.
+            levels = pair.Select(s => s.Stratum!).Distinct().Order(StringComparer.Ordinal).ToList();
             strata = pair.Select(s => levels.IndexOf(s.Stratum!)).ToList();
-            // The notes name a stratum by its values ("'F / <65'"), as the reader of the table knows it.
-            names = levels.Select(l => $"'{l}'").ToList();
         }
-        var logRank = LogRankTest.Compute(data, group, strata, names);
+        var logRank = LogRankTest.Compute(data, group, strata);
         var withoutEvents = new[] { arm, control }.Where(a => !pair.Any(s => s.Arm == a && s.Event)).ToList();
         if (withoutEvents.Count > 0)
         {
             var reason = $"no events in {string.Join(" and ", withoutEvents.Select(a => a.Label))}; the Cox partial likelihood is monotone and has no finite maximum";
-            return new TimeToEventComparison(arm, logRank, IntervalResult.NotEstimable(reason), 0);
+            return new TimeToEventComparison(arm, logRank, IntervalResult.NotEstimable(reason), 0, levels);
         }
         var x = new double[pair.Count, 1];
         for (var i = 0; i < pair.Count; i++)
@@ -39,6 +39,6 @@ internal sealed record TimeToEventComparison(TreatmentArm Arm, TestResult LogRan
             x[i, 0] = group[i];
         }
         var fit = CoxProportionalHazards.Fit(data, x, ties, strata);
-        return new TimeToEventComparison(arm, logRank, fit.HazardRatio(0, level), fit.Iterations);
+        return new TimeToEventComparison(arm, logRank, fit.HazardRatio(0, level), fit.Iterations, levels);
     }
 }

@@ -37,21 +37,25 @@ public static class ChangesTextReport
             }
             foreach (var number in table.Numbers)
             {
-                output.WriteLine($"    {number.Before.Row} / {number.Before.Column} / {number.Before.Statistic} ({number.Before.RowLabel} / {number.Before.ColumnLabel}): {number.Before.Formatted} -> {number.After.Formatted}");
+                output.WriteLine($"    {number.Before.Row} / {number.Before.Column} / {number.Before.Statistic} ({OneLine(number.Before.RowLabel)} / {OneLine(number.Before.ColumnLabel)}): {OneLine(number.Before.Formatted)} -> {OneLine(number.After.Formatted)}");
             }
             foreach (var number in table.NumbersAdded)
             {
-                output.WriteLine($"    new: {number.Row} / {number.Column} / {number.Statistic} = {number.Formatted}");
+                output.WriteLine($"    new: {number.Row} / {number.Column} / {number.Statistic} = {OneLine(number.Formatted)}");
             }
             foreach (var number in table.NumbersRemoved)
             {
-                output.WriteLine($"    gone: {number.Row} / {number.Column} / {number.Statistic} (was {number.Formatted})");
+                output.WriteLine($"    gone: {number.Row} / {number.Column} / {number.Statistic} (was {OneLine(number.Formatted)})");
             }
         }
         var unchanged = changes.Tables.Where(t => t.Status == ChangeStatus.Unchanged).Select(t => t.Id).ToList();
         output.WriteLine();
         output.WriteLine($"Tables unchanged: {unchanged.Count}{(unchanged.Count == 0 ? "" : ": " + string.Join(", ", unchanged))}");
     }
+
+    /// <summary>A label of several lines (a column header "Placebo" over "(N=150)") on one line, so the report keeps one line per number.</summary>
+    public static string OneLine(string text) =>
+        string.Join(" ", text.Split(['\r', '\n'], StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries));
 
     public static string Describe(InputChange input) => input.Status switch
     {

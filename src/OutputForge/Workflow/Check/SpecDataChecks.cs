@@ -31,7 +31,7 @@ public static class SpecDataChecks
             try
             {
                 var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, data);
-                foreach (var warning in result.Warnings)
+                foreach (var warning in Layout.TableNotes.Of(result).Warnings)
                 {
                     report.Add(new CheckProblem(CheckSeverity.Warning, table.Source.File, "", $"table {table.Id}: {warning}",
                         "a run would print this warning in the table's footnotes; check that it is expected"));

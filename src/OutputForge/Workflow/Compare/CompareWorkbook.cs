@@ -20,6 +20,7 @@ public static class CompareWorkbook
             ["matched", result.Matched.ToString(System.Globalization.CultureInfo.InvariantCulture)],
             ["mismatched", result.Mismatched.ToString(System.Globalization.CultureInfo.InvariantCulture)],
             ["only in production", result.OnlyInProduction.Count.ToString(System.Globalization.CultureInfo.InvariantCulture)],
+            ["only in production counts", result.OnlyInProductionScope],
             ["only in QC", result.OnlyInQc.ToString(System.Globalization.CultureInfo.InvariantCulture)],
         ]);
         ReportSheet.Add(workbook, "Mismatches", NumberHeader, Rows(result, QcOutcome.Mismatched));

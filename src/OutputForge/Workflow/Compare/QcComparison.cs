@@ -25,7 +25,15 @@ public static class QcComparison
             var disagreement = ValueAgreement.Disagreement(record, line.Value, tolerance);
             checks.Add(new QcCheck(line, record, disagreement is null ? QcOutcome.Matched : QcOutcome.Mismatched, disagreement));
         }
-        var onlyInProduction = results.Records.Where(r => !named.Contains(r)).ToList();
-        return new CompareResult(results.File, qcFile, tolerance, checks, onlyInProduction);
+        // A QC file usually covers some tables: the numbers of tables it never names are not "only in production" but
+        // out of its scope, and are only counted as tables.
+        var mentioned = lines.Select(l => l.Table).ToHashSet(StringComparer.OrdinalIgnoreCase);
+        var onlyInProduction = results.Records.Where(r => mentioned.Contains(r.Table) && !named.Contains(r)).ToList();
+        var tables = results.Records.Select(r => r.Table).Distinct(StringComparer.OrdinalIgnoreCase).ToList();
+        return new CompareResult(results.File, qcFile, tolerance, checks, onlyInProduction)
+        {
+            TablesNamed = tables.Count(mentioned.Contains),
+            TablesNotNamed = tables.Count(t => !mentioned.Contains(t)),
+        };
     }
 }

@@ -36,6 +36,13 @@ public sealed partial class RecordLookup
         var cells = Narrow(rows, line.Column, r => r.Column, r => r.ColumnLabel, "column", out problem);
         if (cells is null)
         {
+            // The column may be one of the table's, only not one this row has a number in (e.g. a p-value row).
+            if (Narrow(records, line.Column, r => r.Column, r => r.ColumnLabel, "column", out _) is { } elsewhere)
+            {
+                var row = rows[0];
+                problem = $"row '{row.Row}' of table {row.Table} has no number in column '{elsewhere[0].Column}' " +
+                          $"(this row's columns: {string.Join(", ", rows.Select(r => r.Column).Distinct(StringComparer.Ordinal))})";
+            }
             return null;
         }
         // "n" (subjects in the cell) and "N" (denominator) differ only in case: match exactly first.

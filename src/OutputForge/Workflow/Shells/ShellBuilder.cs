@@ -18,7 +18,7 @@ public static class ShellBuilder
         PageSettings page, TemplateSet templates)
     {
         var records = ShellData.For(study, table);
-        var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, records.ToStudyData()) with { Warnings = [], Figure = null };
+        var result = Kinds.TableKinds.For(table).Analysis.Analyze(study, table, records.ToStudyData()).WithoutWarnings() with { Figure = null };
         var laidOut = Pipeline.TableLayOut.Build(study, table, result, studyLine, run, page, NumberDisplay.Placeholders, templates,
             document => ShellTemplateValues.For(study, table, result, document, run));
         return (laidOut, records.Assumptions);

@@ -12,16 +12,17 @@ namespace OutputForge.Workflow.Shells;
 /// </summary>
 public static class ShellPackage
 {
+    /// <param name="runTime">The time printed in the shells and stamped in their packages; null means now.</param>
     public static IReadOnlyList<string> Write(string specPath, string outputFolder, IReadOnlyList<ITableRenderer> renderers,
-        IReadOnlyList<string>? tables, IRunLog log)
+        IReadOnlyList<string>? tables, IRunLog log, DateTimeOffset? runTime = null)
     {
         using var outputLock = OutputLock.Acquire(outputFolder);
         var package = SpecLoader.Load(specPath);
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder, package.Folders);
-        var run = new RunFacts(DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
+        var run = new RunFacts(runTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
         var page = PackageRunner.PageFrom(study.Page);
-        var selected = TableSelection.Select(study, package.Tables, tables);
+        var selected = TableSelection.Select(package.Tables, tables);
         foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
         {
             log.Warning($"table {skipped.Id}: no shell yet for the table kind '{skipped.Kind}' (shells cover: {string.Join(", ", Kinds.TableKinds.Names)})");
@@ -41,8 +42,16 @@ public static class ShellPackage
         {
             foreach (var renderer in renderers)
             {
+                using var buffer = new MemoryStream();
+                renderer.Write(shell.Document, buffer);
+                var bytes = buffer.ToArray();
+                // As in a run: the same specs and time give the same bytes (the packages' entry times are the run time).
+                if (PackageNormalizer.IsPackage(bytes))
+                {
+                    bytes = PackageNormalizer.Normalize(bytes, run.RunTime);
+                }
                 using var stream = staging.Create(FileName(shell.Document.TableId, renderer.Extension));
-                renderer.Write(shell.Document, stream);
+                stream.Write(bytes);
             }
         }
         var files = staging.Commit();

@@ -18,7 +18,7 @@ public static class ShellTemplateValues
 
     public static ScriptObject For(StudySpec study, TableSpec table, TableResult result, TableDocument document, RunFacts run)
     {
-        var values = TemplateValues.For(study, table, result with { Warnings = [] }, document, run);
+        var values = TemplateValues.For(study, table, result.WithoutWarnings(), document, run);
         var tableValues = (ScriptObject)values["table"]!;
         tableValues["data_files"] = new ScriptArray
         {
