@@ -111,18 +111,26 @@ public static class CsvDatasetReader
             var keep = options.KeepOf(name);
             var columns = header.Select(h => keep is null || keep(h) ? new ColumnBuilder(h, capacity) : null).ToArray();
             var lines = new int[capacity];
-            var (rows, replaced) = ReadRecords(reader, path, header, columns, lines, 0, 0, options);
+            var probes = columns.Select(c => c is null ? new SkippedColumnProbe() : null).ToArray();
+            var (rows, replaced) = ReadRecords(reader, path, header, columns, lines, 0, 0, options, probes);
             if (replaced > 0)
             {
                 warn(ReplacedWarning(path, replaced));
             }
             var built = new List<DataColumn>(columns.Length);
             DataException? first = null;
-            foreach (var column in columns.OfType<ColumnBuilder>())
+            for (var c = 0; c < columns.Length; c++)
             {
                 try
                 {
-                    built.Add(column.Build(path));
+                    if (columns[c] is { } column)
+                    {
+                        built.Add(column.Build(path));
+                    }
+                    else if (SkippedColumnProbe.Problem([probes[c]!], path, header[c]) is { } skipped)
+                    {
+                        throw skipped;
+                    }
                 }
                 catch (DataException e) when (first is null || e.Line < first.Line)
                 {
@@ -156,7 +164,7 @@ public static class CsvDatasetReader
     /// values whose control characters were replaced.
     /// </summary>
     internal static (int Rows, int Replaced) ReadRecords(CsvReader reader, string path, string[] header, ColumnBuilder?[] columns,
-        int[] lines, int rowOffset, int lineOffset, DataReadOptions options)
+        int[] lines, int rowOffset, int lineOffset, DataReadOptions options, SkippedColumnProbe?[] probes)
     {
         var rows = 0;
         var replaced = 0;
@@ -179,7 +187,7 @@ public static class CsvDatasetReader
                 {
                     if (!reader.IsEmpty(c))
                     {
-                        CheckSkipped(reader, c, path, line, header[c], options, ref replaced);
+                        CheckSkipped(reader, c, path, line, header[c], options, ref replaced, probes[c]!);
                     }
                     continue;
                 }
@@ -248,9 +256,14 @@ public static class CsvDatasetReader
     /// length, control characters), so that a file is refused, or its values replaced and counted, alike whatever a run
     /// reads of it. Most fields pass on a look at their bytes; only a suspect one is decoded.
     /// </summary>
-    private static void CheckSkipped(CsvReader reader, int c, string path, int line, string variable, DataReadOptions options, ref int replaced)
+    private static void CheckSkipped(CsvReader reader, int c, string path, int line, string variable, DataReadOptions options, ref int replaced,
+        SkippedColumnProbe probe)
     {
         var utf8 = reader.GetSpan(c);
+        if (!(utf8.Length == 1 && utf8[0] == (byte)'.'))
+        {
+            probe.Add(utf8, () => reader.GetString(c), line);
+        }
         if (utf8.Length <= Math.Min(MaxFieldLength, Layout.DocumentText.MaxLength)
             && utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) < 0 && utf8.IndexOfAnyInRange((byte)0xEF, (byte)0xF4) < 0)
         {

@@ -26,6 +26,7 @@ public sealed class CsvFileParts
     private readonly int[] _starts;
     private readonly string[]? _header;
     private readonly ColumnBuilder?[][] _columns = [];
+    private readonly SkippedColumnProbe?[][] _probes = [];
     private readonly int[] _lines = [];
     private readonly int[] _rowOffsets = [];
     private readonly int[] _lineOffsets = [];
@@ -73,6 +74,9 @@ public sealed class CsvFileParts
         var stores = header.Select(h => keep is null || keep(h) ? new ColumnStore(capacity) : null).ToArray();
         _columns = Enumerable.Range(0, count)
             .Select(p => header.Select((h, c) => stores[c] is { } store ? new ColumnBuilder(h, store, _rowOffsets[p]) : null).ToArray())
+            .ToArray();
+        _probes = Enumerable.Range(0, count)
+            .Select(p => header.Select((h, c) => stores[c] is null ? new SkippedColumnProbe() : null).ToArray())
             .ToArray();
         _lines = new int[capacity];
         _read = new (int, int)[count];
@@ -133,7 +137,7 @@ public sealed class CsvFileParts
                 return;
             }
             _read[part] = CsvDatasetReader.ReadRecords(reader, _path, _header, _columns[part], _lines, _rowOffsets[part],
-                _lineOffsets[part], _options);
+                _lineOffsets[part], _options, _probes[part]);
         }
         catch (Exception)
         {
@@ -175,7 +179,10 @@ public sealed class CsvFileParts
         }
         var kept = Enumerable.Range(0, _header.Length).Where(c => _columns[0][c] is not null).ToArray();
         var columns = new DataColumn[kept.Length];
-        var errors = new DataException?[kept.Length];
+        // Errors by column, skipped variables included (a number no statistic can use is refused whatever a run reads).
+        var errors = Enumerable.Range(0, _header.Length)
+            .Select(c => _columns[0][c] is null ? SkippedColumnProbe.Problem(_probes.Select(part => part[c]!).ToList(), _path, _header[c]) : null)
+            .ToArray();
         Parallel.For(0, kept.Length, k =>
         {
             try
@@ -184,7 +191,7 @@ public sealed class CsvFileParts
             }
             catch (DataException e)
             {
-                errors[k] = e;
+                errors[kept[k]] = e;
             }
         });
         // An unusable number: the one on the earliest line (then the leftmost column), as a reader from the start finds it.

@@ -33,7 +33,9 @@ public static class PackageRunner
         var selected = TableSelection.Select(package.Tables, request.Tables);
         var dataWarnings = new List<string>();
         var reading = Stopwatch.StartNew();
-        var projection = request.ReadEveryColumn ? null : RunColumns.For(study, selected);
+        // With --combined and --tables the kept tables are rebuilt too (below), so the run reads what every table uses.
+        var projection = request.ReadEveryColumn ? null
+            : RunColumns.For(study, request.Combined && request.Tables is not null ? package.Tables : selected);
         var data = StudyData.Load(study, dataFolder,
             request.DataOptions with { ReadableFolders = package.Folders.Folders, Projection = projection }, dataWarnings.Add);
         log.Detail($"data: {data.Datasets.Count} datasets, {data.Datasets.Sum(d => File.Exists(d.File) ? new FileInfo(d.File).Length : 0) / 1e6:0.0} MB read in {reading.Elapsed.TotalMilliseconds:0} ms");
