@@ -17,7 +17,7 @@ public static class FailureReport
         {
             return work();
         }
-        catch (Workflow.TableSelectionException e)
+        catch (Pipeline.TableSelectionException e)
         {
             error.WriteLine($"outputforge: error: {e.Message}");
             return ExitCodes.Usage;

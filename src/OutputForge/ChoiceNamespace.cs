@@ -1,3 +1,3 @@
-// The typed option values (Analysis/Choices: the enums the method catalogue names) are read by the spec models, the
+// The typed option values (Choices: the enums the method catalogue names) are read by the spec models, the
 // kinds and the analyses alike; they are imported once here, as the Stats areas are in StatsNamespaces.cs.
-global using OutputForge.Analysis.Choices;
+global using OutputForge.Choices;

@@ -1,6 +1,6 @@
 using System.CommandLine;
 using OutputForge.Analysis;
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 using OutputForge.Cli.Calculator;
 using OutputForge.Stats;
 

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using OutputForge.Rendering;
+using OutputForge.Common;
 
 namespace OutputForge.Cli.Commands;
 

@@ -4,7 +4,7 @@ using OutputForge.Spec;
 
 namespace OutputForge.Analysis;
 
-/// <summary>The analysis of one table kind (<see cref="Kinds.ITableKind"/>): applies a table spec to the study data and returns its results.</summary>
+/// <summary>The analysis of one table kind (its part of <c>Kinds/ITableKind</c>): applies a table spec to the study data and returns its results.</summary>
 public interface ITableAnalysis
 {
     TableResult Analyze(StudySpec study, TableSpec table, StudyData data);

@@ -1,6 +1,7 @@
 using OutputForge.Data;
 using OutputForge.Naming;
 using OutputForge.Spec;
+using OutputForge.Results;
 
 namespace OutputForge.Analysis;
 

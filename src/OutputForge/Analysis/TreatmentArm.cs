@@ -1,3 +1,5 @@
+using OutputForge.Results;
+
 namespace OutputForge.Analysis;
 
 /// <summary>

@@ -1,5 +1,6 @@
 using System.Text;
 using CsvHelper;
+using OutputForge.Common;
 
 namespace OutputForge.Data;
 
@@ -212,36 +213,24 @@ public static class CsvDatasetReader
                     columns[c]!.AddText(repeated, line);
                     continue;
                 }
-                var value = reader.GetString(c);
-                if (value.EndsWith(' '))
+                // Trailing blanks, the document text limits and control characters: the rule of every reader (TextValueRule).
+                var value = TextValueRule.Unpadded(reader.GetString(c));
+                if (value is null)
                 {
-                    // Trailing blanks are the padding of fixed-length text in SAS transport files, not part of the value
-                    // (ADaM compares text without them): "S-001 " is subject S-001, and a value of blanks only is missing.
-                    value = value.TrimEnd(' ');
-                    if (value.Length == 0)
-                    {
-                        columns[c].AddMissing();
-                        continue;
-                    }
+                    columns[c]!.AddMissing();
+                    continue;
                 }
                 if (value.Length > MaxFieldLength)
                 {
                     throw new DataException(path, line, header[c],
                         FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
                 }
-                if (value.Length > Layout.DocumentText.MaxLength)
+                var read = value;
+                value = TextValueRule.Checked(value, options.ControlCharacters, ref replaced, out var problem, TextValueRule.MayHoldForbidden(utf8))
+                    ?? throw new DataException(path, line, header[c], problem!);
+                if (ReferenceEquals(value, read))
                 {
-                    throw new DataException(path, line, header[c], Layout.DocumentText.TooLong(value.Length));
-                }
-                // Control characters are single bytes below 0x20 in UTF-8, noncharacters start with a byte from 0xEF to
-                // 0xF4: look for them only when such a byte is present.
-                if ((utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0 || utf8.IndexOfAnyInRange((byte)0xEF, (byte)0xF4) >= 0)
-                    && ControlCharacters.IndexIn(value) >= 0)
-                {
-                    value = HandleControlCharacter(path, line, header[c], value, options, ref replaced);
-                }
-                else
-                {
+                    // Only values kept as read are remembered (RepeatedText).
                     repeats[c].Remember(utf8, value);
                 }
                 columns[c]!.AddText(value, line);
@@ -252,9 +241,9 @@ public static class CsvDatasetReader
     }
 
     /// <summary>
-    /// A field of a variable the run skips is neither typed nor stored, but held to the same limits as any value (its
-    /// length, control characters), so that a file is refused, or its values replaced and counted, alike whatever a run
-    /// reads of it. Most fields pass on a look at their bytes; only a suspect one is decoded.
+    /// A field of a variable the run skips is neither typed nor stored, but held to the same rule as any value
+    /// (<see cref="TextValueRule"/>: its length, control characters), so that a file is refused, or its values replaced
+    /// and counted, alike whatever a run reads of it. Most fields pass on a look at their bytes; only a suspect one is decoded.
     /// </summary>
     private static void CheckSkipped(CsvReader reader, int c, string path, int line, string variable, DataReadOptions options, ref int replaced,
         SkippedColumnProbe probe)
@@ -264,38 +253,23 @@ public static class CsvDatasetReader
         {
             probe.Add(utf8, () => reader.GetString(c), line);
         }
-        if (utf8.Length <= Math.Min(MaxFieldLength, Layout.DocumentText.MaxLength)
-            && utf8.IndexOfAnyInRange((byte)0, (byte)0x1F) < 0 && utf8.IndexOfAnyInRange((byte)0xEF, (byte)0xF4) < 0)
+        var mayHoldForbidden = TextValueRule.MayHoldForbidden(utf8);
+        if (utf8.Length <= Math.Min(MaxFieldLength, DocumentText.MaxLength) && !mayHoldForbidden)
         {
             return;
         }
-        var value = reader.GetString(c);
+        var value = TextValueRule.Unpadded(reader.GetString(c));
+        if (value is null)
+        {
+            return;
+        }
         if (value.Length > MaxFieldLength)
         {
             throw new DataException(path, line, variable,
                 FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
         }
-        if (value.Length > Layout.DocumentText.MaxLength)
-        {
-            throw new DataException(path, line, variable, Layout.DocumentText.TooLong(value.Length));
-        }
-        if (ControlCharacters.IndexIn(value) >= 0)
-        {
-            HandleControlCharacter(path, line, variable, value, options, ref replaced);
-        }
-    }
-
-    private static string HandleControlCharacter(string path, int line, string variable, string value,
-        DataReadOptions options, ref int replaced)
-    {
-        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
-        {
-            var at = ControlCharacters.IndexIn(value);
-            throw new DataException(path, line, variable,
-                $"the value holds {ControlCharacters.Describe(value, at)} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
-        }
-        replaced++;
-        return ControlCharacters.Replace(value);
+        _ = TextValueRule.Checked(value, options.ControlCharacters, ref replaced, out var problem, mayHoldForbidden)
+            ?? throw new DataException(path, line, variable, problem!);
     }
 
     internal static string[] Fields(CsvReader reader)

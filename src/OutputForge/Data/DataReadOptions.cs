@@ -1,3 +1,5 @@
+using OutputForge.Common;
+
 namespace OutputForge.Data;
 
 /// <summary>Options of reading datasets.</summary>

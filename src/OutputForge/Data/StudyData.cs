@@ -1,4 +1,5 @@
 using OutputForge.Spec;
+using OutputForge.Common;
 
 namespace OutputForge.Data;
 
@@ -125,7 +126,7 @@ public sealed class StudyData
             .OrderByDescending(w => opened[w.File]!.BytesOf(w.Part))
             .ToList();
         // Each core takes the next largest part when it is free.
-        Pipeline.InOrderParallel.For(parts.Count, w => opened[parts[w].File]!.Read(parts[w].Part));
+        InOrderParallel.For(parts.Count, w => opened[parts[w].File]!.Read(parts[w].Part));
         Parallel.For(0, files.Count, new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount }, i =>
         {
             if (opened[i] is not { } file)

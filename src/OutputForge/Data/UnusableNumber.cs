@@ -17,6 +17,9 @@ internal static partial class UnusableNumber
     /// </summary>
     public const double MaxMagnitude = 1e100;
 
+    /// <summary>Whether a number read is one OutputForge uses: finite and at most <see cref="MaxMagnitude"/> in magnitude.</summary>
+    public static bool IsUsable(double number) => Math.Abs(number) <= MaxMagnitude;
+
     /// <summary>Why the value cannot be used (the message after the quoted value), or null for a usable number or plain text.</summary>
     /// <param name="parsed">Whether the invariant-culture parser read the text as a number, giving <paramref name="number"/>.</param>
     public static string? Problem(string value, bool parsed, double number)

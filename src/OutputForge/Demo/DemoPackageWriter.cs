@@ -4,7 +4,7 @@ namespace OutputForge.Demo;
 /// Writes the demo study's data (data/) and specs (specs/) into a folder: first into a staging
 /// folder beside it, then moved into place, so an interrupted demo leaves no half-written file.
 /// </summary>
-public static class DemoPackageWriter
+internal static class DemoPackageWriter
 {
     /// <summary>Returns the study file's path under <paramref name="root"/>.</summary>
     public static string Write(string root, DemoStudyOptions options) => Write(root, options, DemoDataFormat.Csv);

@@ -1,7 +1,7 @@
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using OutputForge.Analysis;
-using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Kinds;
 
@@ -35,7 +35,7 @@ public interface ITableKind
 
     /// <summary>
     /// Whether the run takes its tables up before all others: a kind several times slower than the rest, so that the
-    /// run does not end with one core on it while the others wait (<see cref="Pipeline.TableWorkOrder"/>).
+    /// run does not end with one core on it while the others wait (<c>Pipeline/TableWorkOrder</c>).
     /// </summary>
     bool RunsFirst { get; }
 

@@ -2,6 +2,7 @@ using OutputForge.Layout;
 using OutputForge.Rendering;
 using OutputForge.Rendering.Excel;
 using OutputForge.Rendering.Word;
+using OutputForge.Common;
 
 namespace OutputForge.Pipeline;
 

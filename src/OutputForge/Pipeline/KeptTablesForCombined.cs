@@ -2,7 +2,8 @@ using System.Globalization;
 using System.Security.Cryptography;
 using OutputForge.Layout;
 using OutputForge.Spec;
-using OutputForge.Workflow.Manifest;
+using OutputForge.Pipeline.Manifest;
+using OutputForge.Common;
 
 namespace OutputForge.Pipeline;
 

@@ -2,18 +2,13 @@ namespace OutputForge.Pipeline;
 
 /// <summary>
 /// File names derived from table ids. Ids are restricted by the table schema to letters, digits,
-/// dots, dashes and underscores; this guard keeps any other id from leaving the output folder.
+/// dots, dashes and underscores, and to <see cref="Spec.TableIds.MaxLength"/> characters; this guard keeps any other id
+/// from leaving the output folder.
 /// </summary>
 public static class OutputFileNames
 {
     /// <summary>Base name of the combined document and workbook (all tables of a run).</summary>
     public const string Combined = "all-tables";
-
-    /// <summary>
-    /// The longest table id: table numbers are short ("14.2.1.1"); 64 characters keep every file named after the id
-    /// ("shell-" + id + "-forest.png") far inside the 255 a file name may hold, with room for the folder's path.
-    /// </summary>
-    public const int MaxTableIdLength = 64;
 
     public static string ForTable(string tableId, string extension)
     {

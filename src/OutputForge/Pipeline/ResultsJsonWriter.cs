@@ -14,7 +14,7 @@ public static class ResultsJsonWriter
     /// <param name="kept">When only some tables were produced: the existing entries of the others, written back in <paramref name="tableOrder"/>.</param>
     /// <param name="tableOrder">Every table id of the package, in package order (needed with <paramref name="kept"/>).</param>
     public static void Write(Stream output, string studyId, RunFacts run, IReadOnlyList<(LaidOutTable Table, IReadOnlyList<string> Warnings)> tables,
-        Workflow.KeptResults? kept = null, IReadOnlyList<string>? tableOrder = null)
+        KeptResults? kept = null, IReadOnlyList<string>? tableOrder = null)
     {
         var produced = tables.ToDictionary(t => t.Table.Document.TableId, StringComparer.Ordinal);
         RefuseAmbiguousKeys(tables);

@@ -19,7 +19,7 @@ public static class TableLayOut
         LaidOutTable laidOut;
         try
         {
-            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, display, PackageRunner.ColumnGroupsOf(study));
+            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, display, StudyColumnGroups.Of(study));
         }
         catch (ColumnGroupException e)
         {

@@ -5,7 +5,7 @@ using OutputForge.Rendering.Word;
 namespace OutputForge.Rendering;
 
 /// <summary>The output formats a run can write, by the names the command line accepts.</summary>
-public static class OutputFormats
+internal static class OutputFormats
 {
     public static readonly IReadOnlyList<string> Default = ["docx", "xlsx"];
 

@@ -1,7 +1,6 @@
 using System.Text.Json;
 using System.Text.Json.Serialization;
-using OutputForge.Analysis;
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 
 namespace OutputForge.Spec;
 

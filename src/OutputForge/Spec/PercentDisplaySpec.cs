@@ -1,5 +1,4 @@
-using OutputForge.Analysis;
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 namespace OutputForge.Spec;
 
 /// <summary>How the percentages of "n (%)" cells are shown.</summary>

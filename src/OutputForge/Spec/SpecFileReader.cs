@@ -176,7 +176,7 @@ internal static class SpecFileReader
             var parent = Navigate(schemaRoot, evaluationPath[..^"/additionalProperties".Length]);
             var allowed = (parent?["properties"] as JsonObject)?.Select(p => p.Key).Where(k => k != "$schema").ToList() ?? [];
             var key = pointer[(pointer.LastIndexOf('/') + 1)..].Replace("~1", "/").Replace("~0", "~");
-            if (Analysis.MethodCatalog.RetiredKeys.FirstOrDefault(r => r.Old == key && allowed.Contains(r.New)) is { } retired)
+            if (MethodCatalog.RetiredKeys.FirstOrDefault(r => r.Old == key && allowed.Contains(r.New)) is { } retired)
             {
                 return source.KeyProblem(pointer, $"unknown key '{key}' (now called '{retired.New}')")
                     with { Code = SpecProblemCode.UnknownKey, Key = key, Expected = allowed, Suggestion = retired.New };
@@ -235,7 +235,7 @@ internal static class SpecFileReader
         var names = allowed.Select(v => v is JsonValue value && value.TryGetValue<string>(out var name) ? name : v?.ToJsonString() ?? "null").ToList();
         var listed = string.Join(", ", allowed.Select(v => v?.ToJsonString()));
         var written = ValueAt(root, pointer) is { ValueKind: JsonValueKind.String } element ? element.GetString() : null;
-        var retired = written is null ? null : Analysis.MethodCatalog.All
+        var retired = written is null ? null : MethodCatalog.All
             .Where(set => set.Names.SequenceEqual(names))
             .SelectMany(set => set.Retired)
             .FirstOrDefault(r => r.Old == written);

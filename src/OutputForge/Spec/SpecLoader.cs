@@ -147,10 +147,10 @@ public static class SpecLoader
         var ids = new Dictionary<string, TableSpec>(StringComparer.OrdinalIgnoreCase);
         foreach (var table in tables)
         {
-            if (table.Id.Length > Pipeline.OutputFileNames.MaxTableIdLength)
+            if (table.Id.Length > TableIds.MaxLength)
             {
                 yield return table.Source.Problem("/id",
-                    $"the table id is {table.Id.Length} characters long; at most {Pipeline.OutputFileNames.MaxTableIdLength} fit, as it names the table's output files (table-<id>.docx, ...)");
+                    $"the table id is {table.Id.Length} characters long; at most {TableIds.MaxLength} fit, as it names the table's output files (table-<id>.docx, ...)");
             }
             if (ids.TryGetValue(table.Id, out var first))
             {

@@ -1,3 +1,4 @@
+
 namespace OutputForge.Spec;
 
 /// <summary>

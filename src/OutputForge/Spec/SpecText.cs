@@ -1,5 +1,5 @@
 using System.Text.Json;
-using OutputForge.Layout;
+using OutputForge.Common;
 
 namespace OutputForge.Spec;
 

@@ -1,5 +1,4 @@
-using OutputForge.Analysis;
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 using System.Text.Json.Nodes;
 using System.Text.Json.Serialization;
 using OutputForge.Stats;

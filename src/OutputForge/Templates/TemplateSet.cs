@@ -5,6 +5,7 @@ using Scriban;
 using Scriban.Parsing;
 using Scriban.Runtime;
 using Scriban.Syntax;
+using OutputForge.Common;
 
 namespace OutputForge.Templates;
 
@@ -96,7 +97,7 @@ public sealed class TemplateSet : ITemplateLoader
             var output = template.Render(context);
             foreach (var line in output.Split('\n'))
             {
-                if (Layout.DocumentText.Problem(line) is { } problem)
+                if (DocumentText.Problem(line) is { } problem)
                 {
                     throw new TemplateException($"{SourceOf(name)}: template error: a line of the template's output cannot go into a table: {problem}");
                 }

@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using OutputForge.Kinds.Responders;
 using OutputForge.Data;
@@ -24,8 +25,8 @@ public sealed class ExactOddsRatioResponderTests
         {
             var active = i > 5;
             var responder = active ? i <= 9 : i <= 2;
-            adsl.Append($"T1,T1-{i:000},{(active ? "Active,1" : "Placebo,0")},Y\n");
-            adeff.Append($"T1,T1-{i:000},RESP,Week 4,{(responder ? "Y" : "N")},Y\n");
+            adsl.Append(CultureInfo.InvariantCulture, $"T1,T1-{i:000},{(active ? "Active,1" : "Placebo,0")},Y\n");
+            adeff.Append(CultureInfo.InvariantCulture, $"T1,T1-{i:000},RESP,Week 4,{(responder ? "Y" : "N")},Y\n");
         }
         return (adsl.ToString(), adeff.ToString());
     }

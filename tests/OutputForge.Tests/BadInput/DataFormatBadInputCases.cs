@@ -48,6 +48,16 @@ public static class DataFormatBadInputCases
         return copy;
     }
 
+    /// <summary>The last occurrence of the ASCII <paramref name="text"/> replaced by <paramref name="bytes"/> of the same length.</summary>
+    private static byte[] ReplaceLast(byte[] bytes, string text, byte[] replacement)
+    {
+        var copy = bytes.ToArray();
+        var at = copy.AsSpan().LastIndexOf(Encoding.ASCII.GetBytes(text));
+        if (at < 0 || replacement.Length != text.Length) throw new InvalidOperationException($"'{text}' is not in the file");
+        replacement.CopyTo(copy, at);
+        return copy;
+    }
+
     /// <summary>The offset of the namestr header record (the eighth record).</summary>
     private const int NamestrHeader = 7 * 80;
 
@@ -66,6 +76,10 @@ public static class DataFormatBadInputCases
         yield return Case("xpt: namestr count too low", "xpt", b => Replace(b, NamestrHeader + 54, "0005"), "namestr count disagrees");
         yield return Case("xpt: namestr count not a number", "xpt", b => Replace(b, NamestrHeader + 54, "00x6"), "record 8", "expected a number");
         yield return Case("xpt: two members", "xpt", b => [.. b, .. b[(3 * 80)..]], "more than one dataset");
+        yield return Case("xpt: control character in a value", "xpt", b => ReplaceLast(b, "Placebo", [(byte)'P', 1, .. "acebo"u8]),
+            "variable TRT01P", "row 2", "control character U+0001 at character 2", "--control-characters replace");
+        yield return Case("xpt: noncharacter U+FFFE in a value", "xpt", b => ReplaceLast(b, "Placebo", [.. "Plac"u8, 0xEF, 0xBF, 0xBE]),
+            "variable TRT01P", "row 2", "noncharacter U+FFFE at character 5");
 
         // Dataset-JSON 1.1
         yield return Case("dataset-json: unterminated", "json", b => b[..^40], "invalid JSON", "unterminated");
@@ -82,5 +96,17 @@ public static class DataFormatBadInputCases
         yield return JsonCase("ndjson: a row shorter than the columns", "ndjson", ",\"Y\",66]", ",\"Y\"]", "row 4 has 5 values");
         yield return JsonCase("ndjson: records disagree", "ndjson", "\"records\":5", "\"records\":4", "\"records\" gives 4 rows, but the file holds 5");
         yield return Case("ndjson: unterminated row", "ndjson", b => b[..^4], "invalid JSON", "unterminated");
+
+        // the value rules of every format (as for CSV): unusable numbers, text a document cannot hold, encoding
+        yield return JsonCase("dataset-json: a number beyond the double range", "json", ",\"Y\",66]", ",\"Y\",1e400]", "row 4, column AGE", "'1e400' overflows");
+        yield return JsonCase("dataset-json: a number beyond 1e100", "json", ",\"Y\",66]", ",\"Y\",-1e300]", "row 4, column AGE", "'-1e300' is beyond 1e100 in magnitude");
+        yield return JsonCase("ndjson: a number beyond 1e100", "ndjson", ",\"Y\",66]", ",\"Y\",1e300]", "row 4, column AGE", "'1e300' is beyond 1e100");
+        yield return JsonCase("dataset-json: a control character escape in a value", "json", "\"Active\"", "\"Act\\u0001ive\"", "row 3, column TRT01P", "control character U+0001 at character 4", "--control-characters replace");
+        yield return JsonCase("dataset-json: a lone surrogate escape in a value", "json", "\"Active\"", "\"Act\\ud800ive\"", "row 3, column TRT01P", "lone UTF-16 surrogate U+D800");
+        yield return JsonCase("dataset-json: noncharacter U+FFFE in a value", "json", "\"Active\"", "\"Active\uFFFE\"", "row 3, column TRT01P", "noncharacter U+FFFE at character 7");
+        yield return JsonCase("ndjson: noncharacter U+FDD0 in a value", "ndjson", "\"Active\"", "\"\uFDD0Active\"", "row 3, column TRT01P", "noncharacter U+FDD0 at character 1");
+        yield return JsonCase("dataset-json: a value of 40,000 characters", "json", "\"Active\"", $"\"{new string('A', 40_000)}\"", "row 3, column TRT01P", "40,000 characters long, more than the 32,767");
+        yield return Case("dataset-json: a value that is not UTF-8", "json", b => ReplaceLast(b, "Active", [.. "Activ"u8, 0xE9]), "row 5, column TRT01P", "not valid UTF-8");
+        yield return JsonCase("dataset-json: a label with a lone surrogate escape", "json", "\"label\":\"AGE\"", "\"label\":\"A\\udc00\"", "in columns[5]", "lone UTF-16 surrogate escape");
     }
 }

@@ -57,7 +57,7 @@ public sealed class CommandLineTests
         using var study = new MiniStudy(table: MiniStudy.TableJson.Replace("ANL01FL = 'Y'", "ANL1FL = 'Y'"));
         var (code, error) = Run("run", "--spec", study.StudyFile, "--out", study.OutputFolder);
         Assert.Equal(ExitCodes.InputError, code);
-        var line = Assert.Single(error.Split('\n', StringSplitOptions.RemoveEmptyEntries), l => l.StartsWith("outputforge:"));
+        var line = Assert.Single(error.Split('\n', StringSplitOptions.RemoveEmptyEntries), l => l.StartsWith("outputforge:", StringComparison.Ordinal));
         Assert.StartsWith("outputforge: error: ", line);
         Assert.Contains("t1.json:10:", line);
         Assert.Contains("$.endpoint.where", line);
@@ -77,7 +77,7 @@ public sealed class CommandLineTests
         File.WriteAllText(Path.Combine(study.DataFolder, "adeff.csv"), MiniStudy.Adeff + "T1,T1-001,RESP\n");
         var (code, error) = Run("run", "--spec", study.Folder, "--out", study.OutputFolder);
         Assert.Equal(ExitCodes.InputError, code);
-        var line = Assert.Single(error.Split('\n', StringSplitOptions.RemoveEmptyEntries), l => l.StartsWith("outputforge:"));
+        var line = Assert.Single(error.Split('\n', StringSplitOptions.RemoveEmptyEntries), l => l.StartsWith("outputforge:", StringComparison.Ordinal));
         Assert.Contains("adeff.csv line 6: the row has 3 fields but the header has 6", line);
         Assert.Equal(before, File.ReadAllBytes(results));
         Assert.Empty(Directory.GetDirectories(study.Folder, ".out.staging-*"));

@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using OutputForge.Stats.Exact;
 using OutputForge.Tests.Support;
@@ -47,7 +48,7 @@ public sealed class FisherMonteCarloFallbackTests
             {
                 for (var k = 0; k < Counts[level, arm]; k++)
                 {
-                    adsl.Append($"T3,T3-{++subject:D5},{Arms[arm]},{arm},Y,RACE {level + 1},{level + 1}\n");
+                    adsl.Append(CultureInfo.InvariantCulture, $"T3,T3-{++subject:D5},{Arms[arm]},{arm},Y,RACE {level + 1},{level + 1}\n");
                 }
             }
         }

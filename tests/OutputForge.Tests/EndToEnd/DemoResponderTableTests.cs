@@ -165,7 +165,7 @@ public sealed class DemoResponderTableTests(DemoRunFixture demo) : IClassFixture
     public void Every_document_carries_the_caution_and_the_source()
     {
         var paragraphs = DocumentReader.WordFooterParagraphs(demo.Output("table-14.2.1.1.docx"));
-        Assert.Contains(paragraphs, p => p.StartsWith("Source: tables/14.2.1.1-itch-responders-week12-itt.json") && p.Contains("verified under your own validated processes"));
+        Assert.Contains(paragraphs, p => p.StartsWith("Source: tables/14.2.1.1-itch-responders-week12-itt.json", StringComparison.Ordinal) && p.Contains("verified under your own validated processes"));
         var text = File.ReadAllText(demo.Output("table-14.2.1.1.txt"));
         Assert.Contains("Table 14.2.1.1", text);
         Assert.Contains("Intent-to-Treat Population", text);

@@ -1,6 +1,7 @@
 using OutputForge.Data;
 using OutputForge.Layout;
 using OutputForge.Tests.Support;
+using OutputForge.Common;
 
 namespace OutputForge.Tests.Layout;
 

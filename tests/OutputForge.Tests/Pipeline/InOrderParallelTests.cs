@@ -1,4 +1,5 @@
 using OutputForge.Pipeline;
+using OutputForge.Common;
 
 namespace OutputForge.Tests.Pipeline;
 

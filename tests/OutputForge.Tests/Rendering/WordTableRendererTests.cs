@@ -1,3 +1,4 @@
+using System.Globalization;
 using DocumentFormat.OpenXml.Packaging;
 using DocumentFormat.OpenXml;
 using DocumentFormat.OpenXml.Validation;
@@ -123,9 +124,9 @@ public sealed class WordTableRendererTests
         {
             var cells = bodyRows[r].Elements<TableCell>().ToList();
             var indentation = cells[0].Descendants<Indentation>().Single();
-            int firstLine = int.Parse(indentation.Left!.Value!) - int.Parse(indentation.Hanging!.Value!);
+            int firstLine = int.Parse(indentation.Left!.Value!, CultureInfo.InvariantCulture) - int.Parse(indentation.Hanging!.Value!, CultureInfo.InvariantCulture);
             Assert.Equal(document.Rows[r].Indent * WordTableBuilder.IndentTwips, firstLine);
-            Assert.Equal(WordTableBuilder.ContinuationLevels * WordTableBuilder.IndentTwips, int.Parse(indentation.Hanging!.Value!));
+            Assert.Equal(WordTableBuilder.ContinuationLevels * WordTableBuilder.IndentTwips, int.Parse(indentation.Hanging!.Value!, CultureInfo.InvariantCulture));
             Assert.Equal(JustificationValues.Left, cells[0].Descendants<Justification>().Single().Val!.Value);
             Assert.All(cells.Skip(1), c => Assert.Equal(JustificationValues.Center, c.Descendants<Justification>().Single().Val!.Value));
         }
@@ -136,7 +137,7 @@ public sealed class WordTableRendererTests
     {
         var document = ResponderTableFixture.LongTable();
         using var word = new WordDocumentReader(document);
-        var widths = word.Table.GetFirstChild<TableGrid>()!.Elements<GridColumn>().Select(g => int.Parse(g.Width!.Value!)).ToList();
+        var widths = word.Table.GetFirstChild<TableGrid>()!.Elements<GridColumn>().Select(g => int.Parse(g.Width!.Value!, CultureInfo.InvariantCulture)).ToList();
 
         // Letter landscape with 1 inch margins: 11 in - 2 in = 9 in = 12960 twips.
         Assert.Equal(12960, widths.Sum());
@@ -154,7 +155,7 @@ public sealed class WordTableRendererTests
             Rows = [new BodyRow(new string('x', 300), 0, [LayoutCell.Empty, LayoutCell.Empty, LayoutCell.Empty])],
         };
         using var word = new WordDocumentReader(document);
-        var widths = word.Table.GetFirstChild<TableGrid>()!.Elements<GridColumn>().Select(g => int.Parse(g.Width!.Value!)).ToList();
+        var widths = word.Table.GetFirstChild<TableGrid>()!.Elements<GridColumn>().Select(g => int.Parse(g.Width!.Value!, CultureInfo.InvariantCulture)).ToList();
 
         Assert.Equal((int)(12960 * WordColumnWidths.MaxLabelShare), widths[0]);
     }

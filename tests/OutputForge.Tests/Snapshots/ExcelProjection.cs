@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using ClosedXML.Excel;
 
@@ -16,15 +17,15 @@ public static class ExcelProjection
         var text = new StringBuilder();
         foreach (var sheet in workbook.Worksheets)
         {
-            text.Append($"sheet {sheet.Name}: font {sheet.Style.Font.FontName} {sheet.Style.Font.FontSize}\n");
+            text.Append(CultureInfo.InvariantCulture, $"sheet {sheet.Name}: font {sheet.Style.Font.FontName} {sheet.Style.Font.FontSize}\n");
             int lastColumn = sheet.LastColumnUsed()?.ColumnNumber() ?? 0;
             text.Append("  widths ").Append(string.Join(" ", Enumerable.Range(1, lastColumn).Select(c => sheet.Column(c).Width.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)))).Append('\n');
-            text.Append($"  frozen rows {sheet.SheetView.SplitRow}\n");
+            text.Append(CultureInfo.InvariantCulture, $"  frozen rows {sheet.SheetView.SplitRow}\n");
             text.Append("  merged ").Append(string.Join(" ", sheet.MergedRanges.Select(r => r.RangeAddress.ToString()).Order(StringComparer.Ordinal))).Append('\n');
             var page = sheet.PageSetup;
-            text.Append($"  print {page.PageOrientation} {page.PaperSize}, repeat rows {page.FirstRowToRepeatAtTop}-{page.LastRowToRepeatAtTop}, fit {page.PagesWide}x{page.PagesTall}\n");
+            text.Append(CultureInfo.InvariantCulture, $"  print {page.PageOrientation} {page.PaperSize}, repeat rows {page.FirstRowToRepeatAtTop}-{page.LastRowToRepeatAtTop}, fit {page.PagesWide}x{page.PagesTall}\n");
             if (sheet.AutoFilter.IsEnabled)
-                text.Append($"  autofilter {sheet.AutoFilter.Range.RangeAddress}\n");
+                text.Append(CultureInfo.InvariantCulture, $"  autofilter {sheet.AutoFilter.Range.RangeAddress}\n");
             foreach (var cell in sheet.CellsUsed(XLCellsUsedOptions.All))
             {
                 var flags = new List<string> { cell.DataType.ToString() };
@@ -39,7 +40,7 @@ public static class ExcelProjection
                     flags.Add("bottom " + cell.Style.Border.BottomBorder);
                 if (cell.Style.Font.Bold)
                     flags.Add("bold");
-                text.Append($"  {cell.Address} [{string.Join(", ", flags)}]: {cell.GetFormattedString().Replace("\n", "↵", StringComparison.Ordinal)}\n");
+                text.Append(CultureInfo.InvariantCulture, $"  {cell.Address} [{string.Join(", ", flags)}]: {cell.GetFormattedString().Replace("\n", "↵", StringComparison.Ordinal)}\n");
             }
         }
         return text.ToString();

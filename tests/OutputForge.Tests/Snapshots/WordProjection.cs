@@ -20,7 +20,7 @@ public static class WordProjection
         var main = document.MainDocumentPart!;
         var text = new StringBuilder();
         var defaults = main.StyleDefinitionsPart!.Styles!.DocDefaults!.RunPropertiesDefault!.RunPropertiesBaseStyle!;
-        text.Append($"font: {defaults.RunFonts!.Ascii} {defaults.FontSize!.Val} half-points\n");
+        text.Append(CultureInfo.InvariantCulture, $"font: {defaults.RunFonts!.Ascii} {defaults.FontSize!.Val} half-points\n");
         foreach (var element in main.Document.Body!.ChildElements)
         {
             switch (element)
@@ -45,7 +45,7 @@ public static class WordProjection
     {
         var size = section.GetFirstChild<PageSize>()!;
         var margin = section.GetFirstChild<PageMargin>()!;
-        text.Append($"section: page {size.Width}x{size.Height} {size.Orient?.Value.ToString() ?? "portrait"}, margins {margin.Top}/{margin.Bottom}/{margin.Left}/{margin.Right}, header {margin.Header}, footer {margin.Footer}")
+        text.Append(CultureInfo.InvariantCulture, $"section: page {size.Width}x{size.Height} {size.Orient?.Value.ToString() ?? "portrait"}, margins {margin.Top}/{margin.Bottom}/{margin.Left}/{margin.Right}, header {margin.Header}, footer {margin.Footer}")
             .Append(section.GetFirstChild<TitlePage>() is null ? "" : ", own first-page header")
             .Append('\n');
         foreach (var reference in section.Elements<HeaderReference>())

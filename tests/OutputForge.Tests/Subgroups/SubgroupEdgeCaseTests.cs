@@ -1,6 +1,7 @@
 using OutputForge.Spec;
 using OutputForge.Stats;
 using static OutputForge.Tests.Subgroups.SubgroupStudy;
+using OutputForge.Rendering.Figures;
 
 namespace OutputForge.Tests.Subgroups;
 
@@ -108,8 +109,8 @@ public sealed class SubgroupEdgeCaseTests
         Assert.Null(Analyze("""{ "variables": [ { "variable": "SEX" } ], "forestPlot": false }""", Balanced).Figure);
         var first = Analyze("""{ "variables": [ { "variable": "SEX" } ], "measure": "relative-risk" }""", Balanced).Figure!;
         var second = Analyze("""{ "variables": [ { "variable": "SEX" } ], "measure": "relative-risk" }""", Balanced).Figure!;
-        Assert.Equal(first.Png, second.Png);
-        Assert.Equal([0x89, (byte)'P', (byte)'N', (byte)'G'], first.Png.Take(4).ToArray());
+        Assert.Equal(FigurePainter.Paint(first).Png, FigurePainter.Paint(second).Png);
+        Assert.Equal([0x89, (byte)'P', (byte)'N', (byte)'G'], FigurePainter.Paint(first).Png.Take(4).ToArray());
         Assert.Equal("forest", first.Name);
         Assert.Contains("Forest plot for Table 9.1: relative risk", first.AltText);
         Assert.Contains("no effect is at 1", first.AltText);
@@ -120,9 +121,9 @@ public sealed class SubgroupEdgeCaseTests
     {
         // A run builds its tables in parallel, so several forest plots may be drawn at once.
         const string settings = """{ "variables": [ { "variable": "SEX" }, { "variable": "REGION1" } ], "minimumPerArm": 1 }""";
-        var alone = Analyze(settings, Balanced).Figure!.Png;
+        var alone = FigurePainter.Paint(Analyze(settings, Balanced).Figure!).Png;
         var together = new byte[6][];
-        Parallel.For(0, together.Length, i => together[i] = Analyze(settings, Balanced).Figure!.Png);
+        Parallel.For(0, together.Length, i => together[i] = FigurePainter.Paint(Analyze(settings, Balanced).Figure!).Png);
         Assert.All(together, png => Assert.Equal(alone, png));
     }
 }

@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using OutputForge.Kinds.Subgroups;
 using OutputForge.Data;
@@ -48,8 +49,8 @@ internal static class SubgroupStudy
             {
                 var id = $"T1-{++number:0000}";
                 var order = cell.Arm switch { "Placebo" => 0, "Low" => 1, _ => 2 };
-                adsl.Append($"T1,{id},{cell.Arm},{order},Y,{cell.Sex},{cell.Region}\n");
-                adeff.Append($"T1,{id},RESP,Week 4,{(i < cell.Responders ? "Y" : "N")}\n");
+                adsl.Append(CultureInfo.InvariantCulture, $"T1,{id},{cell.Arm},{order},Y,{cell.Sex},{cell.Region}\n");
+                adeff.Append(CultureInfo.InvariantCulture, $"T1,{id},RESP,Week 4,{(i < cell.Responders ? "Y" : "N")}\n");
             }
         }
         return (adsl.ToString(), adeff.ToString());

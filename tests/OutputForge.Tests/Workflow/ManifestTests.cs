@@ -1,5 +1,5 @@
 using OutputForge.Tests.Support;
-using OutputForge.Workflow.Manifest;
+using OutputForge.Pipeline.Manifest;
 
 namespace OutputForge.Tests.Workflow;
 

@@ -1,6 +1,7 @@
 using OutputForge.Layout;
 using OutputForge.Results;
 using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Tests.Workflow;
 

@@ -2,6 +2,7 @@ using OutputForge.Analysis;
 using OutputForge.Spec;
 using OutputForge.Tests.Support;
 using OutputForge.Workflow.Shells;
+using OutputForge.Results;
 
 namespace OutputForge.Tests.Workflow;
 

@@ -24,7 +24,7 @@ public sealed class ShellsCommandTests(WorkflowDemoFixture demo) : IClassFixture
         Assert.Equal(table.Count, shell.Count);
         Assert.Equal(table.Select(r => r[0]), shell.Select(r => r[0]));
         // Header rows: the arm groups (study spec treatment.groups), the arm labels, then (N=xx) under each arm.
-        var header = table.FindIndex(r => r.Skip(1).All(c => c.StartsWith("(N=")));
+        var header = table.FindIndex(r => r.Skip(1).All(c => c.StartsWith("(N=", StringComparison.Ordinal)));
         Assert.Equal(table.Take(header), shell.Take(header));
         Assert.Equal(["", "(N=xx)", "(N=xx)", "(N=xx)"], shell[header]);
         var byLabel = shell.Where(r => r[0].Length > 0).ToDictionary(r => r[0], r => r.Skip(1).ToArray());

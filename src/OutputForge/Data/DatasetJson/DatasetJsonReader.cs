@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using OutputForge.Expressions;
+using OutputForge.Common;
 
 namespace OutputForge.Data.DatasetJson;
 
@@ -110,6 +111,12 @@ public static partial class DatasetJsonReader
             throw new DataException(path, null, null,
                 $"invalid JSON at line {e.LineNumber + 1}, byte {e.BytePositionInLine + 1} ({parser.Where}): {Reason(e.Message)}");
         }
+        catch (InvalidOperationException)
+        {
+            // A text of the metadata (a name, a label) that is not a string: invalid UTF-8, or a lone surrogate escape.
+            throw new DataException(path, null, null,
+                $"{parser.Where}: a text is not valid UTF-8 or holds a lone UTF-16 surrogate escape (such as \\ud800 without its pair); Dataset-JSON files are UTF-8");
+        }
         return new PumpResult(parser, -1, default, false);
     }
 
@@ -195,7 +202,8 @@ public static partial class DatasetJsonReader
         private readonly HashSet<string> _fractionalIntegers = new(StringComparer.Ordinal);
 
         /// <summary>Where the reader is, for messages.</summary>
-        public string Where => _cell >= 0 ? $"row {_rows + 1}" : _rows > 0 ? $"after row {_rows}" : _columnsSeen ? "before the first row" : "in the metadata";
+        public string Where => _cell >= 0 ? $"row {_rows + 1}" : _rows > 0 ? $"after row {_rows}"
+            : _section == Section.Columns ? $"in columns[{_columns.Count}]" : _columnsSeen ? "before the first row" : "in the metadata";
 
         private DataException Error(string problem) => new(path, null, null, problem);
 
@@ -425,14 +433,17 @@ public static partial class DatasetJsonReader
                 };
                 if (fits)
                 {
-                    if (token == JsonTokenType.String && reader.ValueIsEscaped && column.Type != ColumnType.Decimal
-                        && reader.GetString() is { } skipped && ControlCharacters.IndexIn(skipped) is var at && at >= 0)
+                    if (token == JsonTokenType.String)
                     {
-                        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
-                        {
-                            throw RowError($"the value holds the control character U+{(int)skipped[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
-                        }
-                        Replaced++;
+                        SkippedString(ref reader, column);
+                    }
+                    else if (token == JsonTokenType.Number && !CanonicalText.TryParseNumber(reader.ValueSpan, out _, out _)
+                        && (!reader.TryGetDouble(out var skippedNumber) || !UnusableNumber.IsUsable(skippedNumber)))
+                    {
+                        // A number no statistic can use is refused in a skipped column too (UnusableNumber).
+                        var written = Encoding.UTF8.GetString(reader.ValueSpan);
+                        var parsed = double.TryParse(written, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
+                        throw RowError($"'{Shorten(written)}' {UnusableNumber.Problem(written, parsed, value) ?? "is not a number"}");
                     }
                     _cell++;
                     return;
@@ -457,9 +468,12 @@ public static partial class DatasetJsonReader
                         builder.AddCanonical(canonical, decimals);
                         break;
                     }
-                    if (!reader.TryGetDouble(out var number) || !double.IsFinite(number))
+                    if (!reader.TryGetDouble(out var number) || !UnusableNumber.IsUsable(number))
                     {
-                        throw RowError($"the number {Encoding.UTF8.GetString(raw)} is outside the range of a double");
+                        // NaN, an infinity, an overflow or a magnitude beyond 1e100: the rule of every reader (UnusableNumber).
+                        var written = Encoding.UTF8.GetString(raw);
+                        var parsed = double.TryParse(written, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
+                        throw RowError($"'{Shorten(written)}' {UnusableNumber.Problem(written, parsed, value) ?? "is not a number"}");
                     }
                     if (column.Type == ColumnType.Integer && number != Math.Floor(number) && _fractionalIntegers.Add(column.Name!))
                     {
@@ -477,20 +491,103 @@ public static partial class DatasetJsonReader
             _cell++;
         }
 
+        /// <summary>
+        /// A text of a column the run skips is held to the rule of every value (UTF-8, <see cref="TextValueRule"/>) though
+        /// it is not stored, so that a file is refused, or its values replaced and counted, alike whatever a run reads.
+        /// </summary>
+        private void SkippedString(ref Utf8JsonReader reader, DatasetJsonColumn column)
+        {
+            if (!System.Text.Unicode.Utf8.IsValid(reader.ValueSpan))
+            {
+                throw RowError("the value is not valid UTF-8 (Latin-1 or another encoding?); Dataset-JSON files are UTF-8");
+            }
+            string? text = null;
+            var bytes = ReadOnlySpan<byte>.Empty;
+            if (reader.ValueIsEscaped)
+            {
+                text = TextValueRule.Unpadded(EscapedText(ref reader));
+                if (text is null)
+                {
+                    return;
+                }
+            }
+            else
+            {
+                bytes = TextValueRule.Unpadded(reader.ValueSpan);
+                if (bytes.IsEmpty)
+                {
+                    return;
+                }
+                if (TextValueRule.MayHoldForbidden(bytes) || bytes.Length > DocumentText.MaxLength)
+                {
+                    text = DecodeText(bytes);
+                }
+            }
+            if (text is not null)
+            {
+                var replaced = 0;
+                text = TextValueRule.Checked(text, options.ControlCharacters, ref replaced, out var problem) ?? throw RowError(problem!);
+                Replaced += replaced;
+            }
+            if (column.Type == ColumnType.Decimal && (text is not null || !CanonicalText.TryParseNumber(bytes, out _, out _)))
+            {
+                // A decimal no statistic can use is refused in a skipped column too (UnusableNumber).
+                text ??= DecodeText(bytes);
+                var parsed = double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
+                if (UnusableNumber.Problem(text, parsed, value) is { } unusable)
+                {
+                    throw RowError($"'{Shorten(text)}' {unusable}");
+                }
+                if (!parsed)
+                {
+                    throw RowError($"expected a decimal number, found \"{Shorten(text)}\"");
+                }
+            }
+        }
+
         private void StringCell(ref Utf8JsonReader reader, DatasetJsonColumn column, TypedColumnBuilder builder)
         {
-            if (reader.ValueSpan.Length == 0)
+            // Trailing blanks, the document text limits and control characters: the rule of every reader (TextValueRule).
+            // A value without escapes stays bytes while it can (a repeated value is then never decoded again); one with
+            // escapes, or with a byte that may be a forbidden character, is looked at as text.
+            if (!System.Text.Unicode.Utf8.IsValid(reader.ValueSpan))
             {
-                builder.AddMissing();
-                return;
+                // Decoding would silently turn the bytes into U+FFFD (a raw surrogate, ED A0 80, is such bytes too).
+                throw RowError("the value is not valid UTF-8 (Latin-1 or another encoding?); Dataset-JSON files are UTF-8");
             }
-            if (column.Type == ColumnType.Decimal && !reader.ValueIsEscaped && CanonicalText.TryParseNumber(reader.ValueSpan, out var canonical, out var decimals))
+            var replaced = 0;
+            string? text = null;
+            var bytes = ReadOnlySpan<byte>.Empty;
+            if (reader.ValueIsEscaped)
+            {
+                text = TextValueRule.Unpadded(EscapedText(ref reader));
+                if (text is null)
+                {
+                    builder.AddMissing();
+                    return;
+                }
+                text = TextValueRule.Checked(text, options.ControlCharacters, ref replaced, out var problem) ?? throw RowError(problem!);
+            }
+            else
+            {
+                bytes = TextValueRule.Unpadded(reader.ValueSpan);
+                if (bytes.IsEmpty)
+                {
+                    builder.AddMissing();
+                    return;
+                }
+                if (TextValueRule.MayHoldForbidden(bytes) || bytes.Length > DocumentText.MaxLength)
+                {
+                    text = TextValueRule.Checked(DecodeText(bytes), options.ControlCharacters, ref replaced, out var problem) ?? throw RowError(problem!);
+                }
+            }
+            Replaced += replaced;
+            if (column.Type == ColumnType.Decimal && text is null && CanonicalText.TryParseNumber(bytes, out var canonical, out var decimals))
             {
                 builder.AddCanonical(canonical, decimals);
                 return;
             }
-            if (column.Type == ColumnType.Date && !reader.ValueIsEscaped && builder.Kind == VariableKind.Date
-                && CanonicalText.TryParseDate(reader.ValueSpan, out var day))
+            if (column.Type == ColumnType.Date && text is null && builder.Kind == VariableKind.Date && CanonicalText.TryParseDate(bytes, out var day))
             {
                 builder.AddDay(day);
                 return;
@@ -498,39 +595,53 @@ public static partial class DatasetJsonReader
             if (column.Type == ColumnType.Decimal)
             {
                 // Dataset-JSON 1.1 writes decimals as strings so that their digits are kept exactly.
-                var digits = reader.ValueIsEscaped ? Encoding.UTF8.GetBytes(reader.GetString()!) : reader.ValueSpan.ToArray();
-                if (!double.TryParse(digits, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) || !double.IsFinite(value))
+                var digits = text is null ? bytes.ToArray() : Encoding.UTF8.GetBytes(text);
+                text ??= DecodeText(bytes);
+                var parsed = double.TryParse(digits, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
+                if (UnusableNumber.Problem(text, parsed, value) is { } unusable)
                 {
-                    throw RowError($"expected a decimal number, found \"{reader.GetString()}\"");
+                    // NaN, an infinity, an overflow, a magnitude beyond 1e100, a decimal comma: the rule of every reader.
+                    throw RowError($"'{Shorten(text)}' {unusable}");
+                }
+                if (!parsed)
+                {
+                    throw RowError($"expected a decimal number, found \"{Shorten(text)}\"");
                 }
                 builder.AddNumber(value, digits);
                 return;
             }
             if (column.IsNumber || column.Type == ColumnType.Boolean)
             {
-                throw RowError($"expected {Expected(column)} (dataType {column.DataType}), found the string \"{Shorten(reader.GetString()!)}\"");
+                throw RowError($"expected {Expected(column)} (dataType {column.DataType}), found the string \"{Shorten(text ?? DecodeText(bytes))}\"");
             }
             if (column.Type == ColumnType.Date)
             {
-                builder.AddDateText(reader.GetString()!);
+                builder.AddDateText(text ?? DecodeText(bytes));
                 return;
             }
-            if (!reader.ValueIsEscaped)
+            if (text is null)
             {
-                builder.AddText(reader.ValueSpan, DecodeText);
+                builder.AddText(bytes, DecodeText);
                 return;
-            }
-            var text = reader.GetString()!;
-            if (ControlCharacters.IndexIn(text) is var at && at >= 0)
-            {
-                if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
-                {
-                    throw RowError($"the value holds the control character U+{(int)text[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
-                }
-                Replaced++;
-                text = ControlCharacters.Replace(text);
             }
             builder.AddText(text);
+        }
+
+        /// <summary>
+        /// A string value with escapes, resolved. A lone surrogate escape (\ud800 without its pair) is half of a character,
+        /// which System.Text.Json refuses to give as a string: it is then kept as the lone UTF-16 unit
+        /// (<see cref="JsonEscapes"/>), for the text rule to refuse or replace like any forbidden character.
+        /// </summary>
+        private static string EscapedText(ref Utf8JsonReader reader)
+        {
+            try
+            {
+                return reader.GetString()!;
+            }
+            catch (InvalidOperationException)
+            {
+                return JsonEscapes.Resolve(reader.ValueSpan);
+            }
         }
 
         private static readonly TypedColumnBuilder.Decoder DecodeText = bytes => Encoding.UTF8.GetString(bytes);

@@ -1,5 +1,6 @@
 using System.Text.Json;
 using Microsoft.Win32.SafeHandles;
+using OutputForge.Common;
 
 namespace OutputForge.Data.DatasetJson;
 
@@ -49,7 +50,7 @@ internal static class DatasetJsonRowParts
         var capacity = (int)Math.Min(int.MaxValue / 2, head.Parser.ColumnList.Count == 0 ? 16 : (size / starts.Count) / (head.Parser.ColumnList.Count * 8) + 16);
         var parts = starts.Select(_ => DatasetJsonReader.Parser.ForRows(head.Parser, capacity)).ToArray();
         var ends = new (long Next, bool EndOfRows, bool Failed)[parts.Length];
-        Pipeline.InOrderParallel.For(parts.Length, p =>
+        InOrderParallel.For(parts.Length, p =>
         {
             try
             {

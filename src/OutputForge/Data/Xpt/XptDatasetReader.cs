@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using OutputForge.Expressions;
+using OutputForge.Common;
 
 namespace OutputForge.Data.Xpt;
 
@@ -295,47 +296,29 @@ public static class XptDatasetReader
             var value = bytes.Slice(variable.Position, variable.Length);
             if (builders[v] is not { } builder)
             {
-                // A variable the run skips is not decoded, but a character value is held to the control-character
-                // rule as any value is, so that a file is refused alike whatever a run reads of it.
-                var written = variable.IsNumeric ? default : value[..(value.LastIndexOfAnyExcept((byte)' ') + 1)];
-                if (written.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0)
+                // A variable the run skips is not stored, but a character value is held to the rule of every value
+                // (TextValueRule), so that a file is refused, or its values replaced and counted, alike whatever a run reads.
+                if (!variable.IsNumeric && TextValueRule.Unpadded(value) is { IsEmpty: false } written && TextValueRule.MayHoldForbidden(written))
                 {
-                    var decoded = Decode(written);
-                    if (ControlCharacters.IndexIn(decoded) is var at && at >= 0)
-                    {
-                        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
-                        {
-                            throw new DataException(path, null, variable.Name,
-                                $"row {row}: the value holds the control character U+{(int)decoded[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
-                        }
-                        replaced++;
-                    }
+                    _ = TextValueRule.Checked(Decode(written), options.ControlCharacters, ref replaced, out var problem)
+                        ?? throw new DataException(path, null, variable.Name, $"row {row}: {problem}");
                 }
                 continue;
             }
             if (!variable.IsNumeric)
             {
-                var end = value.LastIndexOfAnyExcept((byte)' ');
-                if (end < 0)
+                // Trailing blanks and control characters: the rule of every reader (TextValueRule). Its length limit needs no
+                // look: a character variable holds at most 32,767 bytes (the namestr's length is a 16-bit signed number).
+                var text = TextValueRule.Unpadded(value);
+                if (text.IsEmpty)
                 {
                     builder.AddMissing();
                     continue;
                 }
-                var text = value[..(end + 1)];
-                if (text.IndexOfAnyInRange((byte)0, (byte)0x1F) >= 0)
+                if (TextValueRule.MayHoldForbidden(text))
                 {
-                    var decoded = Decode(text);
-                    if (ControlCharacters.IndexIn(decoded) is var at && at >= 0)
-                    {
-                        if (options.ControlCharacters == ControlCharacterPolicy.Refuse)
-                        {
-                            throw new DataException(path, null, variable.Name,
-                                $"row {row}: the value holds the control character U+{(int)decoded[at]:X4} at character {at + 1}, which Word and Excel cannot store; clean the data, or run with --control-characters replace");
-                        }
-                        replaced++;
-                        decoded = ControlCharacters.Replace(decoded);
-                    }
-                    builder.AddText(decoded);
+                    builder.AddText(TextValueRule.Checked(Decode(text), options.ControlCharacters, ref replaced, out var problem)
+                        ?? throw new DataException(path, null, variable.Name, $"row {row}: {problem}"));
                     continue;
                 }
                 builder.AddText(text, DecodeText);
@@ -346,6 +329,8 @@ public static class XptDatasetReader
                 builder.AddMissing(letter);
                 continue;
             }
+            // No number check is needed here (UnusableNumber): an IBM float has no NaN or infinity, and its largest
+            // magnitude, just under 16^63 (about 7.2e75), is below the 1e100 OutputForge reads (IbmFloat).
             var number = IbmFloat.ToDouble(value);
             switch (variable.Temporal)
             {

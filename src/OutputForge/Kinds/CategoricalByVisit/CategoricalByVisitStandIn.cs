@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
 using OutputForge.Expressions;
-using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Kinds.CategoricalByVisit;
 

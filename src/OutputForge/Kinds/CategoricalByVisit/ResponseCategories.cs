@@ -3,6 +3,7 @@ using System.Text.Json;
 using OutputForge.Analysis;
 using OutputForge.Data;
 using OutputForge.Spec;
+using OutputForge.Results;
 
 namespace OutputForge.Kinds.CategoricalByVisit;
 

@@ -1,5 +1,5 @@
 using OutputForge.Analysis;
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 using OutputForge.Spec;
 using QuantileDefinition = MathNet.Numerics.Statistics.QuantileDefinition;
 

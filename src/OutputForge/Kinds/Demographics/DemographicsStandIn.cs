@@ -1,6 +1,6 @@
 using OutputForge.Expressions;
 using OutputForge.Spec;
-using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Kinds.Demographics;
 

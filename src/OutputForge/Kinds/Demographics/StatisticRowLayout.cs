@@ -28,7 +28,7 @@ public sealed partial record StatisticRowLayout(string Text, string Pattern, str
     };
 
     /// <summary>"geomean" is one statistics program's function name; the row statistic is called "geometric-mean".</summary>
-    private static readonly IReadOnlyList<Analysis.Choices.RetiredName> Retired = [new("geomean", "geometric-mean")];
+    private static readonly IReadOnlyList<RetiredName> Retired = [new("geomean", "geometric-mean")];
 
     // A statistic's name is a word; "geometric-mean" is the one hyphenated name, matched whole before the separators.
     [GeneratedRegex(@"(?i:geometric-mean)|[A-Za-z][A-Za-z0-9]*")]

@@ -1,4 +1,4 @@
-using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Kinds.Populations;
 

@@ -1,4 +1,4 @@
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 
 namespace OutputForge.Kinds.Responders;
 

@@ -1,5 +1,5 @@
 using OutputForge.Analysis;
-using OutputForge.Analysis.Choices;
+using OutputForge.Choices;
 namespace OutputForge.Kinds.Responders;
 
 /// <summary>

@@ -1,4 +1,4 @@
-using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Kinds.Responders;
 
@@ -20,7 +20,7 @@ public sealed class ResponderStandIn : IShellStandIn
                 records.SetIfAbsent(subject, stratum, subject.IndexInArm % 2 == 0 ? "Stratum 1" : "Stratum 2", Expressions.VariableKind.Text);
             }
             records.AddRecord(endpoint.Dataset,
-                EndpointStandIn.For(subject, subject.IndexInArm < ShellData.SubjectsPerArm / 2 ? responder : nonResponder));
+                EndpointStandIn.For(subject, subject.IndexInArm < ShellRecords.SubjectsPerArm / 2 ? responder : nonResponder));
         }
     }
 }

@@ -130,12 +130,8 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         {
             return Result();
         }
-        if (ForestPlotPicture.FontWarning() is { } fontWarning)
-        {
-            warnings.Add(ResultNote.Warning(NoteKind.Text, NoteSubject.None, ("text", fontWarning)));
-        }
         var forest = new ForestPlot(table.Id, plot, active.Select(a => a.Label).ToList(), control.Label, measure, level);
-        return Result() with { Figure = ForestPlotPicture.Draw(forest) };
+        return Result() with { Figure = ForestPlotFigure.Describe(forest) };
     }
 
     private static string EffectKey(TreatmentArm arm, TreatmentArm control) => $"{arm.Key}-vs-{control.Key}";

@@ -1,4 +1,5 @@
 using OutputForge.Analysis;
+using OutputForge.Results;
 
 namespace OutputForge.Kinds.Subgroups;
 

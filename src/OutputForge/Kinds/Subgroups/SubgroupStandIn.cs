@@ -1,5 +1,5 @@
 using OutputForge.Expressions;
-using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Kinds.Subgroups;
 

@@ -1,5 +1,5 @@
 using OutputForge.Expressions;
-using OutputForge.Workflow.Shells;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Kinds.TimeToEvent;
 
@@ -17,7 +17,7 @@ public sealed class TimeToEventStandIn : IShellStandIn
         var dataset = endpoint.Dataset;
         var selected = EndpointStandIn.Selected(records, endpoint);
         var horizon = 2 * (settings.Times.Count > 0 ? settings.Times.Max() : 100);
-        var n = ShellData.SubjectsPerArm;
+        var n = ShellRecords.SubjectsPerArm;
         foreach (var subject in records.Subjects)
         {
             var record = EndpointStandIn.For(subject, selected);

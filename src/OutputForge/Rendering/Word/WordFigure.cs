@@ -1,5 +1,6 @@
 using DocumentFormat.OpenXml.Packaging;
 using DocumentFormat.OpenXml.Wordprocessing;
+using OutputForge.Rendering.Figures;
 using OutputForge.Results;
 using A = DocumentFormat.OpenXml.Drawing;
 using DW = DocumentFormat.OpenXml.Drawing.Wordprocessing;
@@ -19,16 +20,17 @@ public static class WordFigure
 
     public static Paragraph Build(MainDocumentPart main, TableFigure figure, WordPageGeometry geometry, int pictureId)
     {
+        var painted = FigurePainter.Paint(figure);
         var image = main.AddImagePart(ImagePartType.Png);
-        using (var stream = new MemoryStream(figure.Png))
+        using (var stream = new MemoryStream(painted.Png))
         {
             image.FeedData(stream);
         }
         var relationship = main.GetIdOfPart(image);
         long maxWidth = geometry.TextWidthTwips * EmuPerTwip;
         long maxHeight = (geometry.HeightTwips - 2 * geometry.MarginTwips - WordPageGeometry.TwipsPerInch) * EmuPerTwip;
-        double scale = Math.Min((double)maxWidth / figure.WidthPixels, (double)maxHeight / figure.HeightPixels);
-        long cx = (long)Math.Round(figure.WidthPixels * scale), cy = (long)Math.Round(figure.HeightPixels * scale);
+        double scale = Math.Min((double)maxWidth / painted.WidthPixels, (double)maxHeight / painted.HeightPixels);
+        long cx = (long)Math.Round(painted.WidthPixels * scale), cy = (long)Math.Round(painted.HeightPixels * scale);
         var id = (uint)pictureId;
         var name = $"Figure {pictureId}";
         var graphic = new A.Graphic(new A.GraphicData(

@@ -76,5 +76,5 @@ public static class ChangesTextReport
     private static string Rows(InputChange input) =>
         input.BeforeRows is { } b && input.AfterRows is { } a ? $", rows {b} -> {a}" : string.Empty;
 
-    private static string Short(string? sha) => sha is null ? "?" : Manifest.FileDigest.Short(sha);
+    private static string Short(string? sha) => sha is null ? "?" : Pipeline.Manifest.FileDigest.Short(sha);
 }

@@ -1,4 +1,4 @@
-using OutputForge.Workflow.Manifest;
+using OutputForge.Pipeline.Manifest;
 
 namespace OutputForge.Workflow.Changes;
 
@@ -7,7 +7,7 @@ namespace OutputForge.Workflow.Changes;
 /// their manifests, and tables number by number through the stable keys of results.json. A number
 /// counts as changed when its full-precision value or its displayed text differs.
 /// </summary>
-public static class RunComparison
+internal static class RunComparison
 {
     public static RunChanges Compare(string beforeFolder, string afterFolder)
     {

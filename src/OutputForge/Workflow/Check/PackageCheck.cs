@@ -11,11 +11,11 @@ namespace OutputForge.Workflow.Check;
 /// The inputs are resolved as a run resolves them (<see cref="PackageInputs"/>, the same options), so a
 /// package that check passes is not refused by run.
 /// </summary>
-public static class PackageCheck
+internal static class PackageCheck
 {
     public static CheckReport Run(string specPath, string? dataFolder) => Run(specPath, dataFolder, PackageInputOptions.Default);
 
-    /// <exception cref="Workflow.TableSelectionException">A --tables pattern matches no table (a usage error, as in a run).</exception>
+    /// <exception cref="Pipeline.TableSelectionException">A --tables pattern matches no table (a usage error, as in a run).</exception>
     public static CheckReport Run(string specPath, string? dataFolder, PackageInputOptions options)
     {
         var report = new CheckReport();

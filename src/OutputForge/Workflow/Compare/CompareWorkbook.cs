@@ -1,17 +1,18 @@
-using ClosedXML.Excel;
+using OutputForge.Rendering.Excel;
 
 namespace OutputForge.Workflow.Compare;
 
 /// <summary>The compare report as a workbook: Summary, Mismatches, Only in QC, Only in production and Matched sheets.</summary>
-public static class CompareWorkbook
+internal static class CompareWorkbook
 {
     private static readonly string[] NumberHeader =
         ["QC line", "table", "row", "column", "statistic", "row label", "column label", "production shown", "production value", "QC value", "reason"];
 
     public static void Save(CompareResult result, string path)
     {
-        using var workbook = new XLWorkbook();
-        ReportSheet.Add(workbook, "Summary", ["item", "value"],
+        var sheets = new List<ReportSheet>();
+        void Sheet(string name, IReadOnlyList<string> header, IEnumerable<IReadOnlyList<string>> rows) => sheets.Add(new ReportSheet(name, header, rows.ToList()));
+        Sheet("Summary", ["item", "value"],
         [
             ["result", result.Passed ? "PASSED" : "FAILED"],
             ["production", result.ProductionFile],
@@ -23,15 +24,15 @@ public static class CompareWorkbook
             ["only in production counts", result.OnlyInProductionScope],
             ["only in QC", result.OnlyInQc.ToString(System.Globalization.CultureInfo.InvariantCulture)],
         ]);
-        ReportSheet.Add(workbook, "Mismatches", NumberHeader, Rows(result, QcOutcome.Mismatched));
-        ReportSheet.Add(workbook, "Only in QC", ["QC line", "table", "row", "column", "statistic", "QC value", "reason"],
+        Sheet("Mismatches", NumberHeader, Rows(result, QcOutcome.Mismatched));
+        Sheet("Only in QC", ["QC line", "table", "row", "column", "statistic", "QC value", "reason"],
             result.Checks.Where(c => c.Outcome == QcOutcome.OnlyInQc).Select(c => (IReadOnlyList<string>)
                 [Line(c), c.Line.Table, c.Line.Row, c.Line.Column, c.Line.Statistic, c.Line.Value, c.Reason ?? string.Empty]));
-        ReportSheet.Add(workbook, "Only in production", ["table", "row", "column", "statistic", "row label", "column label", "shown", "value"],
+        Sheet("Only in production", ["table", "row", "column", "statistic", "row label", "column label", "shown", "value"],
             result.OnlyInProduction.Select(r => (IReadOnlyList<string>)
                 [r.Table, r.Row, r.Column, r.Statistic, r.RowLabel, r.ColumnLabel, r.Formatted, CompareTextReport.Raw(r.Value)]));
-        ReportSheet.Add(workbook, "Matched", NumberHeader, Rows(result, QcOutcome.Matched));
-        ReportSheet.Save(workbook, path);
+        Sheet("Matched", NumberHeader, Rows(result, QcOutcome.Matched));
+        ReportWorkbookWriter.Save(sheets, path);
     }
 
     private static string Line(QcCheck check) => check.Line.Line.ToString(System.Globalization.CultureInfo.InvariantCulture);

@@ -4,7 +4,7 @@ namespace OutputForge.Workflow.Compare;
 /// Compares a QC statistician's numbers with a production run's results.json, line by line
 /// (docs/qc-workflow.md): counts exactly, other statistics within the tolerance.
 /// </summary>
-public static class QcComparison
+internal static class QcComparison
 {
     public static CompareResult Run(string production, string qcFile, CompareTolerance tolerance)
     {

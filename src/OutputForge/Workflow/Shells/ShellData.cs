@@ -2,12 +2,13 @@ using System.Globalization;
 using OutputForge.Data;
 using OutputForge.Expressions;
 using OutputForge.Spec;
+using OutputForge.Analysis.StandIns;
 
 namespace OutputForge.Workflow.Shells;
 
 /// <summary>
 /// Stand-in study data from which a table kind's own analysis lays out a mock shell before real
-/// data exist: per arm of the study spec's treatment.arms, <see cref="SubjectsPerArm"/> invented
+/// data exist: per arm of the study spec's treatment.arms, <see cref="ShellRecords.SubjectsPerArm"/> invented
 /// subjects whom the table's population and subset select, to which the kind's
 /// <see cref="IShellStandIn"/> adds what its analysis reads. Every value comes from the specs'
 /// conditions and lists (see <see cref="ConditionWitness"/>) or is a varied stand-in number; none
@@ -15,9 +16,6 @@ namespace OutputForge.Workflow.Shells;
 /// </summary>
 public static class ShellData
 {
-    /// <summary>Ten per arm: no expected count is below 5 when split five and five, and no statistic is inestimable.</summary>
-    public const int SubjectsPerArm = 10;
-
     public static bool Supports(string kind) => Kinds.TableKinds.Find(kind) is not null;
 
     public static ShellRecords For(StudySpec study, TableSpec table)
@@ -32,7 +30,7 @@ public static class ShellData
         var whereSource = table.Subset is null ? study.Source : table.Source;
 
         var standIn = Kinds.TableKinds.Find(table.Kind)?.StandIn;
-        var perArm = standIn?.SubjectsPerArm(table) ?? SubjectsPerArm;
+        var perArm = standIn?.SubjectsPerArm(table) ?? ShellRecords.SubjectsPerArm;
         var subjects = new List<ShellSubject>();
         var records = new ShellRecords(study, table, subjects);
         if (order is not null)

@@ -10,7 +10,7 @@ namespace OutputForge.Workflow.Shells;
 /// Writes the mock shells of a study's tables (shell-{id}.docx, .xlsx, ...) from the specs alone,
 /// staged like a run so the output folder receives all of them or none.
 /// </summary>
-public static class ShellPackage
+internal static class ShellPackage
 {
     /// <param name="runTime">The time printed in the shells and stamped in their packages; null means now.</param>
     public static IReadOnlyList<string> Write(string specPath, string outputFolder, IReadOnlyList<ITableRenderer> renderers,
@@ -21,7 +21,7 @@ public static class ShellPackage
         var study = package.Study;
         var templates = TemplateSet.Load(study.Folder, package.Folders);
         var run = new RunFacts(runTime ?? DateTimeOffset.UtcNow, ToolVersion.Text, new Dictionary<string, string>());
-        var page = PackageRunner.PageFrom(study.Page);
+        var page = PageSetup.From(study.Page);
         var selected = TableSelection.Select(package.Tables, tables);
         foreach (var skipped in selected.Where(t => !ShellData.Supports(t.Kind)))
         {
@@ -30,7 +30,7 @@ public static class ShellPackage
         var shells = new List<LaidOutTable>();
         foreach (var table in selected.Where(t => ShellData.Supports(t.Kind)))
         {
-            var (shell, assumptions) = ShellBuilder.Build(study, table, PackageRunner.StudyLine(study), run, page, templates);
+            var (shell, assumptions) = ShellBuilder.Build(study, table, StudyLine.Of(study), run, page, templates);
             foreach (var assumption in assumptions)
             {
                 log.Warning($"table {table.Id}: {assumption}");

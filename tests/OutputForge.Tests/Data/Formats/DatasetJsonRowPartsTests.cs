@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using OutputForge.Data;
 using OutputForge.Data.DatasetJson;
@@ -52,7 +53,7 @@ public sealed class DatasetJsonRowPartsTests
         for (var i = 0; i < 4000; i++)
         {
             if (i > 0) rows.Append(',');
-            rows.Append($"[\"S{i}\",\"a],[\\\"b\\\",1],[c\",{i}]");
+            rows.Append(CultureInfo.InvariantCulture, $"[\"S{i}\",\"a],[\\\"b\\\",1],[c\",{i}]");
         }
         var path = temp.Write("x.json", "{\"datasetJSONVersion\":\"1.1.0\",\"records\":4000,\"columns\":[{\"name\":\"USUBJID\",\"dataType\":\"string\"},"
             + "{\"name\":\"TERM\",\"dataType\":\"string\"},{\"name\":\"N\",\"dataType\":\"integer\"}],\"rows\":[" + rows + "]}");

@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Security.Cryptography;
 using System.Text;
 using System.Text.Json;
@@ -55,7 +56,7 @@ public sealed class PilotXptOracleTests
         if (column.IsMissing(row)) return "-";
         if (!numeric) return "=" + column.GetText(row);
         var value = column.Kind == VariableKind.Date ? column.GetNumber(row) - Epoch.DayNumber : column.GetNumber(row);
-        return "=" + BitConverter.DoubleToUInt64Bits(value).ToString("x16");
+        return "=" + BitConverter.DoubleToUInt64Bits(value).ToString("x16", CultureInfo.InvariantCulture);
     }
 
     private static string Digest(IEnumerable<string> lines) =>

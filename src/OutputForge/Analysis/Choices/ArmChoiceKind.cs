@@ -1,9 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>Each arm on its own, all arms combined, or the one arm a spec names.</summary>
-public enum ArmChoiceKind
-{
-    AnyArm,
-    Total,
-    Arm,
-}

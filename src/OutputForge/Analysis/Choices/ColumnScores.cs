@@ -1,9 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>The column (response category) scores of the generalized Cochran-Mantel-Haenszel statistics.</summary>
-public enum ColumnScores
-{
-    CategoryValues,
-    EqualSpacing,
-    ModifiedRidit,
-}

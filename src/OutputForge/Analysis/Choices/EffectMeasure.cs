@@ -1,9 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>The treatment effect of each subgroup level.</summary>
-public enum EffectMeasure
-{
-    Difference,
-    OddsRatio,
-    RelativeRisk,
-}

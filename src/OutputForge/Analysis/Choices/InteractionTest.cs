@@ -1,9 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>The treatment-by-subgroup interaction test.</summary>
-public enum InteractionTest
-{
-    LikelihoodRatio,
-    BreslowDay,
-    BreslowDayTarone,
-}

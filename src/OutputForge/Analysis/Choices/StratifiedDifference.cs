@@ -1,8 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>The common risk difference of a stratified responder analysis.</summary>
-public enum StratifiedDifference
-{
-    MantelHaenszel,
-    MiettinenNurminen,
-}

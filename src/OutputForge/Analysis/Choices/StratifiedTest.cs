@@ -1,8 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>The Cochran-Mantel-Haenszel test of a stratified responder analysis.</summary>
-public enum StratifiedTest
-{
-    Cmh,
-    CmhCorrected,
-}

@@ -1,8 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>What a time-to-event table prints at the chosen times.</summary>
-public enum SurvivalEstimate
-{
-    EventFree,
-    Event,
-}

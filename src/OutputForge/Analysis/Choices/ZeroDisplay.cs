@@ -1,8 +1,0 @@
-namespace OutputForge.Analysis.Choices;
-
-/// <summary>How a zero count of an n (%) cell is shown.</summary>
-public enum ZeroDisplay
-{
-    Count,
-    CountPercent,
-}
