@@ -45,7 +45,7 @@ public sealed class MethodCatalogTests
         Assert.All(enums, e => Assert.True(catalogue.Contains(e.Names), $"{e.Path}: {e.Names} is not an option of the catalogue"));
         var used = enums.Select(e => e.Names).ToHashSet(StringComparer.Ordinal);
         Assert.All(MethodCatalog.All.Except(MethodCatalog.CalcOnly), set => Assert.True(used.Contains(string.Join("|", set.Names)), $"{set.Key} is used nowhere in the schema"));
-        Assert.All(MethodCatalog.CalcOnly, set => Assert.False(used.Contains(string.Join("|", set.Names)), $"{set.Key} is in the schema: take it out of CalcOnly"));
+        Assert.All(MethodCatalog.CalcOnly, set => Assert.False(used.Contains(string.Join("|", set.Names)), $"{set.Key} is in the schema: take it off the calc-only list"));
     }
 
     [Fact]
@@ -93,6 +93,17 @@ public sealed class MethodCatalogTests
         {
             Assert.Equal(0, Calc("table", "--counts", "3,7;5,5", "--test", name));
         }
+        foreach (var name in MethodCatalog.Multiplicity.Names)
+        {
+            string[] graph = name switch
+            {
+                "graphical" => ["--weights", "0.5,0.5", "--transitions", "0,1;1,0"],
+                "fallback" or "weighted-bonferroni" => ["--weights", "0.5,0.5"],
+                _ => [],
+            };
+            Assert.Equal(0, Calc(["multiplicity", "--p", "0.01,0.04", "--method", name, .. graph]));
+        }
+        Assert.Equal(ExitCodes.Usage, Calc("multiplicity", "--p", "0.01,0.04", "--method", "bonf"));
         var margin = new[] { "noninferiority", "--events1", "8", "--n1", "10", "--events2", "7", "--n2", "10", "--margin", "0.1" };
         foreach (var name in MethodCatalog.MarginHypothesis.Names)
         {

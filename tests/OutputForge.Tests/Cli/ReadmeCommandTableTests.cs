@@ -44,6 +44,7 @@ public sealed partial class ReadmeCommandTableTests
     [InlineData("calc difference")]
     [InlineData("calc table")]
     [InlineData("calc stratified")]
+    [InlineData("calc multiplicity")]
     [InlineData("calc noninferiority")]
     [InlineData("calc logistic")]
     [InlineData("calc mmrm")]
@@ -58,7 +59,7 @@ public sealed partial class ReadmeCommandTableTests
     [Fact]
     public void Every_command_has_a_readme_row()
     {
-        string[] commands = ["run", "demo", "check", "compare", "changes", "shells", "calc proportion", "calc difference", "calc table", "calc stratified", "calc noninferiority", "calc logistic", "calc mmrm"];
+        string[] commands = ["run", "demo", "check", "compare", "changes", "shells", "calc proportion", "calc difference", "calc table", "calc stratified", "calc multiplicity", "calc noninferiority", "calc logistic", "calc mmrm"];
         Assert.Equal(commands.Order(StringComparer.Ordinal), ReadmeRows().Keys.Order(StringComparer.Ordinal));
     }
 
