@@ -75,6 +75,7 @@ public static class NoteWording
             ? $"{note.Subject.Arm} vs {note.Subject.Control}: stratum {string.Join(" / ", note.Subject.Stratum ?? [])} has no subjects in these two arms and was left out."
             : $"{note.Subject.Arm} vs {note.Subject.Control}: stratum {string.Join(" / ", note.Subject.Stratum ?? [])} ({(n == 1 ? "1 subject" : $"{n} subjects")}) has no subjects of {note.Text("withoutArm")} and was left out.",
         NoteKind.StratumAddsNothing => $"{note.Subject.Arm} vs {note.Subject.Control}, {note.Subject.What}: stratum {Stratum(note.Subject)} {StratumReason(note.Text("reason"))} and adds nothing to the test.",
+        NoteKind.StratumLeftOut => Subject(note.Subject) + StratumLeftOut(note),
         NoteKind.NoHazardRatio => $"{note.Subject.Arm} vs {note.Subject.Control}: the Cox model gives no hazard ratio: {note.Text("reason")}.",
         NoteKind.SubgroupCounts => note.Flag("nonResponders")
             ? $"n/N (%) = responders / subjects of the {note.Text("population")} in the arm and subgroup; subjects with no assessment are counted as non-responders. Endpoint: {note.Text("endpoint")}."
@@ -146,6 +147,23 @@ public static class NoteWording
         "no-events" => "has no events",
         _ => throw new ArgumentOutOfRangeException(nameof(code), code, "unknown stratum reason"),
     };
+
+    /// <summary>"Stratum 718 has no events, so no variability, and was left out of the Breslow-Day test."</summary>
+    private static string StratumLeftOut(ResultNote note)
+    {
+        var name = $"{note.OptionalText("term") ?? "Stratum"} {string.Join(" / ", note.Subject.Stratum ?? [])}";
+        var leftOut = note.OptionalText("method") is { } method ? $"was left out of the {method}" : "was skipped";
+        return note.Text("reason") switch
+        {
+            "no-subjects" => $"{name} has no subjects and {leftOut}.",
+            "single-subject" => $"{name} has a single subject and {leftOut}.",
+            "empty-group" => $"{name} has no subjects in {note.Text("group")} and {leftOut}.",
+            "one-group-only" => $"{name} has subjects of one group only and {leftOut}.",
+            "no-events" => $"{name} has no events, so no variability, and {leftOut}.",
+            "all-events" => $"{name} has every subject with the event, so no variability, and {leftOut}.",
+            var code => throw new ArgumentOutOfRangeException(nameof(note), code, "unknown stratum reason"),
+        };
+    }
 
     private static string NoStratumValue(int subjects, IReadOnlyList<string> variables, string? leftOutOf)
     {

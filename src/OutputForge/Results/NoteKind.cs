@@ -50,6 +50,13 @@ public enum NoteKind
     NoStratumValue,
     /// <summary>A stratum (subject: its values) that adds nothing to a stratified method. Values: reason ("one-group-only", "no-events").</summary>
     StratumAddsNothing,
+    /// <summary>
+    /// A stratum (subject: its values, and what the method was about) that a stratified method left out. Values: reason
+    /// ("no-subjects", "single-subject", "empty-group", "one-group-only", "no-events", "all-events"); group (the group
+    /// without subjects, for "empty-group"); method (the one method that left it out, where the others kept it); term
+    /// (what the strata are called, e.g. "Level"; "Stratum" when absent).
+    /// </summary>
+    StratumLeftOut,
     /// <summary>The Cox model gives no hazard ratio for a comparison. Values: reason.</summary>
     NoHazardRatio,
     /// <summary>The interval of each arm's proportion of responders. Values: method, level.</summary>
