@@ -37,6 +37,22 @@ public sealed partial class StructuredNotesTests
         Assert.False(StratumRename().IsMatch(text), $"{file} rewrites a stratum's name in a note's text");
     }
 
+    [Fact]
+    public void No_kind_writes_a_footnote_letter_into_its_text()
+    {
+        // Layout letters the footnotes in order of first reference; a kind that writes "[a] " itself has worded a
+        // footnote before Layout (as the categorical-by-visit kind did) and would go out of step with the letters.
+        var offenders = Directory.EnumerateFiles(Path.Combine(Source, "Kinds"), "*.cs", SearchOption.AllDirectories)
+            .Where(f => ProseFootnote().IsMatch(File.ReadAllText(f)))
+            .Select(f => Path.GetRelativePath(Source, f).Replace('\\', '/'))
+            .ToList();
+        Assert.Empty(offenders);
+    }
+
     [GeneratedRegex(@"Replace\(\$?""(Stratum|Level|stratum|level) ")]
     private static partial Regex StratumRename();
+
+    /// <summary>A footnote letter written into a note's text ("[a] ..."), which Layout gives.</summary>
+    [GeneratedRegex(@"""\[[a-z]\] ")]
+    private static partial Regex ProseFootnote();
 }
