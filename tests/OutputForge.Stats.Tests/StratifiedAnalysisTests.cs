@@ -86,9 +86,10 @@ public class StratifiedAnalysisTests
     {
         var result = BreslowDayTest.Compute(ReferenceOracles.Strata("rabbits"));
         Assert.Equal(2, result.DegreesOfFreedom);
-        Assert.Equal(2, result.Notes.Count);
-        Assert.Contains(result.Notes, n => n.StartsWith("Stratum 1 has no events", StringComparison.Ordinal));
-        Assert.Contains(result.Notes, n => n.StartsWith("Stratum 5 has every subject with the event", StringComparison.Ordinal));
+        // Strata 1 and 5 of the rabbits data (indices 0 and 4) have a zero margin: no events, and every subject with the event.
+        Assert.Equal([new StratumRemark(0, StratumRemarkReason.NoEvents, BreslowDayTest.MethodName),
+            new StratumRemark(4, StratumRemarkReason.AllEvents, BreslowDayTest.MethodName)], result.StratumRemarks);
+        Assert.Empty(result.Notes);
     }
 
     [Fact]
@@ -98,13 +99,15 @@ public class StratifiedAnalysisTests
         var withEmpty = new List<StratumCounts>(strata) { new(0, 0, 0, 0), new(3, 10, 0, 0) };
         var test = CochranMantelHaenszelTest.Compute(withEmpty);
         Assert.Equal(CochranMantelHaenszelTest.Compute(strata).Statistic, test.Statistic);
-        Assert.Contains(test.Notes, n => n.Contains("Stratum 4") && n.Contains("no subjects"));
-        Assert.Contains(test.Notes, n => n.Contains("Stratum 5") && n.Contains("group 2"));
+        StratumRemark[] skipped = [new(3, StratumRemarkReason.NoSubjects), new(4, StratumRemarkReason.EmptyGroup, Group: 2)];
+        Assert.Equal(skipped, test.StratumRemarks);
+        Assert.Empty(test.Notes);
         var or = MantelHaenszelOddsRatio.Compute(withEmpty);
         Assert.Equal(MantelHaenszelOddsRatio.Compute(strata).Estimate, or.Estimate);
-        Assert.Equal(2, or.Notes.Count);
-        Assert.Equal(2, MantelHaenszelRiskDifference.Compute(withEmpty).Notes.Count);
-        Assert.Equal(2, MantelHaenszelRelativeRisk.Compute(withEmpty).Notes.Count);
+        Assert.Equal(skipped, or.StratumRemarks);
+        Assert.Equal(skipped, MantelHaenszelRiskDifference.Compute(withEmpty).StratumRemarks);
+        Assert.Equal(skipped, MantelHaenszelRelativeRisk.Compute(withEmpty).StratumRemarks);
+        Assert.Equal(skipped, BreslowDayTest.Compute(withEmpty).StratumRemarks.Take(2));
     }
 
     /// <summary>

@@ -60,7 +60,7 @@ public class StratifiedMiettinenNurminenTests
             var result = StratifiedMiettinenNurminen.Compute(strata);
             var text = string.Join(" ", strata.Select(s => $"[{s.Events1}/{s.Total1} {s.Events2}/{s.Total2}]"));
             var skipped = c.GetProperty("skipped").EnumerateArray().Select(v => v.GetInt32()).ToList();
-            var named = skipped.Count(k => result.Notes.Any(n => n.StartsWith($"Stratum {k} ", StringComparison.Ordinal)));
+            var named = skipped.Count(k => result.StratumRemarks.Any(r => r.Stratum == k - 1));
             if (named != skipped.Count)
             {
                 mismatches.Add($"{text}: skipped strata not all named in the notes");
@@ -103,8 +103,7 @@ public class StratifiedMiettinenNurminenTests
     {
         var result = StratifiedMiettinenNurminen.Compute([new(3, 5, 1, 6), new(0, 0, 2, 4), new(0, 0, 0, 0)]);
         Assert.True(result.IsEstimable);
-        Assert.Contains(result.Notes, n => n.StartsWith("Stratum 2 has no subjects in group 1", StringComparison.Ordinal));
-        Assert.Contains(result.Notes, n => n.StartsWith("Stratum 3 has no subjects", StringComparison.Ordinal));
+        Assert.Equal([new StratumRemark(1, StratumRemarkReason.EmptyGroup, Group: 1), new StratumRemark(2, StratumRemarkReason.NoSubjects)], result.StratumRemarks);
         var alone = StratifiedMiettinenNurminen.Compute([new(3, 5, 1, 6)]);
         Assert.Equal(alone.Lower, result.Lower, 1e-15);
         Assert.Equal(alone.Upper, result.Upper, 1e-15);
@@ -116,7 +115,7 @@ public class StratifiedMiettinenNurminenTests
         var result = StratifiedMiettinenNurminen.Compute([new(0, 0, 1, 3), new(2, 4, 0, 0)]);
         Assert.False(result.IsEstimable);
         Assert.Equal("no stratum has subjects in both groups", result.NotEstimableReason);
-        Assert.Equal(2, result.Notes.Count);
+        Assert.Equal([new StratumRemark(0, StratumRemarkReason.EmptyGroup, Group: 1), new StratumRemark(1, StratumRemarkReason.EmptyGroup, Group: 2)], result.StratumRemarks);
     }
 
     [Fact]

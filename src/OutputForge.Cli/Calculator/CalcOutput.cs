@@ -1,12 +1,16 @@
 using System.Globalization;
 using System.Text.Json;
+using OutputForge.Analysis;
+using OutputForge.Layout;
+using OutputForge.Results;
 using OutputForge.Stats;
 
 namespace OutputForge.Cli.Calculator;
 
 /// <summary>
 /// Writes calculator results as JSON (--json) or readable lines. Numbers are written at full
-/// precision; a value that does not exist is null with a "note" saying why.
+/// precision; a value that does not exist is null with a "note" saying why. Strata a method left out are named by their
+/// number in the input, worded as every table words them (<see cref="NoteWording"/>).
 /// </summary>
 public sealed class CalcOutput(TextWriter output, bool json)
 {
@@ -131,7 +135,7 @@ public sealed class CalcOutput(TextWriter output, bool json)
                 Number(writer, "estimate", interval.IsEstimable ? interval.Estimate : null);
                 Number(writer, "lower", interval.IsEstimable ? interval.Lower : null);
                 Number(writer, "upper", interval.IsEstimable ? interval.Upper : null);
-                Notes(writer, interval.NotEstimableReason, interval.Notes);
+                Notes(writer, interval.NotEstimableReason, [.. Remarks(interval.StratumRemarks), .. interval.Notes]);
                 break;
             case MultiplicityEntry entry:
                 writer.WriteString("method", entry.Method);
@@ -160,7 +164,7 @@ public sealed class CalcOutput(TextWriter output, bool json)
                 }
                 Number(writer, "pValue", test.IsEstimable ? test.PValue : null);
                 writer.WriteString("method", test.Method);
-                Notes(writer, test.NotEstimableReason, test.Notes);
+                Notes(writer, test.NotEstimableReason, [.. Remarks(test.StratumRemarks), .. test.Notes]);
                 break;
         }
         writer.WriteEndObject();
@@ -192,10 +196,10 @@ public sealed class CalcOutput(TextWriter output, bool json)
         static string F(double? v) => v is { } x ? x.ToString("R", CultureInfo.InvariantCulture) : "not estimable";
         return value switch
         {
-            IntervalResult i when i.IsEstimable => $"{name}: estimate {F(i.Estimate)}, CI ({F(i.Lower)}, {F(i.Upper)})" + NoteText(null, i.Notes),
+            IntervalResult i when i.IsEstimable => $"{name}: estimate {F(i.Estimate)}, CI ({F(i.Lower)}, {F(i.Upper)})" + NoteText(null, [.. Remarks(i.StratumRemarks), .. i.Notes]),
             IntervalResult i => $"{name}: not estimable ({i.NotEstimableReason})",
             TestResult t when t.IsEstimable => $"{name}: {t.Method}" + (t.Statistic is { } s ? $", statistic {F(s)}" : "") +
-                (t.DegreesOfFreedom is { } df ? $", df {F(df)}" : "") + $", p-value {F(t.PValue)}" + NoteText(null, t.Notes),
+                (t.DegreesOfFreedom is { } df ? $", df {F(df)}" : "") + $", p-value {F(t.PValue)}" + NoteText(null, [.. Remarks(t.StratumRemarks), .. t.Notes]),
             TestResult t => $"{name}: {t.Method} not estimable ({t.NotEstimableReason})",
             double number => $"{name}: {F(number)}",
             string text => $"{name}: {text}",
@@ -206,6 +210,11 @@ public sealed class CalcOutput(TextWriter output, bool json)
             _ => name,
         };
     }
+
+    /// <summary>"Stratum 2 has no subjects in group 1 and was skipped.": the strata by their number in the input, from 1.</summary>
+    private static IEnumerable<string> Remarks(IReadOnlyList<StratumRemark> remarks) =>
+        remarks.Select(r => NoteWording.Word(
+            StratumNotes.LeftOut(r, NoteSubject.None, [(r.Stratum + 1).ToString(CultureInfo.InvariantCulture)], g => $"group {g}"), key => key));
 
     private static string NoteText(string? reason, IReadOnlyList<string> notes) =>
         notes.Count == 0 ? string.Empty : $" [{string.Join("; ", notes)}]";

@@ -11,7 +11,7 @@ namespace OutputForge.Stats.Stratified;
 /// V_k = 1 / (1/A + 1/(n1 - A) + 1/(m1 - A) + 1/(n2 - m1 + A)). Then
 /// X^2_BD = sum (a_k - A_k)^2 / V_k, and Tarone's statistic subtracts (sum a_k - sum A_k)^2 / sum V_k;
 /// the reference distribution is chi-square with (number of contributing strata - 1) degrees of freedom.
-/// Strata without subjects in a group are skipped and reported; so are strata with a zero margin
+/// Strata without subjects in a group are skipped and returned as stratum remarks; so are strata with a zero margin
 /// (no events, or all events), whose conditional distribution is degenerate (V_k = 0). Not estimable
 /// when fewer than two strata contribute or the common odds ratio is 0 or infinite.
 /// </summary>
@@ -23,11 +23,11 @@ public static class BreslowDayTest
     public static TestResult Compute(IReadOnlyList<StratumCounts> strata, bool taroneCorrection = true)
     {
         string method = taroneCorrection ? TaroneMethodName : MethodName;
-        var (used, notes) = StrataSelection.Select(strata);
+        var (used, remarks) = StrataSelection.Select(strata);
         var common = MantelHaenszelOddsRatio.Compute(used);
         if (!common.IsEstimable || common.Estimate <= 0 || double.IsInfinity(common.Estimate))
         {
-            return TestResult.NotEstimable(method, $"the common odds ratio is not estimable ({common.NotEstimableReason})") with { Notes = notes };
+            return TestResult.NotEstimable(method, $"the common odds ratio is not estimable ({common.NotEstimableReason})") with { StratumRemarks = remarks };
         }
         double psi = common.Estimate;
         double statistic = 0, observedSum = 0, expectedSum = 0, varianceSum = 0;
@@ -38,7 +38,8 @@ public static class BreslowDayTest
             int m1 = s.EventTotal;
             if (m1 == 0 || m1 == s.N)
             {
-                notes.Add($"Stratum {Number(strata, s)} has {(m1 == 0 ? "no events" : "every subject with the event")}, so no variability, and was left out of the Breslow-Day test.");
+                // Only this test leaves such a stratum out (the common estimates keep it), so the remark names the test.
+                remarks.Add(new StratumRemark(Index(strata, s), m1 == 0 ? StratumRemarkReason.NoEvents : StratumRemarkReason.AllEvents, MethodName));
                 continue;
             }
             double expected = ExpectedCell(psi, s.Total1, s.Total2, m1);
@@ -51,7 +52,7 @@ public static class BreslowDayTest
         }
         if (contributing < 2)
         {
-            return TestResult.NotEstimable(method, "fewer than two strata have events and non-events") with { Notes = notes };
+            return TestResult.NotEstimable(method, "fewer than two strata have events and non-events") with { StratumRemarks = remarks };
         }
         if (taroneCorrection)
         {
@@ -59,7 +60,7 @@ public static class BreslowDayTest
         }
         int df = contributing - 1;
         double p = SpecialFunctions.GammaUpperRegularized(df / 2.0, Math.Max(0, statistic) / 2);
-        return new TestResult(method, statistic, df, p) { Notes = notes };
+        return new TestResult(method, statistic, df, p) { StratumRemarks = remarks };
     }
 
     /// <summary>
@@ -83,15 +84,16 @@ public static class BreslowDayTest
         return first > low - 1e-9 && first < high + 1e-9 ? first : second;
     }
 
-    private static int Number(IReadOnlyList<StratumCounts> strata, StratumCounts stratum)
+    /// <summary>The caller's index of a stratum kept by the selection (the same instance).</summary>
+    private static int Index(IReadOnlyList<StratumCounts> strata, StratumCounts stratum)
     {
         for (int k = 0; k < strata.Count; k++)
         {
             if (ReferenceEquals(strata[k], stratum))
             {
-                return k + 1;
+                return k;
             }
         }
-        return 0;
+        throw new InvalidOperationException("a selected stratum is not one of the input strata");
     }
 }

@@ -9,7 +9,7 @@ namespace OutputForge.Stats.Stratified;
 /// V_k = n1k n2k m1k m2k / (N_k^2 (N_k - 1)), one degree of freedom.
 /// With the continuity correction the numerator is (|sum (a_k - E_k)| - 1/2)^2, applied only when
 /// |sum (a_k - E_k)| is at least 1/2, as in R's mantelhaen.test (otherwise the correction would
-/// overshoot). Strata without subjects in a group are skipped and reported (a stratum kept therefore
+/// overshoot). Strata without subjects in a group are skipped and returned as stratum remarks (a stratum kept therefore
 /// has N_k of at least 2, so its variance is defined).
 /// </summary>
 public static class CochranMantelHaenszelTest
@@ -20,7 +20,7 @@ public static class CochranMantelHaenszelTest
     public static TestResult Compute(IReadOnlyList<StratumCounts> strata, bool continuityCorrection = false)
     {
         string method = continuityCorrection ? CorrectedMethodName : MethodName;
-        var (used, notes) = StrataSelection.Select(strata);
+        var (used, remarks) = StrataSelection.Select(strata);
         double deviation = 0;
         double variance = 0;
         int contributing = 0;
@@ -33,15 +33,15 @@ public static class CochranMantelHaenszelTest
         }
         if (contributing == 0)
         {
-            return TestResult.NotEstimable(method, "no stratum has subjects in both groups") with { Notes = notes };
+            return TestResult.NotEstimable(method, "no stratum has subjects in both groups") with { StratumRemarks = remarks };
         }
         if (variance <= 0)
         {
-            return TestResult.NotEstimable(method, "every stratum has a zero margin (all or no subjects had the event), so the variance is zero") with { Notes = notes };
+            return TestResult.NotEstimable(method, "every stratum has a zero margin (all or no subjects had the event), so the variance is zero") with { StratumRemarks = remarks };
         }
         double numerator = continuityCorrection && Math.Abs(deviation) >= 0.5 ? Math.Abs(deviation) - 0.5 : Math.Abs(deviation);
         double statistic = numerator * numerator / variance;
         double p = SpecialFunctions.GammaUpperRegularized(0.5, statistic / 2);
-        return new TestResult(method, statistic, 1, p) { Notes = notes };
+        return new TestResult(method, statistic, 1, p) { StratumRemarks = remarks };
     }
 }

@@ -19,7 +19,7 @@ namespace OutputForge.Stats.Stratified;
 /// Scores default to table scores 1, 2, ... The inverse is a Moore-Penrose pseudo-inverse; when the
 /// covariance matrix is singular (a row or column empty in every stratum) the degrees of freedom are
 /// its rank and a note says so. Strata with fewer than two subjects have no variance and are skipped
-/// and reported.
+/// and returned as stratum remarks.
 /// </summary>
 public static class GeneralizedCochranMantelHaenszel
 {
@@ -72,7 +72,7 @@ public static class GeneralizedCochranMantelHaenszel
         var general = build.DenseIdentity(rows - 1, rows).KroneckerProduct(build.DenseIdentity(columns - 1, columns));
         var accumulators = new[] { new Accumulator(1), new Accumulator(rows - 1), new Accumulator(general.RowCount) };
 
-        var notes = new List<string>();
+        var remarks = new List<StratumRemark>();
         int contributing = 0;
         for (int h = 0; h < strata.Count; h++)
         {
@@ -80,7 +80,7 @@ public static class GeneralizedCochranMantelHaenszel
             double n = TableMargins.RowTotals(table).Sum();
             if (n < 2)
             {
-                notes.Add($"Stratum {h + 1} has {(n == 0 ? "no subjects" : "a single subject")} and was skipped.");
+                remarks.Add(new StratumRemark(h, n == 0 ? StratumRemarkReason.NoSubjects : StratumRemarkReason.SingleSubject));
                 continue;
             }
             var pRows = Vector<double>.Build.DenseOfEnumerable(TableMargins.RowTotals(table).Select(t => t / n));
@@ -101,12 +101,13 @@ public static class GeneralizedCochranMantelHaenszel
         if (contributing == 0)
         {
             var none = TestResult.NotEstimable(GeneralAssociationName, "no stratum has two or more subjects");
-            return new GeneralizedCmhResult(none with { Method = CorrelationName }, none with { Method = RowMeanScoresName }, none) { Notes = notes };
+            return new GeneralizedCmhResult(none with { Method = CorrelationName, StratumRemarks = remarks },
+                none with { Method = RowMeanScoresName, StratumRemarks = remarks }, none with { StratumRemarks = remarks });
         }
         return new GeneralizedCmhResult(
-            accumulators[0].Result(CorrelationName, 1),
-            accumulators[1].Result(RowMeanScoresName, rows - 1),
-            accumulators[2].Result(GeneralAssociationName, (rows - 1) * (columns - 1))) { Notes = notes };
+            accumulators[0].Result(CorrelationName, 1) with { StratumRemarks = remarks },
+            accumulators[1].Result(RowMeanScoresName, rows - 1) with { StratumRemarks = remarks },
+            accumulators[2].Result(GeneralAssociationName, (rows - 1) * (columns - 1)) with { StratumRemarks = remarks });
     }
 
     private static double[] Scores(IReadOnlyList<double>? scores, int count, string name)

@@ -6,17 +6,17 @@ namespace OutputForge.Stats.Stratified;
 /// the confidence interval exp(ln RR_MH -/+ z sqrt(v)) and the variance of Greenland and Robins (1985,
 /// Biometrics 41:55-68): v = sum ((n1k n2k m1k - a_k c_k N_k) / N_k^2) /
 /// ((sum a_k n2k / N_k)(sum c_k n1k / N_k)), m1k = a_k + c_k.
-/// Not estimable when either sum is zero. Strata without subjects in a group are skipped and reported.
+/// Not estimable when either sum is zero. Strata without subjects in a group are skipped and returned as stratum remarks.
 /// </summary>
 public static class MantelHaenszelRelativeRisk
 {
     public static IntervalResult Compute(IReadOnlyList<StratumCounts> strata, double level = 0.95)
     {
         ConfidenceLevel.Validate(level);
-        var (used, notes) = StrataSelection.Select(strata);
+        var (used, remarks) = StrataSelection.Select(strata);
         if (used.Count == 0)
         {
-            return IntervalResult.NotEstimable("no stratum has subjects in both groups") with { Notes = notes };
+            return IntervalResult.NotEstimable("no stratum has subjects in both groups") with { StratumRemarks = remarks };
         }
         double numerator = 0, denominator = 0, varianceNumerator = 0;
         foreach (var k in used)
@@ -30,11 +30,11 @@ public static class MantelHaenszelRelativeRisk
         {
             return IntervalResult.NotEstimable(numerator == 0
                 ? "no events in group 1 in any stratum, so the common relative risk is 0 and its log is undefined"
-                : "no events in group 2 in any stratum, so the common relative risk is infinite") with { Notes = notes };
+                : "no events in group 2 in any stratum, so the common relative risk is infinite") with { StratumRemarks = remarks };
         }
         double estimate = numerator / denominator;
         double variance = varianceNumerator / (numerator * denominator);
         double half = ConfidenceLevel.NormalQuantile(level) * Math.Sqrt(Math.Max(0, variance));
-        return new IntervalResult(estimate, Math.Exp(Math.Log(estimate) - half), Math.Exp(Math.Log(estimate) + half)) { Notes = notes };
+        return new IntervalResult(estimate, Math.Exp(Math.Log(estimate) - half), Math.Exp(Math.Log(estimate) + half)) { StratumRemarks = remarks };
     }
 }

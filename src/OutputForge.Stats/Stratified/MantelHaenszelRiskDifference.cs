@@ -8,17 +8,18 @@ namespace OutputForge.Stats.Stratified;
 /// v = (RD_MH sum P_k + sum Q_k) / (sum w_k)^2, P_k = (n1k^2 y2k - n2k^2 y1k + n1k n2k (n2k - n1k) / 2) / N_k^2,
 /// Q_k = (y1k (n2k - y2k) + y2k (n1k - y1k)) / (2 N_k), y the events.
 /// Limits beyond [-1, 1] are truncated and noted. Strata without subjects in a group are skipped and
-/// reported.
+/// returned as stratum remarks.
 /// </summary>
 public static class MantelHaenszelRiskDifference
 {
     public static IntervalResult Compute(IReadOnlyList<StratumCounts> strata, double level = 0.95)
     {
         ConfidenceLevel.Validate(level);
-        var (used, notes) = StrataSelection.Select(strata);
+        var (used, remarks) = StrataSelection.Select(strata);
+        var notes = new List<string>();
         if (used.Count == 0)
         {
-            return IntervalResult.NotEstimable("no stratum has subjects in both groups") with { Notes = notes };
+            return IntervalResult.NotEstimable("no stratum has subjects in both groups") with { StratumRemarks = remarks };
         }
         double weighted = 0, weights = 0, sumP = 0, sumQ = 0;
         foreach (var k in used)
@@ -49,6 +50,6 @@ public static class MantelHaenszelRiskDifference
         {
             notes.Add("The variance is zero (every stratum has both groups at 0% or at 100%), so the interval has zero width.");
         }
-        return new IntervalResult(estimate, lower, upper) { Notes = notes };
+        return new IntervalResult(estimate, lower, upper) { Notes = notes, StratumRemarks = remarks };
     }
 }

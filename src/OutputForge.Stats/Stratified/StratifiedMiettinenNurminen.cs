@@ -18,7 +18,7 @@ namespace OutputForge.Stats.Stratified;
 /// also equals the Mantel-Haenszel risk difference, whose weights are the same.
 /// With K = 1 the statistic is the unstratified Miettinen-Nurminen statistic, so the interval is the
 /// unstratified one. Strata with no subjects in a group carry no information and are skipped, each
-/// named in <see cref="IntervalResult.Notes"/>; when no stratum is left the result is not estimable.
+/// returned in <see cref="IntervalResult.StratumRemarks"/>; when no stratum is left the result is not estimable.
 /// </summary>
 public static class StratifiedMiettinenNurminen
 {
@@ -29,10 +29,11 @@ public static class StratifiedMiettinenNurminen
     public static IntervalResult Compute(IReadOnlyList<StratumCounts> strata, double level = 0.95)
     {
         ConfidenceLevel.Validate(level);
-        var (used, notes) = StrataSelection.Select(strata);
+        var (used, remarks) = StrataSelection.Select(strata);
+        var notes = new List<string>();
         if (used.Count == 0)
         {
-            return IntervalResult.NotEstimable("no stratum has subjects in both groups") with { Notes = notes };
+            return IntervalResult.NotEstimable("no stratum has subjects in both groups") with { StratumRemarks = remarks };
         }
         double weighted = 0, weights = 0;
         foreach (var k in used)
@@ -49,7 +50,7 @@ public static class StratifiedMiettinenNurminen
         {
             notes.Add("The interval has zero width.");
         }
-        return new IntervalResult(estimate, lower, upper) { Notes = notes };
+        return new IntervalResult(estimate, lower, upper) { Notes = notes, StratumRemarks = remarks };
     }
 
     /// <summary>Z(delta) over the strata that have subjects in both groups; +/- infinity where the restricted variance vanishes.</summary>

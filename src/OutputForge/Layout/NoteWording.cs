@@ -42,7 +42,7 @@ public static class NoteWording
         NoteKind.LogRankTest => $"Two-sided p-value of the log-rank test, {Stratification(note)}, of each arm against {note.Text("control")} (those two arms only).",
         NoteKind.CoxHazardRatio => $"Hazard ratio (arm vs {note.Text("control")}) from a Cox proportional hazards model with treatment as the only covariate, {Stratification(note)}, fitted to the two arms compared; {note.Text("ties")} method for tied times; Wald {Level(note)} CI. " +
             (note.Flag("cumulative") ? $"A hazard ratio above 1 means the event comes sooner than on {note.Text("control")}." : $"A hazard ratio below 1 means a lower event rate than on {note.Text("control")}."),
-        NoteKind.NoStratumValue => NoStratumValue((int)note.Number("subjects"), note.List<string>("variables"), note.OptionalText("leftOutOf")),
+        NoteKind.NoStratumValue => VisitComparison(note.Subject) + NoStratumValue((int)note.Number("subjects"), note.List<string>("variables"), note.OptionalText("leftOutOf")),
         NoteKind.ProportionInterval => $"{note.Text("method")} {Level(note)} confidence interval for the proportion of responders.",
         NoteKind.DifferenceInterval => $"Difference in proportions of responders (each arm minus {note.Text("control")}), in percentage points, with the {note.Text("method")} {Level(note)} confidence interval.",
         NoteKind.UnstratifiedTest => UnstratifiedTest(note),
@@ -75,6 +75,7 @@ public static class NoteWording
             ? $"{note.Subject.Arm} vs {note.Subject.Control}: stratum {string.Join(" / ", note.Subject.Stratum ?? [])} has no subjects in these two arms and was left out."
             : $"{note.Subject.Arm} vs {note.Subject.Control}: stratum {string.Join(" / ", note.Subject.Stratum ?? [])} ({(n == 1 ? "1 subject" : $"{n} subjects")}) has no subjects of {note.Text("withoutArm")} and was left out.",
         NoteKind.StratumAddsNothing => $"{note.Subject.Arm} vs {note.Subject.Control}, {note.Subject.What}: stratum {Stratum(note.Subject)} {StratumReason(note.Text("reason"))} and adds nothing to the test.",
+        NoteKind.StratumLeftOut => Subject(note.Subject) + StratumLeftOut(note),
         NoteKind.NoHazardRatio => $"{note.Subject.Arm} vs {note.Subject.Control}: the Cox model gives no hazard ratio: {note.Text("reason")}.",
         NoteKind.SubgroupCounts => note.Flag("nonResponders")
             ? $"n/N (%) = responders / subjects of the {note.Text("population")} in the arm and subgroup; subjects with no assessment are counted as non-responders. Endpoint: {note.Text("endpoint")}."
@@ -94,6 +95,18 @@ public static class NoteWording
         NoteKind.SmallExpectedCounts => string.Create(CultureInfo.InvariantCulture,
             $"{Subject(note.Subject)}{note.Number("below")} of {note.Number("cells")} expected {(note.Flag("ofCells") ? "cell counts" : "counts")} are below 5 (smallest {note.Number("smallest"):0.00}); the chi-square approximation may be poor."),
         NoteKind.TestNotEstimable => $"{Subject(note.Subject)}{note.Text("method")} not estimable: {note.Text("reason")}.",
+        NoteKind.VisitResponseDenominators => $"N = number of subjects in the {note.Text("population")}; n = subjects with a response at the visit. Percentages are of n." +
+            (note.Flag("missingRow") ? " Missing: subjects of the population without a response at the visit (not in the percentages)." : string.Empty),
+        NoteKind.VisitRecordSelection => VisitRecordSelection(note),
+        NoteKind.VisitCmhTest => VisitCmhTest(note),
+        NoteKind.StrataTooSmall => $"{VisitComparison(note.Subject)}left out of the test for having fewer than 2 subjects with a response: " +
+            string.Join("; ", note.List<string>("strata").Zip(note.List<int>("subjects"), (stratum, n) => $"{stratum} ({n} subject)")) + ".",
+        NoteKind.SingularCovariance => string.Create(CultureInfo.InvariantCulture,
+            $"{VisitComparison(note.Subject)}The covariance matrix has rank {note.Number("rank")} instead of {note.Number("nominalDf")}, so the test has {note.Number("rank")} degrees of freedom; the covariance matrix of the statistic is singular."),
+        NoteKind.PValueNotEstimable => $"{VisitComparison(note.Subject)}NE (not estimable) p-value: {note.Text("reason")}.",
+        NoteKind.NoImputedRecords => note.List<string>("types") is var types
+            ? $"No record of {note.Text("file")} has DTYPE '{note.Text("imputation")}' ({(types.Count == 0 ? "no record has a DTYPE" : "DTYPE values: " + string.Join(", ", types))}); the table shows observed responses only."
+            : string.Empty,
         NoteKind.MethodRemark => Subject(note.Subject) + note.Text("text"),
         NoteKind.NotEstimable => $"NE (not estimable) in \"{rowLabel(note.Subject.Row!)}\", column {note.Subject.Column}: {note.Text("reason")}.",
         NoteKind.Text => Subject(note.Subject) + note.Text("text"),
@@ -147,11 +160,31 @@ public static class NoteWording
         _ => throw new ArgumentOutOfRangeException(nameof(code), code, "unknown stratum reason"),
     };
 
+    /// <summary>"Stratum 718 has no events, so no variability, and was left out of the Breslow-Day test."</summary>
+    private static string StratumLeftOut(ResultNote note)
+    {
+        var name = $"{note.OptionalText("term") ?? "Stratum"} {string.Join(" / ", note.Subject.Stratum ?? [])}";
+        var leftOut = note.OptionalText("method") is { } method ? $"was left out of the {method}" : "was skipped";
+        return note.Text("reason") switch
+        {
+            "no-subjects" => $"{name} has no subjects and {leftOut}.",
+            "single-subject" => $"{name} has a single subject and {leftOut}.",
+            "empty-group" => $"{name} has no subjects in {note.Text("group")} and {leftOut}.",
+            "one-group-only" => $"{name} has subjects of one group only and {leftOut}.",
+            "no-events" => $"{name} has no events, so no variability, and {leftOut}.",
+            "all-events" => $"{name} has every subject with the event, so no variability, and {leftOut}.",
+            var code => throw new ArgumentOutOfRangeException(nameof(note), code, "unknown stratum reason"),
+        };
+    }
+
     private static string NoStratumValue(int subjects, IReadOnlyList<string> variables, string? leftOutOf)
     {
-        var (names, what) = leftOutOf == "stratified-analysis"
-            ? (string.Join(" / ", variables), "the stratified analysis")
-            : (string.Join(", ", variables), "the whole table");
+        var (names, what) = leftOutOf switch
+        {
+            "stratified-analysis" => (string.Join(" / ", variables), "the stratified analysis"),
+            "test" => (string.Join(", ", variables), "the test"),
+            _ => (string.Join(", ", variables), "the whole table"),
+        };
         return $"{subjects} subject{(subjects == 1 ? " has" : "s have")} no value of {names} and {(subjects == 1 ? "is" : "are")} left out of {what}.";
     }
 
@@ -165,6 +198,59 @@ public static class NoteWording
             ? $"; {used[0]} was used for every comparison"
             : string.Concat(methods.Zip(note.List<string>("arms"), (method, arm) => $"; {method} for {arm} vs {note.Text("control")}"));
         return $"Two-sided p-value, unstratified: Pearson's chi-square test, or Fisher's exact test where an expected cell count is below 5{detail}.";
+    }
+
+    /// <summary>"Week 4: " or "Week 4, QF-217 10 mg vs Placebo: ": the visit and the comparison a by-visit note is about; empty without a visit.</summary>
+    private static string VisitComparison(NoteSubject subject) => subject.Visit is not { } visit
+        ? string.Empty
+        : subject.Arm is { } arm ? $"{visit}, {arm} vs {subject.Control}: " : $"{visit}: ";
+
+    private static string VisitRecordSelection(ResultNote note)
+    {
+        var selection = new List<string>();
+        if (note.OptionalText("parameter") is { } parameter)
+            selection.Add($"PARAMCD = '{parameter}'");
+        if (note.OptionalText("where") is { } where)
+            selection.Add(where);
+        var records = selection.Count > 0 ? $"Records with {string.Join(" and ", selection)}; " : string.Empty;
+        if (note.OptionalText("imputation") is not { } imputation)
+            return records + "observed responses only (DTYPE empty), no imputation of missing values.";
+        var imputed = note.List<string>("visits").Zip(note.List<int>("imputedCounts"), (visit, count) => string.Create(CultureInfo.InvariantCulture, $"{visit}: {count}"));
+        return records + $"observed responses (DTYPE empty) and, for visits without one, responses imputed by {imputation} (DTYPE = '{imputation}'); " +
+            $"imputed responses counted: {string.Join("; ", imputed)}.";
+    }
+
+    private static string VisitCmhTest(ResultNote note)
+    {
+        var categories = (int)note.Number("categories");
+        var arms = (int)note.Number("arms");
+        var df = (int)note.Number("df");
+        var scores = note.Text("scores") switch
+        {
+            "equal-spacing" => $"equally spaced column scores 1 to {categories} in the order listed",
+            "modified-ridit" => "modified ridit column scores (standardized midranks) computed within each stratum",
+            "nominal" => "the categories taken as nominal (no scores)",
+            _ => "table scores (column scores " + string.Join(", ", note.List<double>("columnScores").Select(v => v.ToString("0.###", CultureInfo.InvariantCulture))) + " for the categories in the order listed)",
+        };
+        var rowScores = note.Flag("rowScores") ? $"; row scores 1 to {arms} for the arms in column order" : string.Empty;
+        var compared = note.Flag("allArms")
+            ? $"one test over all {arms} arms"
+            : $"each active arm with {note.Text("control")}, those two arms only";
+        var strata = note.List<string>("strata");
+        string strataText;
+        if (strata.Count == 0)
+        {
+            strataText = "unstratified";
+        }
+        else
+        {
+            var range = !note.Values.ContainsKey("fewestStrata") ? string.Empty
+                : note.Number("fewestStrata") == note.Number("mostStrata") ? string.Create(CultureInfo.InvariantCulture, $"; {note.Number("fewestStrata")} strata")
+                : string.Create(CultureInfo.InvariantCulture, $"; {note.Number("fewestStrata")} to {note.Number("mostStrata")} strata by visit and comparison");
+            strataText = $"stratified by {string.Join(" x ", strata)}{(strata.Count > 1 ? " (cross-classified)" : string.Empty)}{range}";
+        }
+        return $"{note.Text("method")} (chi-square with {df} degree{(df == 1 ? "" : "s")} of freedom), {scores}{rowScores}; {strataText}; at each visit separately, {compared}. " +
+            "Strata with fewer than 2 subjects with a response are left out of a test.";
     }
 
     /// <summary>Where a count is taken: "any arm", "all arms combined" or the arm named.</summary>

@@ -15,8 +15,9 @@ public static class TableLayoutBuilder
 
     /// <param name="display">Numbers, or placeholders of their precision for a mock shell (then no records and no warnings).</param>
     /// <param name="groups">Column groups printed as a spanning header row above the arm labels.</param>
+    /// <param name="population">The population as the spec gives it, written on every record of results.json.</param>
     public static LaidOutTable Build(TableResult table, string studyLine, RunFacts run, PageSettings page,
-        NumberDisplay display = NumberDisplay.Values, IReadOnlyList<ColumnGroup>? groups = null)
+        NumberDisplay display = NumberDisplay.Values, IReadOnlyList<ColumnGroup>? groups = null, RecordPopulation? population = null)
     {
         var shell = display == NumberDisplay.Placeholders;
         var notes = TableNotes.Of(table);
@@ -39,10 +40,20 @@ public static class TableLayoutBuilder
         {
             records.Add(new ResultRecord(table.TableId, "header", column.Key, StatisticNames.Denominator, column.SubjectCount,
                 column.SubjectCount!.Value.ToString(CultureInfo.InvariantCulture),
-                string.Create(CultureInfo.InvariantCulture, $"(N={column.SubjectCount})"), column.Label, null, null));
+                string.Create(CultureInfo.InvariantCulture, $"(N={column.SubjectCount})"), column.Label, null, null) { Population = population });
         }
+        // The headings above a row: the nearest row of each smaller indent since the last blank row.
+        var headings = new List<ResultRow>();
         foreach (var row in table.Rows)
         {
+            if (row.Kind == ResultRowKind.Blank)
+            {
+                headings.Clear();
+            }
+            else
+            {
+                headings.RemoveAll(h => h.Indent >= row.Indent);
+            }
             var rowLabel = notes.RowLabel(row);
             var cells = new List<LayoutCell>();
             foreach (var column in table.Columns)
@@ -61,6 +72,8 @@ public static class TableLayoutBuilder
                         Level = value.Level,
                         Sided = value.Sided,
                         Footnotes = notes.LettersOf(row, column),
+                        HeadingFootnotes = notes.HeadingLettersOf(headings, row, column),
+                        Population = population,
                     });
                 }
             }
@@ -71,6 +84,10 @@ public static class TableLayoutBuilder
                 _ => RowKind.Data,
             };
             rows.Add(new BodyRow(rowLabel, row.Indent, cells, kind));
+            if (row.Kind != ResultRowKind.Blank)
+            {
+                headings.Add(row);
+            }
         }
         rows = [.. NumberAlignment.Apply(rows)];
         var footnotes = new List<string>(notes.Footnotes);

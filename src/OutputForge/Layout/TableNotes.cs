@@ -43,6 +43,13 @@ public sealed class TableNotes
     public IReadOnlyList<string> LettersOf(ResultRow row, ResultColumn column) =>
         row.NoteRefs.Concat(column.NoteRefs).Select(id => _letters[id]).Distinct(StringComparer.Ordinal).ToList();
 
+    /// <summary>The letters of the footnotes of the headings a row stands under (outermost first) that the row and column do not already carry.</summary>
+    public IReadOnlyList<string> HeadingLettersOf(IEnumerable<ResultRow> headings, ResultRow row, ResultColumn column)
+    {
+        var own = LettersOf(row, column);
+        return headings.SelectMany(h => h.NoteRefs).Select(id => _letters[id]).Distinct(StringComparer.Ordinal).Except(own, StringComparer.Ordinal).ToList();
+    }
+
     public string RowLabel(ResultRow row) => Label(row.Label, row.Level, row.NoteRefs);
 
     public string ColumnLabel(ResultColumn column) => Label(column.Label, column.Level, column.NoteRefs);

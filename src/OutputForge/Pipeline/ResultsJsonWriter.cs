@@ -150,6 +150,26 @@ public static class ResultsJsonWriter
             }
             json.WriteEndArray();
         }
+        if (record.HeadingFootnotes.Count > 0)
+        {
+            json.WriteStartArray("headingFootnotes");
+            foreach (var letter in record.HeadingFootnotes)
+            {
+                json.WriteStringValue(letter);
+            }
+            json.WriteEndArray();
+        }
+        if (record.Population is { } population)
+        {
+            json.WriteStartObject("population");
+            json.WriteString("name", population.Name);
+            json.WriteString("where", population.Where);
+            if (population.Subset is not null)
+            {
+                json.WriteString("subset", population.Subset);
+            }
+            json.WriteEndObject();
+        }
         json.WriteEndObject();
     }
 }

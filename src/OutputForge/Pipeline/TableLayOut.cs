@@ -19,7 +19,8 @@ public static class TableLayOut
         LaidOutTable laidOut;
         try
         {
-            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, display, StudyColumnGroups.Of(study));
+            var population = new RecordPopulation(table.Population, study.Populations[table.Population].Where, table.Subset);
+            laidOut = TableLayoutBuilder.Build(result, studyLine, run, page, display, StudyColumnGroups.Of(study), population);
         }
         catch (ColumnGroupException e)
         {

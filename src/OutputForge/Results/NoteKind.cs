@@ -46,10 +46,17 @@ public enum NoteKind
     LogRankTest,
     /// <summary>The Cox model hazard ratio. Values: strata, control, ties, level, cumulative.</summary>
     CoxHazardRatio,
-    /// <summary>Subjects without a value of a stratification variable, left out (of the whole table, or with leftOutOf "stratified-analysis" of that analysis). Values: subjects, variables, leftOutOf.</summary>
+    /// <summary>Subjects without a value of a stratification variable, left out (of the whole table, with leftOutOf "stratified-analysis" of that analysis, with "test" of the test of the visit and comparison the subject names). Values: subjects, variables, leftOutOf.</summary>
     NoStratumValue,
     /// <summary>A stratum (subject: its values) that adds nothing to a stratified method. Values: reason ("one-group-only", "no-events").</summary>
     StratumAddsNothing,
+    /// <summary>
+    /// A stratum (subject: its values, and what the method was about) that a stratified method left out. Values: reason
+    /// ("no-subjects", "single-subject", "empty-group", "one-group-only", "no-events", "all-events"); group (the group
+    /// without subjects, for "empty-group"); method (the one method that left it out, where the others kept it); term
+    /// (what the strata are called, e.g. "Level"; "Stratum" when absent).
+    /// </summary>
+    StratumLeftOut,
     /// <summary>The Cox model gives no hazard ratio for a comparison. Values: reason.</summary>
     NoHazardRatio,
     /// <summary>The interval of each arm's proportion of responders. Values: method, level.</summary>
@@ -96,6 +103,29 @@ public enum NoteKind
     SmallExpectedCounts,
     /// <summary>A test gave no result. Values: method, reason.</summary>
     TestNotEstimable,
+    /// <summary>What N, n and the percentages of a categorical response by visit are. Values: population, missingRow (the table has a Missing row).</summary>
+    VisitResponseDenominators,
+    /// <summary>
+    /// The records a by-visit table counts. Values: parameter and where (optional: the endpoint's selection), imputation
+    /// (optional: the DTYPE of imputed records kept), visits and imputedCounts (parallel lists: the imputed responses counted).
+    /// </summary>
+    VisitRecordSelection,
+    /// <summary>
+    /// The generalized Cochran-Mantel-Haenszel test of a by-visit table. Values: method, df (at full rank), scores
+    /// ("equal-spacing", "modified-ridit", "table" or "nominal"), categories (their number), columnScores (the table
+    /// scores), rowScores (row scores 1 to arms are used), arms (their number), allArms (one test over all arms), control,
+    /// strata (the stratification variables; empty when unstratified), fewestStrata and mostStrata (over the visits and
+    /// comparisons; absent when no test ran).
+    /// </summary>
+    VisitCmhTest,
+    /// <summary>Strata (subject: the visit and comparison) left out of a test for having fewer than 2 subjects. Values: strata, subjects (parallel lists).</summary>
+    StrataTooSmall,
+    /// <summary>A test's covariance matrix is singular (subject: the visit and comparison), so it has fewer degrees of freedom. Values: rank, nominalDf.</summary>
+    SingularCovariance,
+    /// <summary>A p-value shown as NE (subject: the visit and comparison). Values: reason.</summary>
+    PValueNotEstimable,
+    /// <summary>No record of a dataset has the DTYPE of the imputation asked for. Values: file, imputation, types (the DTYPE values present).</summary>
+    NoImputedRecords,
     /// <summary>A remark of a statistical method on its own input (e.g. empty rows left out), as the method words it. Values: text.</summary>
     MethodRemark,
     /// <summary>An NE in the table: the subject names the row and column. Values: reason.</summary>

@@ -26,4 +26,14 @@ public sealed record ResultRecord(
 
     /// <summary>The letters of the footnotes its row and column refer to, as printed ("[a]").</summary>
     public IReadOnlyList<string> Footnotes { get; init; } = [];
+
+    /// <summary>
+    /// The letters of the footnotes of the headings it stands under (a visit, a system organ class, a model: the nearest
+    /// row of each smaller indent above it, up to a blank row), outermost first, as printed; a letter of its own row or
+    /// column is not repeated here.
+    /// </summary>
+    public IReadOnlyList<string> HeadingFootnotes { get; init; } = [];
+
+    /// <summary>The population it was computed on, as the spec names it; null where the caller gave none (a result laid out alone).</summary>
+    public RecordPopulation? Population { get; init; }
 }

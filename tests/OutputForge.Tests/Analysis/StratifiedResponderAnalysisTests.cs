@@ -92,6 +92,30 @@ public sealed class StratifiedResponderAnalysisTests
     }
 
     [Fact]
+    public void A_stratum_the_Breslow_Day_test_leaves_out_is_named_by_its_values_in_the_warning()
+    {
+        // Invented: A / X has Placebo 1/3 and Active 2/3 responders (odds ratio 4); B / X has one subject per arm and no
+        // responder, so no variability: the Breslow-Day test leaves it out (Stats returns its index, the kind its name).
+        const string adsl =
+            "STUDYID,USUBJID,TRT01P,TRT01PN,ITTFL,STRAT1R,STRAT2R\n" +
+            "T1,T1-001,Placebo,0,Y,A,X\nT1,T1-002,Placebo,0,Y,A,X\nT1,T1-003,Placebo,0,Y,A,X\n" +
+            "T1,T1-004,Active,1,Y,A,X\nT1,T1-005,Active,1,Y,A,X\nT1,T1-006,Active,1,Y,A,X\n" +
+            "T1,T1-007,Placebo,0,Y,B,X\nT1,T1-008,Active,1,Y,B,X\n";
+        const string adeff =
+            "STUDYID,USUBJID,PARAMCD,AVISIT,AVALC,ANL01FL,DTYPE\n" +
+            "T1,T1-001,RESP,Week 4,Y,Y,\nT1,T1-002,RESP,Week 4,N,Y,\nT1,T1-003,RESP,Week 4,N,Y,\n" +
+            "T1,T1-004,RESP,Week 4,Y,Y,\nT1,T1-005,RESP,Week 4,Y,Y,\nT1,T1-006,RESP,Week 4,N,Y,\n" +
+            "T1,T1-007,RESP,Week 4,N,Y,\nT1,T1-008,RESP,Week 4,N,Y,\n";
+        using var study = new MiniStudy(table: Table(Settings), adsl: adsl, adeff: adeff);
+        var result = Analyze(study);
+        var note = Assert.Single(result.Notes, n => n.Kind == NoteKind.StratumLeftOut);
+        Assert.Equal(["B / X"], note.Subject.Stratum);
+        Assert.Contains("Active vs Placebo: Stratum B / X has no events, so no variability, and was left out of the Breslow-Day test.",
+            OutputForge.Layout.TableNotes.Of(result).Warnings);
+        Assert.DoesNotContain(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("Stratum 2", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Miettinen_nurminen_choice_uses_the_stratified_score_interval()
     {
         using var study = new MiniStudy(table: Table(Settings.Replace("\"homogeneity\": true", "\"difference\": \"miettinen-nurminen\"")), adsl: Adsl, adeff: Adeff);

@@ -44,6 +44,10 @@ public sealed class CategoricalByVisitAnalysisTests
         return new CategoricalByVisitAnalysis().Analyze(package.Study, package.Tables[0], data);
     }
 
+    private static IReadOnlyList<string> Warnings(TableResult result) => OutputForge.Layout.TableNotes.Of(result).Warnings;
+
+    private static IReadOnlyList<string> Footnotes(TableResult result) => OutputForge.Layout.TableNotes.Of(result).Footnotes;
+
     private static double? Value(TableResult result, string row, string column, string statistic) =>
         result.Rows.Single(r => r.Key == row).Cells.Single(c => c.Column == column).Values.Single(v => v.Statistic == statistic).Value;
 
@@ -62,7 +66,7 @@ public sealed class CategoricalByVisitAnalysisTests
         // Week 4 active: T1-008's record without ANL01FL is not selected, its flagged one (1) is.
         Assert.Equal(2, Value(result, "week-4-category-1", "active", "n"));
         Assert.DoesNotContain(result.Columns, c => c.Key.StartsWith("p-value", StringComparison.Ordinal));
-        Assert.Contains(result.MethodNotes, n => n.Contains("observed responses only (DTYPE empty)", StringComparison.Ordinal));
+        Assert.Contains(Footnotes(result), n => n.Contains("observed responses only (DTYPE empty)", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -72,7 +76,7 @@ public sealed class CategoricalByVisitAnalysisTests
         var result = Analyze(study);
         Assert.Equal(3, Value(result, "week-8-n", "placebo", "n"));
         Assert.Equal(2, Value(result, "week-8-category-3", "placebo", "n"));
-        Assert.Contains(result.MethodNotes, n => n.Contains("imputed by LOCF", StringComparison.Ordinal) && n.Contains("Week 8: 1", StringComparison.Ordinal));
+        Assert.Contains(Footnotes(result), n => n.Contains("imputed by LOCF", StringComparison.Ordinal) && n.Contains("Week 8: 1", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -82,10 +86,38 @@ public sealed class CategoricalByVisitAnalysisTests
         var result = Analyze(study);
         // Week 4: REG = C holds T1-008 alone.
         var expected = "Week 4, Active vs Placebo: left out of the test for having fewer than 2 subjects with a response: REG = C (1 subject).";
-        Assert.Contains(expected, result.Warnings);
-        Assert.Contains(expected, result.MethodNotes);
+        Assert.Contains(expected, Warnings(result));
+        Assert.Contains(expected, Footnotes(result));
         Assert.Equal(2, Value(result, "week-4-n", "p-value-active", "strata"));
         Assert.Equal(1, Value(result, "week-4-n", "p-value-active", "df"));
+        // The note is data: its visit, comparison and strata, worded by Layout.
+        var note = Assert.Single(result.Notes, n => n.Kind == NoteKind.StrataTooSmall && n.Role == NoteRole.Warning && n.Subject.Visit == "Week 4");
+        Assert.Equal(new NoteSubject(Visit: "Week 4", Arm: "Active", Control: "Placebo"), note.Subject);
+        Assert.Equal(["REG = C"], note.List<string>("strata"));
+        Assert.Empty(result.MethodNotes);
+        Assert.Empty(result.Warnings);
+    }
+
+    [Fact]
+    public void The_test_footnote_is_lettered_by_the_p_value_columns_that_refer_to_it()
+    {
+        using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table($$"""{ "categories": {{Categories}}, "strata": ["REG"] }"""));
+        var result = Analyze(study);
+        var notes = OutputForge.Layout.TableNotes.Of(result);
+        Assert.Equal("Active\nvs Placebo\np-value [a]", notes.ColumnLabel(result.Columns.Single(c => c.Key == "p-value-active")));
+        string[] expected = ["N = number of subjects in the ITT Population; n = subjects with a response at the visit. Percentages are of n." +
+            " Missing: subjects of the population without a response at the visit (not in the percentages).",
+            "Records with PARAMCD = 'IMP' and ANL01FL = 'Y'; observed responses only (DTYPE empty), no imputation of missing values.",
+            "[a] Cochran-Mantel-Haenszel row mean scores test (chi-square with 1 degree of freedom), table scores (column scores 1, 2, 3, 4 for the " +
+            "categories in the order listed); stratified by REG; 1 to 2 strata by visit and comparison; at each visit separately, each active arm with Placebo, those two arms only. " +
+            "Strata with fewer than 2 subjects with a response are left out of a test.",
+            "Week 4, Active vs Placebo: left out of the test for having fewer than 2 subjects with a response: REG = C (1 subject).",
+            "Week 8, Active vs Placebo: left out of the test for having fewer than 2 subjects with a response: REG = B (1 subject)."];
+        Assert.Equal(expected.Length, notes.Footnotes.Count);
+        foreach (var (want, got) in expected.Zip(notes.Footnotes))
+        {
+            Assert.Equal(want, got);
+        }
     }
 
     [Fact]
@@ -95,8 +127,8 @@ public sealed class CategoricalByVisitAnalysisTests
             table: Table($$"""{ "categories": {{Categories}}, "strata": ["REG"] }"""));
         var result = Analyze(study);
         Assert.Equal(4, Value(result, "week-4-n", "active", "n"));
-        Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", result.Warnings);
-        Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", result.MethodNotes);
+        Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", Warnings(result));
+        Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", Footnotes(result));
     }
 
     /// <summary>
@@ -122,8 +154,8 @@ public sealed class CategoricalByVisitAnalysisTests
         var result = Analyze(study);
         // Week 4 uses categories 1-3 only: rank (2 - 1)(3 - 1) = 2 instead of 3.
         Assert.Equal(2, Value(result, "week-4-n", "p-value-active", "df"));
-        Assert.Contains(result.Warnings, w => w.StartsWith("Week 4, Active vs Placebo: The covariance matrix has rank 2 instead of 3", StringComparison.Ordinal));
-        Assert.Contains(result.MethodNotes, n => n.Contains("chi-square with 3 degrees of freedom", StringComparison.Ordinal));
+        Assert.Contains(Warnings(result), w => w.StartsWith("Week 4, Active vs Placebo: The covariance matrix has rank 2 instead of 3", StringComparison.Ordinal));
+        Assert.Contains(Footnotes(result), n => n.Contains("chi-square with 3 degrees of freedom", StringComparison.Ordinal));
     }
 
     [Fact]

@@ -61,8 +61,21 @@ public sealed class SubgroupEdgeCaseTests
         var cells = Balanced.Append(new Cell("Active", "M", "West", 4, 4)).ToArray();
         var result = Analyze("""{ "variables": [ { "variable": "REGION1", "levels": [ { "value": "North" }, { "value": "South" }, { "value": "West" } ] } ], "interaction": "breslow-day-tarone", "minimumPerArm": 1 }""", cells);
         Assert.Equal(0, Value(result, "region1-west", "placebo", "N").Value);
-        Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("level West was left out of the interaction test", StringComparison.Ordinal));
+        Assert.Contains("REGION1 interaction, Active vs Placebo: Level West has no subjects in Placebo and was left out of the interaction test.",
+            OutputForge.Layout.TableNotes.Of(result).Warnings);
         Assert.NotNull(Value(result, "region1-interaction", "active-vs-placebo", "pValue").Value);
+    }
+
+    [Fact]
+    public void A_level_the_Breslow_Day_test_leaves_out_is_named_by_its_label()
+    {
+        // West has no responder in either arm: no variability, so the Breslow-Day test leaves it out; the warning names
+        // the level by its label, not by its position among the levels given to the test.
+        var cells = Balanced.Append(new Cell("Placebo", "M", "West", 0, 5)).Append(new Cell("Active", "M", "West", 0, 6)).ToArray();
+        var result = Analyze("""{ "variables": [ { "variable": "REGION1", "levels": [ { "value": "North" }, { "value": "South" }, { "value": "West" } ] } ], "interaction": "breslow-day", "minimumPerArm": 1 }""", cells);
+        var warnings = OutputForge.Layout.TableNotes.Of(result).Warnings;
+        Assert.Contains("REGION1 interaction, Active vs Placebo: Level West has no events, so no variability, and was left out of the Breslow-Day test.", warnings);
+        Assert.DoesNotContain(warnings, w => w.Contains("Stratum", StringComparison.Ordinal));
     }
 
     [Fact]

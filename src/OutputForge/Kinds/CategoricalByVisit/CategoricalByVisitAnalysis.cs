@@ -42,7 +42,8 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         var settings = table.Settings<CategoricalByVisitSettings>();
         var statistics = table.Statistics;
         var selection = PopulationSelection.Select(study, table, data);
-        var warnings = new List<string>(selection.Warnings);
+        var notes = new List<ResultNote>();
+        var warnings = new List<ResultNote>();
         var categories = ResponseCategories.From(settings, table.Source);
         var responses = VisitResponses.Select(table, data, categories, warnings);
         var strata = settings.Strata.Select((s, i) => RecordVariable.Find(s, responses.Dataset, data, table.Source, $"/categoricalByVisit/strata/{i}")).ToList();
@@ -60,13 +61,13 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         if (testing)
         {
             columns.AddRange(allArms
-                ? [new ResultColumn(PValueColumn, "p-value [a]", null)]
-                : active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value [a]", null)));
+                ? [new ResultColumn(PValueColumn, "p-value", null) { NoteRefs = [VisitTableNotes.TestNote] }]
+                : active.Select(a => new ResultColumn(PValueKey(a), $"{a.Label}\nvs {control.Label}\np-value", null) { NoteRefs = [VisitTableNotes.TestNote] }));
         }
         var decimals = statistics.PercentDecimals;
         var rows = new List<ResultRow>();
-        var imputedByVisit = new List<string>();
-        var testIssues = new List<string>();
+        var imputedByVisit = new List<(string Visit, int Imputed)>();
+        var testIssues = new List<ResultNote>();
         var comparisonsByVisit = new List<(string Visit, IReadOnlyList<VisitComparison> Comparisons)>();
 
         foreach (var visit in responses.Visits)
@@ -93,7 +94,7 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
             var imputed = answered.Count(s => s.Response.Imputed);
             if (settings.Imputation is not null)
             {
-                imputedByVisit.Add($"{visit}: {imputed}");
+                imputedByVisit.Add((visit, imputed));
             }
 
             var comparisons = new List<VisitComparison>();
@@ -107,7 +108,7 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
                 {
                     var comparison = VisitComparison.Compute(key, arms, units, categories.Count, scores, settings.Test);
                     comparisons.Add(comparison);
-                    VisitTableNotes.ReportIssues(visit, comparison, settings, testIssues);
+                    VisitTableNotes.ReportIssues(visit, comparison, settings, VisitComparison.NominalDf(settings.Test, arms.Count, categories.Count), testIssues);
                 }
                 comparisonsByVisit.Add((visit, comparisons));
             }
@@ -132,23 +133,23 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
         }
         rows.RemoveAt(rows.Count - 1);
 
-        var notes = new List<string>
-        {
-            $"N = number of subjects in the {selection.Label}; n = subjects with a response at the visit. Percentages are of n." +
-                (settings.MissingRow ? " Missing: subjects of the population without a response at the visit (not in the percentages)." : string.Empty),
-            VisitTableNotes.Records(endpoint, settings, imputedByVisit),
-        };
+        notes.Add(VisitTableNotes.Denominators(selection, settings));
+        notes.Add(VisitTableNotes.Records(endpoint, settings, imputedByVisit));
         if (testing)
         {
-            notes.Add("[a] " + VisitTableNotes.Test(settings, categories, scores, strata, selection, allArms, comparisonsByVisit));
-            notes.AddRange(testIssues);
+            notes.Add(VisitTableNotes.Test(settings, categories, scores, strata, selection, allArms, comparisonsByVisit));
+            // Each issue of a single test is printed among the footnotes and raised as a warning.
+            notes.AddRange(testIssues.Select((issue, i) => issue with { Id = $"issue-{i + 1}", Role = NoteRole.Footnote }));
             warnings.AddRange(testIssues);
         }
         warnings.AddRange(comparisonsByVisit.SelectMany(v => v.Comparisons
             .Where(c => !c.Test.IsEstimable)
-            .Select(c => $"{c.Where(v.Visit)}: NE (not estimable) p-value: {c.Test.NotEstimableReason}.")));
-        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, notes, warnings, table.Footnotes,
-            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor);
+            .Select(c => ResultNote.Warning(NoteKind.PValueNotEstimable, VisitTableNotes.About(v.Visit, c), ("reason", c.Test.NotEstimableReason!)))));
+        return new TableResult(table.Id, table.Title, selection.Label, columns, rows, [], selection.Warnings, table.Footnotes,
+            new TableProvenance(SpecPaths.RelativeToStudy(study, table), ["adsl", endpoint.Dataset]), decimals, statistics.PValueFloor)
+        {
+            Notes = [.. notes, .. warnings],
+        };
     }
 
     private static TreatmentArm? ArmOf(PopulationSelection selection, string columnKey) =>

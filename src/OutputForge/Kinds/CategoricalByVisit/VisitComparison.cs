@@ -19,11 +19,6 @@ internal sealed record VisitComparison(
     /// <summary>True for one test over all arms, false for an active arm against the control.</summary>
     public bool OverAllArms => ColumnKey == CategoricalByVisitAnalysis.PValueColumn;
 
-    /// <summary>Where a message applies: the visit, and the comparison when there is one per active arm.</summary>
-    public string Where(string visit) => OverAllArms
-        ? visit
-        : $"{visit}, {Arms.First(a => !a.IsControl).Label} vs {Arms.First(a => a.IsControl).Label}";
-
     /// <summary>
     /// Builds the I x J table of each stratum (I arms, J categories) from the subjects' responses and
     /// computes the statistic the spec chose; row scores are 1, 2, ... in arm order.

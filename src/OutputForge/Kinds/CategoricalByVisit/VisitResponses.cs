@@ -1,5 +1,6 @@
 using OutputForge.Data;
 using OutputForge.Naming;
+using OutputForge.Results;
 using OutputForge.Spec;
 
 namespace OutputForge.Kinds.CategoricalByVisit;
@@ -30,7 +31,7 @@ internal sealed class VisitResponses
     /// <summary>The response of each subject with a record at the visit; Category is -1 for a missing value.</summary>
     public IReadOnlyDictionary<string, Response> OfVisit(string visit) => _byVisit[visit];
 
-    public static VisitResponses Select(TableSpec table, StudyData data, ResponseCategories categories, List<string> warnings)
+    public static VisitResponses Select(TableSpec table, StudyData data, ResponseCategories categories, List<ResultNote> warnings)
     {
         var endpoint = table.Endpoint!;
         var settings = table.Settings<CategoricalByVisitSettings>();
@@ -96,7 +97,7 @@ internal sealed class VisitResponses
     }
 
     /// <summary>Observed records have DTYPE empty (ADaM); with an imputation type its derived records are kept too.</summary>
-    private static Func<int, bool> DerivationTest(Dataset dataset, string? imputation, SpecSource source, string file, List<string> warnings)
+    private static Func<int, bool> DerivationTest(Dataset dataset, string? imputation, SpecSource source, string file, List<ResultNote> warnings)
     {
         var dtype = dataset.Find("DTYPE");
         if (dtype is null)
@@ -113,7 +114,7 @@ internal sealed class VisitResponses
             var types = dtype.DistinctValues();
             if (!types.Contains(imputation, StringComparer.Ordinal))
             {
-                warnings.Add($"No record of {file} has DTYPE '{imputation}' ({(types.Count == 0 ? "no record has a DTYPE" : "DTYPE values: " + string.Join(", ", types))}); the table shows observed responses only.");
+                warnings.Add(ResultNote.Warning(NoteKind.NoImputedRecords, NoteSubject.None, ("file", file), ("imputation", imputation), ("types", types.ToList())));
             }
         }
         return row => dtype.IsMissing(row) || (imputation is not null && string.Equals(dtype.GetText(row), imputation, StringComparison.Ordinal));

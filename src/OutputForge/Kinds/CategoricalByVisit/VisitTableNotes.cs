@@ -1,83 +1,94 @@
-using System.Globalization;
 using OutputForge.Analysis;
+using OutputForge.Results;
 using OutputForge.Spec;
 
 namespace OutputForge.Kinds.CategoricalByVisit;
 
 /// <summary>
-/// The footnotes of a categorical-by-visit table: the record selection (with the DTYPE rule and the
-/// imputed responses counted), the test (statistic, degrees of freedom, scores, strata, comparison) and
-/// the issues of single tests (strata left out, subjects without a stratum, a singular covariance matrix).
+/// The notes of a categorical-by-visit table as data (Layout words them): the denominators, the record selection (with
+/// the DTYPE rule and the imputed responses counted), the test (statistic, degrees of freedom, scores, strata,
+/// comparison) and the issues of single tests (strata left out, subjects without a stratum, a singular covariance
+/// matrix), each issue both a footnote and a warning.
 /// </summary>
 internal static class VisitTableNotes
 {
-    /// <summary>Strata left out, subjects without a stratum and a singular covariance matrix, for the footnotes and the log.</summary>
-    public static void ReportIssues(string visit, VisitComparison comparison, CategoricalByVisitSettings settings, List<string> issues)
+    public const string TestNote = "test";
+
+    /// <summary>What a note on one test is about: the visit, and the comparison when there is one per active arm.</summary>
+    public static NoteSubject About(string visit, VisitComparison comparison) => comparison.OverAllArms
+        ? new NoteSubject(Visit: visit)
+        : new NoteSubject(Visit: visit, Arm: comparison.Arms.First(a => !a.IsControl).Label, Control: comparison.Arms.First(a => a.IsControl).Label);
+
+    /// <summary>Strata left out, subjects without a stratum and a singular covariance matrix, as warnings (the kind also prints them as footnotes).</summary>
+    public static void ReportIssues(string visit, VisitComparison comparison, CategoricalByVisitSettings settings, int nominalDf, List<ResultNote> issues)
     {
-        var where = comparison.Where(visit);
+        var about = About(visit, comparison);
         if (comparison.StrataLeftOut.Count > 0)
         {
-            issues.Add($"{where}: left out of the test for having fewer than 2 subjects with a response: " +
-                string.Join("; ", comparison.StrataLeftOut.Select(s => $"{s.Stratum.Text} ({s.Subjects} subject)")) + ".");
+            issues.Add(ResultNote.Warning(NoteKind.StrataTooSmall, about,
+                ("strata", comparison.StrataLeftOut.Select(s => s.Stratum.Text).ToList()), ("subjects", comparison.StrataLeftOut.Select(s => s.Subjects).ToList())));
         }
         if (comparison.WithoutStratum > 0)
         {
-            issues.Add($"{where}: {comparison.WithoutStratum} subject{(comparison.WithoutStratum == 1 ? " has" : "s have")} no value of {string.Join(", ", settings.Strata)} and {(comparison.WithoutStratum == 1 ? "is" : "are")} left out of the test.");
+            issues.Add(ResultNote.Warning(NoteKind.NoStratumValue, about,
+                ("subjects", comparison.WithoutStratum), ("variables", settings.Strata.ToList()), ("leftOutOf", "test")));
         }
-        issues.AddRange(comparison.Test.Notes.Select(note => $"{where}: {note.TrimEnd('.')}; the covariance matrix of the statistic is singular."));
+        // The statistic's degrees of freedom are the rank of its covariance matrix (Stats' GeneralizedCochranMantelHaenszel).
+        if (comparison.Test.IsEstimable && comparison.Test.DegreesOfFreedom is { } rank && rank < nominalDf)
+        {
+            issues.Add(ResultNote.Warning(NoteKind.SingularCovariance, about, ("rank", (int)rank), ("nominalDf", nominalDf)));
+        }
     }
 
-    public static string Records(EndpointSpec endpoint, CategoricalByVisitSettings settings, List<string> imputedByVisit)
+    public static ResultNote Denominators(PopulationSelection selection, CategoricalByVisitSettings settings) =>
+        ResultNote.Footnote("denominators", NoteKind.VisitResponseDenominators, ("population", selection.Label), ("missingRow", settings.MissingRow));
+
+    public static ResultNote Records(EndpointSpec endpoint, CategoricalByVisitSettings settings, IReadOnlyList<(string Visit, int Imputed)> imputedByVisit)
     {
-        var selection = new List<string>();
+        var values = new List<(string, object)>
+        {
+            ("visits", imputedByVisit.Select(v => v.Visit).ToList()),
+            ("imputedCounts", imputedByVisit.Select(v => v.Imputed).ToList()),
+        };
         if (endpoint.Parameter is not null)
-        {
-            selection.Add($"PARAMCD = '{endpoint.Parameter}'");
-        }
+            values.Add(("parameter", endpoint.Parameter));
         if (endpoint.Where is not null)
-        {
-            selection.Add(endpoint.Where);
-        }
-        var records = selection.Count > 0 ? $"Records with {string.Join(" and ", selection)}; " : string.Empty;
-        return settings.Imputation is null
-            ? records + "observed responses only (DTYPE empty), no imputation of missing values."
-            : records + $"observed responses (DTYPE empty) and, for visits without one, responses imputed by {settings.Imputation} (DTYPE = '{settings.Imputation}'); " +
-              $"imputed responses counted: {string.Join("; ", imputedByVisit)}.";
+            values.Add(("where", endpoint.Where));
+        if (settings.Imputation is not null)
+            values.Add(("imputation", settings.Imputation));
+        return ResultNote.Footnote("records", NoteKind.VisitRecordSelection, [.. values]);
     }
 
-    public static string Test(CategoricalByVisitSettings settings, ResponseCategories categories, double[] scores,
+    public static ResultNote Test(CategoricalByVisitSettings settings, ResponseCategories categories, double[] scores,
         IReadOnlyList<RecordVariable> strata, PopulationSelection selection, bool allArms,
         IReadOnlyList<(string Visit, IReadOnlyList<VisitComparison> Comparisons)> byVisit)
     {
         var arms = allArms ? selection.Arms.Count : 2;
-        var df = VisitComparison.NominalDf(settings.Test, arms, categories.Count);
-        var name = VisitComparison.MethodName(settings.Test);
-        var scoreText = settings.Scores switch
+        var scoreCode = settings.Test == GeneralizedCmhStatistic.GeneralAssociation ? "nominal" : settings.Scores switch
         {
-            ColumnScores.EqualSpacing => $"equally spaced column scores 1 to {categories.Count} in the order listed",
-            ColumnScores.ModifiedRidit => "modified ridit column scores (standardized midranks) computed within each stratum",
-            _ => "table scores (column scores " + string.Join(", ", scores.Select(s => s.ToString("0.###", CultureInfo.InvariantCulture))) + " for the categories in the order listed)",
+            ColumnScores.EqualSpacing => "equal-spacing",
+            ColumnScores.ModifiedRidit => "modified-ridit",
+            _ => "table",
         };
-        if (settings.Test == GeneralizedCmhStatistic.GeneralAssociation)
+        var values = new List<(string, object)>
         {
-            scoreText = "the categories taken as nominal (no scores)";
-        }
-        var rowScores = settings.Test == GeneralizedCmhStatistic.Correlation ? $"; row scores 1 to {arms} for the arms in column order" : string.Empty;
-        var compared = allArms
-            ? $"one test over all {selection.Arms.Count} arms"
-            : $"each active arm with {selection.Control.Label}, those two arms only";
-        string strataText;
-        if (strata.Count == 0)
+            ("method", VisitComparison.MethodName(settings.Test)),
+            ("df", VisitComparison.NominalDf(settings.Test, arms, categories.Count)),
+            ("scores", scoreCode),
+            ("categories", categories.Count),
+            ("columnScores", scores.ToList()),
+            ("rowScores", settings.Test == GeneralizedCmhStatistic.Correlation),
+            ("arms", arms),
+            ("allArms", allArms),
+            ("control", selection.Control.Label),
+            ("strata", strata.Select(s => s.Name).ToList()),
+        };
+        var counts = byVisit.SelectMany(v => v.Comparisons.Select(c => c.StrataUsed)).ToList();
+        if (counts.Count > 0)
         {
-            strataText = "unstratified";
+            values.Add(("fewestStrata", counts.Min()));
+            values.Add(("mostStrata", counts.Max()));
         }
-        else
-        {
-            var counts = byVisit.SelectMany(v => v.Comparisons.Select(c => c.StrataUsed)).ToList();
-            var range = counts.Count == 0 ? string.Empty : counts.Min() == counts.Max() ? $"; {counts.Min()} strata" : $"; {counts.Min()} to {counts.Max()} strata by visit and comparison";
-            strataText = $"stratified by {string.Join(" x ", strata.Select(s => s.Name))}{(strata.Count > 1 ? " (cross-classified)" : string.Empty)}{range}";
-        }
-        return $"{name} (chi-square with {df} degree{(df == 1 ? "" : "s")} of freedom), {scoreText}{rowScores}; {strataText}; at each visit separately, {compared}. " +
-            "Strata with fewer than 2 subjects with a response are left out of a test.";
+        return ResultNote.Footnote(TestNote, NoteKind.VisitCmhTest, [.. values]);
     }
 }

@@ -1,4 +1,3 @@
-using System.Text.RegularExpressions;
 using OutputForge.Analysis;
 using OutputForge.Results;
 using OutputForge.Stats;
@@ -12,7 +11,7 @@ namespace OutputForge.Kinds.Responders;
 /// Mantel-Haenszel relative risk and odds ratio. Strata without subjects of one of the two arms carry
 /// no information on the comparison: they are left out, and named in <see cref="Notes"/>.
 /// </summary>
-public sealed partial record StratifiedComparison(
+public sealed record StratifiedComparison(
     TreatmentArm Arm,
     IntervalResult Difference,
     TestResult Test,
@@ -77,18 +76,24 @@ public sealed partial record StratifiedComparison(
             OddsRatioIntervalMethod.Woolf => MantelHaenszelOddsRatio.Compute(used, level),
             _ => throw new ArgumentOutOfRangeException(nameof(oddsRatioMethod), oddsRatioMethod, "Unknown odds ratio interval."),
         };
-        var remarks = new HashSet<string>(StringComparer.Ordinal);
-        foreach (var note in difference.Notes.Concat(test.Notes).Concat(homogeneity?.Notes ?? []).Concat(relativeRisk?.Notes ?? []).Concat(oddsRatio?.Notes ?? []))
+        // The methods run on the same strata, so a stratum one leaves out the others leave out too: say it once. Stats
+        // returns the strata by their index in the list it was given; usedNames names them.
+        var about = new NoteSubject(Arm: arm.Label, Control: control.Label);
+        var remarks = new HashSet<StratumRemark>();
+        var texts = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var (strataRemarks, methodNotes) in new[] { (difference.StratumRemarks, difference.Notes), (test.StratumRemarks, test.Notes),
+            (homogeneity?.StratumRemarks ?? [], homogeneity?.Notes ?? []), (relativeRisk?.StratumRemarks ?? [], relativeRisk?.Notes ?? []),
+            (oddsRatio?.StratumRemarks ?? [], oddsRatio?.Notes ?? []) })
         {
-            var named = StratumNumber().Replace(note, m => $"Stratum {usedNames[int.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture) - 1]} ", 1);
-            if (remarks.Add(named))
+            foreach (var remark in strataRemarks.Where(remarks.Add))
             {
-                notes.Add(ResultNote.Warning(NoteKind.MethodRemark, new NoteSubject(Arm: arm.Label, Control: control.Label), ("text", named)));
+                notes.Add(StratumNotes.LeftOut(remark, about, [usedNames[remark.Stratum]], g => g == 1 ? arm.Label : control.Label));
+            }
+            foreach (var text in methodNotes.Where(texts.Add))
+            {
+                notes.Add(ResultNote.Warning(NoteKind.MethodRemark, about, ("text", text)));
             }
         }
         return new StratifiedComparison(arm, difference, test, homogeneity, relativeRisk, oddsRatio, used.Count, notes);
     }
-
-    [GeneratedRegex(@"^Stratum (\d+) ")]
-    private static partial Regex StratumNumber();
 }

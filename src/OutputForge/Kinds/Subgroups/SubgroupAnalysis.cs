@@ -167,10 +167,8 @@ public sealed class SubgroupAnalysis : ITableAnalysis
                 return (l, ResponderAnalysis.Count(subjects, arm, records, response, missingAreNonResponders),
                     ResponderAnalysis.Count(subjects, control, records, response, missingAreNonResponders));
             }).ToList();
-            var notes = new List<string>();
-            var test = SubgroupInteraction.Compute(method, levelCells, notes);
             var what = new NoteSubject(What: $"{variable.Label} interaction", Arm: arm.Label, Control: control.Label);
-            warnings.AddRange(notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark, what, ("text", n + "."))));
+            var test = SubgroupInteraction.Compute(method, levelCells, what, (arm.Label, control.Label), warnings);
             if (!test.IsEstimable)
             {
                 warnings.Add(ResultNote.Warning(NoteKind.NoPValue, what, ("reason", test.NotEstimableReason!)));

@@ -1,4 +1,6 @@
+using OutputForge.Analysis;
 using OutputForge.Kinds.Responders;
+using OutputForge.Results;
 using OutputForge.Stats;
 
 namespace OutputForge.Kinds.Subgroups;
@@ -11,19 +13,30 @@ namespace OutputForge.Kinds.Subgroups;
 /// determine the likelihood and each cell is expanded to its responders and non-responders.
 /// "breslow-day" tests the homogeneity of the odds ratios over the levels (Breslow and Day 1980),
 /// "breslow-day-tarone" with Tarone's (1985) correction. Levels where either arm has no subjects in
-/// the denominator carry no information on the interaction and are left out, with a note.
+/// the denominator carry no information on the interaction and are left out, with a note naming the level; so are the
+/// levels the Breslow-Day test leaves out (Stats' stratum remarks, named here by the levels' labels).
 /// </summary>
 internal static class SubgroupInteraction
 {
+    public const string LevelTerm = "Level";
+    public const string TestName = "interaction test";
+
+    /// <param name="about">What the test is about (the variable's interaction and the comparison), for the notes.</param>
+    /// <param name="armLabels">The labels of the active arm and the control, for a level without subjects of one.</param>
     public static TestResult Compute(InteractionTest method, IReadOnlyList<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)> cells,
-        List<string> notes)
+        NoteSubject about, (string Active, string Control) armLabels, List<ResultNote> notes)
     {
+        string Group(int group) => group == 1 ? armLabels.Active : armLabels.Control;
         var used = new List<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)>();
-        foreach (var cell in cells)
+        for (var k = 0; k < cells.Count; k++)
         {
+            var cell = cells[k];
             if (cell.Active.Denominator == 0 || cell.Control.Denominator == 0)
             {
-                notes.Add($"level {cell.Level.Label} was left out of the interaction test: an arm has no subjects in it");
+                var remark = cell.Active.Denominator == 0 && cell.Control.Denominator == 0
+                    ? new StratumRemark(k, StratumRemarkReason.NoSubjects, TestName)
+                    : new StratumRemark(k, StratumRemarkReason.EmptyGroup, TestName, cell.Active.Denominator == 0 ? 1 : 2);
+                notes.Add(StratumNotes.LeftOut(remark, about, [cell.Level.Label], Group, LevelTerm));
                 continue;
             }
             used.Add(cell);
@@ -38,8 +51,9 @@ internal static class SubgroupInteraction
         {
             var strata = used.Select(c => new StratumCounts(c.Active.Responders, c.Active.Denominator, c.Control.Responders, c.Control.Denominator)).ToList();
             var test = BreslowDayTest.Compute(strata, taroneCorrection: method == InteractionTest.BreslowDayTarone);
-            // The test numbers strata 1..K in the order given; say which levels they are.
-            notes.AddRange(test.Notes.Select(n => RenameStrata(n, used)));
+            // The test returns the strata by their index in the order given; name them by the levels' labels.
+            notes.AddRange(test.StratumRemarks.Select(r => StratumNotes.LeftOut(r, about, [used[r.Stratum].Level.Label], Group, LevelTerm)));
+            notes.AddRange(test.Notes.Select(n => ResultNote.Warning(NoteKind.MethodRemark, about, ("text", n))));
             return test;
         }
         var response = new List<int>();
@@ -67,14 +81,5 @@ internal static class SubgroupInteraction
             arm.Add(armIndex);
             level.Add(levelIndex);
         }
-    }
-
-    private static string RenameStrata(string note, IReadOnlyList<(SubgroupLevel Level, ResponderCounts Active, ResponderCounts Control)> used)
-    {
-        for (var k = used.Count; k >= 1; k--)
-        {
-            note = note.Replace($"Stratum {k} ", $"Level {used[k - 1].Level.Label} ", StringComparison.Ordinal);
-        }
-        return note.TrimEnd('.');
     }
 }
