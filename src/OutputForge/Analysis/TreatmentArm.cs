@@ -17,7 +17,7 @@ public sealed record TreatmentArm(string Value, string Label, double Order, bool
     public double Order { get; } = Order;
     public bool IsControl { get; } = IsControl;
 
-    public string Key { get; } = ResultKeys.FromLabel(Value);
+    public string Key { get; } = ResultKey.Part(Value);
 
     public override int GetHashCode() => _hash;
 }

@@ -35,6 +35,6 @@ public sealed class ShellStandInTests
         };
         Assert.Equal(expected, notEstimable.Select(n => n[..n.IndexOf(':')]));
         var perArm = OutputForge.Kinds.TableKinds.Find(table.Kind)!.StandIn.SubjectsPerArm(table);
-        Assert.All(result.Columns.Where(c => c.SubjectCount is not null), c => Assert.Equal(perArm * (c.Key == ResultKeys.Total ? 3 : 1), c.SubjectCount));
+        Assert.All(result.Columns.Where(c => c.SubjectCount is not null), c => Assert.Equal(perArm * (c.Key == ResultKey.Total ? 3 : 1), c.SubjectCount));
     }
 }
