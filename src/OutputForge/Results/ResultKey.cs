@@ -127,6 +127,6 @@ public static partial class ResultKey
     /// Words of lower-case letters and digits (a "." only between digits) joined by "-" within a part and by "/"
     /// between parts, with an optional "_n" tie-break at the end.
     /// </summary>
-    [GeneratedRegex(@"^[a-z0-9]+(?:(?<=[0-9])\.[0-9][a-z0-9]*)*(?:[-/][a-z0-9]+(?:(?<=[0-9])\.[0-9][a-z0-9]*)*)*(?:_[2-9]|_[1-9][0-9]+)?$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^[a-z0-9]+(?:(?<=[0-9])\.[0-9][a-z0-9]*)*(?:[-/][a-z0-9]+(?:(?<=[0-9])\.[0-9][a-z0-9]*)*)*(?:_(?:[2-9]|[1-9][0-9]+))?$", RegexOptions.CultureInvariant)]
     public static partial Regex KeyPattern();
 }

@@ -28,9 +28,9 @@ public sealed class ShellStandInTests
         // So is an interaction test across the single placeholder level of a subgroup variable whose levels the spec does not list.
         var expected = id switch
         {
-            "14.1.3" => new[] { "RACE p-value pValue" },
-            "14.2.5.1" => ["agegr1-interaction qf-217-10-mg-vs-placebo pValue", "agegr1-interaction qf-217-30-mg-vs-placebo pValue",
-                "region1-interaction qf-217-10-mg-vs-placebo pValue", "region1-interaction qf-217-30-mg-vs-placebo pValue"],
+            "14.1.3" => new[] { "race p-value pValue" },
+            "14.2.5.1" => ["agegr1/interaction qf-217-10-mg-vs-placebo pValue", "agegr1/interaction qf-217-30-mg-vs-placebo pValue",
+                "region1/interaction qf-217-10-mg-vs-placebo pValue", "region1/interaction qf-217-30-mg-vs-placebo pValue"],
             _ => [],
         };
         Assert.Equal(expected, notEstimable.Select(n => n[..n.IndexOf(':')]));
