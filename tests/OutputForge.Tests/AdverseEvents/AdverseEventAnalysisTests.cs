@@ -49,7 +49,7 @@ public sealed class AdverseEventAnalysisTests
     public void Sorting_by_frequency_uses_the_chosen_column()
     {
         using var study = new SummaryStudy(Table.Replace("\"test\": \"fisher\"", "\"sort\": { \"by\": \"frequency\", \"column\": \"total\" }"));
-        var keys = study.Analyze().Rows.Select(r => r.Key).Where(k => k.Contains("/pt:", StringComparison.Ordinal)).ToList();
+        var keys = study.Analyze().Rows.Select(r => r.Key).Where(k => k.Contains("/pt-", StringComparison.Ordinal)).ToList();
         // Nausea 3 subjects before abdominal pain 1; dizziness and headache 1 each, then alphabetical.
         Assert.Equal(
         [
@@ -74,7 +74,7 @@ public sealed class AdverseEventAnalysisTests
     {
         using var study = new SummaryStudy(Table.Replace("\"events\": true", "\"threshold\": { \"percent\": 50 }"));
         var result = study.Analyze();
-        var terms = result.Rows.Select(r => r.Key).Where(k => k.Contains("/pt:", StringComparison.Ordinal)).ToList();
+        var terms = result.Rows.Select(r => r.Key).Where(k => k.Contains("/pt-", StringComparison.Ordinal)).ToList();
         // Exactly 50%: nausea (1 of 2, 2 of 4), abdominal pain and headache (1 of 2 placebo) stay; dizziness (1 of 4 = 25%) goes,
         // but the nervous system class still counts it.
         Assert.DoesNotContain("soc-nervous-system-disorders/pt-dizziness", terms);
@@ -91,10 +91,10 @@ public sealed class AdverseEventAnalysisTests
         const string nausea = "soc-gastrointestinal-disorders/pt-nausea";
         // S01 had mild then severe nausea: counted once, as severe; both events are in the term's [E].
         Assert.Equal("1 (50.0) [2]", SummaryStudy.Displayed(result, nausea, "placebo"));
-        Assert.Equal("0", SummaryStudy.Displayed(result, nausea + "/severity:MILD", "placebo"));
-        Assert.Equal("1 (50.0)", SummaryStudy.Displayed(result, nausea + "/severity:SEVERE", "placebo"));
-        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity:MILD", "active"));
-        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity:MODERATE", "active"));
+        Assert.Equal("0", SummaryStudy.Displayed(result, nausea + "/severity-mild", "placebo"));
+        Assert.Equal("1 (50.0)", SummaryStudy.Displayed(result, nausea + "/severity-severe", "placebo"));
+        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity-mild", "active"));
+        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity-moderate", "active"));
         Assert.Equal(1, SummaryStudy.Value(result, "any/severity-severe", "placebo", "n"));
         Assert.Equal(1, SummaryStudy.Value(result, "any/severity-moderate", "placebo", "n"));
     }
