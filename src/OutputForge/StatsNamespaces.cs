@@ -5,7 +5,9 @@
 global using OutputForge.Stats.Contingency;
 global using OutputForge.Stats.Descriptive;
 global using OutputForge.Stats.Exact;
+global using OutputForge.Stats.MissingData;
 global using OutputForge.Stats.Models;
+global using OutputForge.Stats.Multiplicity;
 global using OutputForge.Stats.Proportions;
 global using OutputForge.Stats.Stratified;
 global using OutputForge.Stats.Survival;

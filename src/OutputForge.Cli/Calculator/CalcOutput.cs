@@ -16,6 +16,12 @@ public sealed class CalcOutput(TextWriter output, bool json)
 
     public void Test(string name, TestResult test) => _entries.Add((name, test));
 
+    /// <summary>A multiplicity adjustment: one line (or JSON entry) per hypothesis, by the names given.</summary>
+    public void Multiplicity(string name, string method, MultiplicityResult result, IReadOnlyList<string> hypotheses) =>
+        _entries.Add((name, new MultiplicityEntry(method, result, hypotheses)));
+
+    private sealed record MultiplicityEntry(string Method, MultiplicityResult Result, IReadOnlyList<string> Hypotheses);
+
     /// <summary>Writes one result as the top-level object (the single-result commands).</summary>
     public void Flush(bool single)
     {
@@ -58,6 +64,22 @@ public sealed class CalcOutput(TextWriter output, bool json)
                 Number(writer, "lower", interval.IsEstimable ? interval.Lower : null);
                 Number(writer, "upper", interval.IsEstimable ? interval.Upper : null);
                 Notes(writer, interval.NotEstimableReason, interval.Notes);
+                break;
+            case MultiplicityEntry entry:
+                writer.WriteString("method", entry.Method);
+                writer.WriteNumber("alpha", entry.Result.Alpha);
+                writer.WriteStartArray("hypotheses");
+                foreach (var h in entry.Result.Hypotheses)
+                {
+                    writer.WriteStartObject();
+                    writer.WriteString("hypothesis", entry.Hypotheses[h.Index]);
+                    writer.WriteNumber("rawP", h.RawP);
+                    writer.WriteNumber("adjustedP", h.AdjustedP);
+                    writer.WriteBoolean("rejected", h.Rejected);
+                    Number(writer, "rejectionOrder", h.RejectionOrder);
+                    writer.WriteEndObject();
+                }
+                writer.WriteEndArray();
                 break;
             case TestResult test:
                 if (test.Statistic is not null || !test.IsEstimable)
@@ -107,6 +129,10 @@ public sealed class CalcOutput(TextWriter output, bool json)
             TestResult t when t.IsEstimable => $"{name}: {t.Method}" + (t.Statistic is { } s ? $", statistic {F(s)}" : "") +
                 (t.DegreesOfFreedom is { } df ? $", df {F(df)}" : "") + $", p-value {F(t.PValue)}" + NoteText(null, t.Notes),
             TestResult t => $"{name}: {t.Method} not estimable ({t.NotEstimableReason})",
+            MultiplicityEntry m => string.Join(Environment.NewLine, m.Result.Hypotheses.Select(h =>
+                $"{m.Hypotheses[h.Index]}: raw p {F(h.RawP)}, adjusted p {F(h.AdjustedP)}, " +
+                (h.Rejected ? $"rejected, order {h.RejectionOrder}" : "not rejected"))
+                .Prepend(string.Create(CultureInfo.InvariantCulture, $"{name}: {m.Method}, familywise alpha {F(m.Result.Alpha)}"))),
             _ => name,
         };
     }

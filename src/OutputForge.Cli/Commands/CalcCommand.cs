@@ -9,7 +9,7 @@ namespace OutputForge.Cli.Commands;
 /// <summary>
 /// `outputforge calc`: single numbers for a QC statistician, without a spec: a proportion's
 /// interval, a difference of proportions, a test on an r x c table, and the stratified
-/// (Cochran-Mantel-Haenszel) family. JSON on stdout with --json, readable lines otherwise.
+/// (Cochran-Mantel-Haenszel) family, and multiplicity adjustments of several p-values. JSON on stdout with --json, readable lines otherwise.
 /// Method names, the test choice and the level's range are those of the specs (<see cref="MethodCatalog"/>),
 /// and the methods are the ones the tables run.
 /// </summary>
@@ -17,11 +17,12 @@ public static class CalcCommand
 {
     public static Command Create(TextWriter output, TextWriter error)
     {
-        var command = new Command("calc", "Compute single statistics for QC checks: proportion, difference, table, stratified.");
+        var command = new Command("calc", "Compute single statistics for QC checks: proportion, difference, table, stratified, multiplicity.");
         command.Subcommands.Add(Proportion(output, error));
         command.Subcommands.Add(Difference(output, error));
         command.Subcommands.Add(Table(output, error));
         command.Subcommands.Add(Stratified(output, error));
+        command.Subcommands.Add(Multiplicity(output, error));
         return command;
     }
 
@@ -152,6 +153,65 @@ public static class CalcCommand
         return command;
     }
 
+    private static Command Multiplicity(TextWriter output, TextWriter error)
+    {
+        var p = new Option<string?>("--p") { Description = "The raw p-values, separated by ',' (hypotheses H1, H2, ... in this order)." };
+        var file = new Option<string?>("--file")
+        {
+            Description = "A CSV file instead of --p: header 'hypothesis,p' with optional 'weight' and, for the graphical approach, one column per hypothesis (headed by its name) holding the transition matrix row.",
+        };
+        var method = Method(MethodCatalog.Multiplicity.Names);
+        var alpha = new Option<double>("--alpha") { Description = "Familywise significance level, strictly between 0 and 1.", DefaultValueFactory = _ => 0.05 };
+        var weights = new Option<string?>("--weights")
+        {
+            Description = "Weights for weighted-bonferroni, fallback and graphical, separated by ',' (each in [0, 1], summing to at most 1).",
+        };
+        var transitions = new Option<string?>("--transitions")
+        {
+            Description = "Transition matrix for graphical: entries separated by ',', rows by ';' (e.g. \"0,1;1,0\"); rows sum to at most 1, diagonal 0.",
+        };
+        var json = Json();
+        var command = new Command("multiplicity", "Adjusted p-values and decisions of a multiplicity procedure over several hypotheses.")
+        {
+            p, file, method, alpha, weights, transitions, json,
+        };
+        command.SetAction(parse => Run(error, () =>
+        {
+            var chosen = Choose(MethodCatalog.Multiplicity, parse.GetValue(method)!);
+            var (pText, path) = (parse.GetValue(p), parse.GetValue(file));
+            if ((pText is null) == (path is null))
+            {
+                throw new CalcInputException("give the p-values either with --p or with --file, not both or neither");
+            }
+            if (path is not null && (parse.GetValue(weights) is not null || parse.GetValue(transitions) is not null))
+            {
+                throw new CalcInputException("--file holds the weights and the transition matrix too: --weights and --transitions go with --p only");
+            }
+            var hypotheses = path is null
+                ? MultiplicityInputReader.FromOptions(pText!, parse.GetValue(weights), parse.GetValue(transitions))
+                : MultiplicityInputReader.FromFile(path);
+            var level = parse.GetValue(alpha);
+            if (!(level > 0 && level < 1))
+            {
+                throw new CalcInputException(string.Create(System.Globalization.CultureInfo.InvariantCulture, $"--alpha: {level} is not strictly between 0 and 1"));
+            }
+            MultiplicityResult adjusted;
+            try
+            {
+                adjusted = MultipleTesting.Adjust(chosen, hypotheses.PValues, level, hypotheses.Weights, hypotheses.Transitions);
+            }
+            catch (ArgumentException e) when (path is not null)
+            {
+                // The numbers came from the file: the message names it (exit code 2, as for any input file).
+                throw new CalcFileException($"{Path.GetFileName(path)}: {e.Message.Split(" (Parameter")[0]}");
+            }
+            var result = new CalcOutput(output, parse.GetValue(json));
+            result.Multiplicity("multiplicity", MethodCatalog.Multiplicity.NameOf(chosen), adjusted, hypotheses.Names);
+            result.Flush(single: true);
+        }));
+        return command;
+    }
+
     private static (IReadOnlyList<double>? Rows, IReadOnlyList<double>? Columns) Scores(string? text, int[,] shape)
     {
         if (text is null)
@@ -214,6 +274,11 @@ public static class CalcCommand
         {
             error.WriteLine($"outputforge: error: {e.Message}");
             return ExitCodes.Usage;
+        }
+        catch (CalcFileException e)
+        {
+            error.WriteLine($"outputforge: error: {e.Message}");
+            return ExitCodes.InputError;
         }
         catch (ArgumentException e)
         {

@@ -178,5 +178,5 @@ public sealed class PopulationSelection
 
     private static DataColumn FindVariable(Dataset adsl, string name, SpecSource source, string pointer) =>
         adsl.Find(name) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, pointer,
-            $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{NearestName.Hint(name, adsl.Columns.Select(c => c.Name).ToList())}"));
+            $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{NearestName.Hint(name, adsl.VariableNames)}"));
 }

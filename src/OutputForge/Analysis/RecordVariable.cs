@@ -38,7 +38,7 @@ public sealed class RecordVariable
         {
             return new RecordVariable(name, subjectLevel, data.SubjectLevelRowsOf(records), Path.GetFileName(adsl.File));
         }
-        var known = records.Columns.Select(c => c.Name).Concat(adsl.Columns.Select(c => c.Name)).Distinct().ToList();
+        var known = records.VariableNames.Concat(adsl.VariableNames).Distinct().ToList();
         throw new SpecException(source.Problem(pointer,
             $"neither {Path.GetFileName(records.File)} nor ADSL has a variable {name}{NearestName.Hint(name, known)}"));
     }

@@ -223,5 +223,23 @@ internal sealed class ColumnBuilder
         return values;
     }
 
+    /// <summary>
+    /// Moves the rows of parts that hold <paramref name="counts"/> rows from <paramref name="offsets"/> down to follow each
+    /// other (the line of each row, kept apart from any column, since a run may skip every column of some part's kind).
+    /// </summary>
+    public static T[] MoveRowsTogether<T>(IReadOnlyList<int> counts, IReadOnlyList<int> offsets, T[] values)
+    {
+        var to = 0;
+        for (var p = 0; p < counts.Count; p++)
+        {
+            if (offsets[p] != to)
+            {
+                Array.Copy(values, offsets[p], values, to, counts[p]);
+            }
+            to += counts[p];
+        }
+        return values;
+    }
+
     private static string Shorten(string value) => value.Length <= 20 ? value : value[..20] + "...";
 }

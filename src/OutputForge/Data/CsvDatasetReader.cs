@@ -109,20 +109,29 @@ public static class CsvDatasetReader
             var header = Fields(reader);
             CheckHeader(path, header);
             var capacity = LineBreaks.Bound(bytes.AsSpan(bodyStart));
-            var columns = header.Select(h => new ColumnBuilder(h, capacity)).ToArray();
+            var keep = options.KeepOf(name);
+            var columns = header.Select(h => keep is null || keep(h) ? new ColumnBuilder(h, capacity) : null).ToArray();
             var lines = new int[capacity];
-            var (rows, replaced) = ReadRecords(reader, path, header, columns, lines, 0, 0, options);
+            var probes = columns.Select(c => c is null ? new SkippedColumnProbe() : null).ToArray();
+            var (rows, replaced) = ReadRecords(reader, path, header, columns, lines, 0, 0, options, probes);
             if (replaced > 0)
             {
                 warn(ReplacedWarning(path, replaced));
             }
             var built = new List<DataColumn>(columns.Length);
             DataException? first = null;
-            foreach (var column in columns)
+            for (var c = 0; c < columns.Length; c++)
             {
                 try
                 {
-                    built.Add(column.Build(path));
+                    if (columns[c] is { } column)
+                    {
+                        built.Add(column.Build(path));
+                    }
+                    else if (SkippedColumnProbe.Problem([probes[c]!], path, header[c]) is { } skipped)
+                    {
+                        throw skipped;
+                    }
                 }
                 catch (DataException e) when (first is null || e.Line < first.Line)
                 {
@@ -137,7 +146,7 @@ public static class CsvDatasetReader
             {
                 throw first;
             }
-            return new Dataset(name, path, rows, built, new ArraySegment<int>(lines, 0, rows));
+            return new Dataset(name, path, rows, built, new ArraySegment<int>(lines, 0, rows)) { VariableNames = header };
         }
         catch (CsvFormatException e)
         {
@@ -149,13 +158,14 @@ public static class CsvDatasetReader
         $"{path}: {replaced} value{(replaced == 1 ? "" : "s")} held control characters, replaced by U+FFFD";
 
     /// <summary>
-    /// Reads the records after the header into <paramref name="columns"/> (one builder per header variable) and their
+    /// Reads the records after the header into <paramref name="columns"/> (one builder per header variable; none for a
+    /// variable the run skips, whose fields are passed over untouched) and their
     /// lines into <paramref name="lines"/> from <paramref name="rowOffset"/>; the reader's line numbers are counted from
     /// the start of its bytes, <paramref name="lineOffset"/> lines into the file. Returns the rows read and the number of
     /// values whose control characters were replaced.
     /// </summary>
-    internal static (int Rows, int Replaced) ReadRecords(CsvReader reader, string path, string[] header, ColumnBuilder[] columns,
-        int[] lines, int rowOffset, int lineOffset, DataReadOptions options)
+    internal static (int Rows, int Replaced) ReadRecords(CsvReader reader, string path, string[] header, ColumnBuilder?[] columns,
+        int[] lines, int rowOffset, int lineOffset, DataReadOptions options, SkippedColumnProbe?[] probes)
     {
         var rows = 0;
         var replaced = 0;
@@ -174,32 +184,40 @@ public static class CsvDatasetReader
             }
             for (var c = 0; c < header.Length; c++)
             {
+                if (columns[c] is null)
+                {
+                    if (!reader.IsEmpty(c))
+                    {
+                        CheckSkipped(reader, c, path, line, header[c], options, ref replaced, probes[c]!);
+                    }
+                    continue;
+                }
                 if (reader.IsEmpty(c))
                 {
-                    columns[c].AddMissing();
+                    columns[c]!.AddMissing();
                     continue;
                 }
                 var utf8 = reader.GetSpan(c);
                 if (utf8.Length == 1 && utf8[0] == (byte)'.')
                 {
                     // "." alone is the missing value of transport-file dumps (docs/spec-reference.md, "Data formats").
-                    columns[c].AddMissing();
+                    columns[c]!.AddMissing();
                     continue;
                 }
-                if (columns[c].TryAddCanonical(utf8))
+                if (columns[c]!.TryAddCanonical(utf8))
                 {
                     continue;
                 }
                 if (repeats[c].Matches(utf8) is { } repeated)
                 {
-                    columns[c].AddText(repeated, line);
+                    columns[c]!.AddText(repeated, line);
                     continue;
                 }
                 // Trailing blanks, the document text limits and control characters: the rule of every reader (TextValueRule).
                 var value = TextValueRule.Unpadded(reader.GetString(c));
                 if (value is null)
                 {
-                    columns[c].AddMissing();
+                    columns[c]!.AddMissing();
                     continue;
                 }
                 if (value.Length > MaxFieldLength)
@@ -215,11 +233,43 @@ public static class CsvDatasetReader
                     // Only values kept as read are remembered (RepeatedText).
                     repeats[c].Remember(utf8, value);
                 }
-                columns[c].AddText(value, line);
+                columns[c]!.AddText(value, line);
             }
             lines[rowOffset + rows++] = line;
         }
         return (rows, replaced);
+    }
+
+    /// <summary>
+    /// A field of a variable the run skips is neither typed nor stored, but held to the same rule as any value
+    /// (<see cref="TextValueRule"/>: its length, control characters), so that a file is refused, or its values replaced
+    /// and counted, alike whatever a run reads of it. Most fields pass on a look at their bytes; only a suspect one is decoded.
+    /// </summary>
+    private static void CheckSkipped(CsvReader reader, int c, string path, int line, string variable, DataReadOptions options, ref int replaced,
+        SkippedColumnProbe probe)
+    {
+        var utf8 = reader.GetSpan(c);
+        if (!(utf8.Length == 1 && utf8[0] == (byte)'.'))
+        {
+            probe.Add(utf8, () => reader.GetString(c), line);
+        }
+        var mayHoldForbidden = TextValueRule.MayHoldForbidden(utf8);
+        if (utf8.Length <= Math.Min(MaxFieldLength, DocumentText.MaxLength) && !mayHoldForbidden)
+        {
+            return;
+        }
+        var value = TextValueRule.Unpadded(reader.GetString(c));
+        if (value is null)
+        {
+            return;
+        }
+        if (value.Length > MaxFieldLength)
+        {
+            throw new DataException(path, line, variable,
+                FormattableString.Invariant($"a value of {value.Length:N0} characters, more than the {MaxFieldLength:N0} OutputForge reads (ADaM text values hold at most 200); is a closing quote missing?"));
+        }
+        _ = TextValueRule.Checked(value, options.ControlCharacters, ref replaced, out var problem, mayHoldForbidden)
+            ?? throw new DataException(path, line, variable, problem!);
     }
 
     internal static string[] Fields(CsvReader reader)

@@ -25,7 +25,8 @@ public sealed class CsvFileParts
     private readonly Task<string> _digest;
     private readonly int[] _starts;
     private readonly string[]? _header;
-    private readonly ColumnBuilder[][] _columns = [];
+    private readonly ColumnBuilder?[][] _columns = [];
+    private readonly SkippedColumnProbe?[][] _probes = [];
     private readonly int[] _lines = [];
     private readonly int[] _rowOffsets = [];
     private readonly int[] _lineOffsets = [];
@@ -69,9 +70,13 @@ public sealed class CsvFileParts
             _lineOffsets[p] = _lineOffsets[p - 1] + breaks[p - 1];
         }
         var capacity = _rowOffsets[^1] + bounds[^1];
-        var stores = header.Select(_ => new ColumnStore(capacity)).ToArray();
+        var keep = options.KeepOf(name);
+        var stores = header.Select(h => keep is null || keep(h) ? new ColumnStore(capacity) : null).ToArray();
         _columns = Enumerable.Range(0, count)
-            .Select(p => header.Select((h, c) => new ColumnBuilder(h, stores[c], _rowOffsets[p])).ToArray())
+            .Select(p => header.Select((h, c) => stores[c] is { } store ? new ColumnBuilder(h, store, _rowOffsets[p]) : null).ToArray())
+            .ToArray();
+        _probes = Enumerable.Range(0, count)
+            .Select(p => header.Select((h, c) => stores[c] is null ? new SkippedColumnProbe() : null).ToArray())
             .ToArray();
         _lines = new int[capacity];
         _read = new (int, int)[count];
@@ -132,7 +137,7 @@ public sealed class CsvFileParts
                 return;
             }
             _read[part] = CsvDatasetReader.ReadRecords(reader, _path, _header, _columns[part], _lines, _rowOffsets[part],
-                _lineOffsets[part], _options);
+                _lineOffsets[part], _options, _probes[part]);
         }
         catch (Exception)
         {
@@ -172,17 +177,21 @@ public sealed class CsvFileParts
         {
             warn(CsvDatasetReader.ReplacedWarning(_path, replaced));
         }
-        var columns = new DataColumn[_header.Length];
-        var errors = new DataException?[_header.Length];
-        Parallel.For(0, _header.Length, c =>
+        var kept = Enumerable.Range(0, _header.Length).Where(c => _columns[0][c] is not null).ToArray();
+        var columns = new DataColumn[kept.Length];
+        // Errors by column, skipped variables included (a number no statistic can use is refused whatever a run reads).
+        var errors = Enumerable.Range(0, _header.Length)
+            .Select(c => _columns[0][c] is null ? SkippedColumnProbe.Problem(_probes.Select(part => part[c]!).ToList(), _path, _header[c]) : null)
+            .ToArray();
+        Parallel.For(0, kept.Length, k =>
         {
             try
             {
-                columns[c] = ColumnBuilder.Join(_columns.Select(part => part[c]).ToList(), _path);
+                columns[k] = ColumnBuilder.Join(_columns.Select(part => part[kept[k]]!).ToList(), _path);
             }
             catch (DataException e)
             {
-                errors[c] = e;
+                errors[kept[k]] = e;
             }
         });
         // An unusable number: the one on the earliest line (then the leftmost column), as a reader from the start finds it.
@@ -191,8 +200,8 @@ public sealed class CsvFileParts
             throw first;
         }
         var rows = _read.Sum(r => r.Rows);
-        ColumnBuilder.MoveTogether(_columns.Select(part => part[0]).ToList(), _lines);
-        return new Dataset(_name, _path, rows, columns, new ArraySegment<int>(_lines, 0, rows));
+        ColumnBuilder.MoveRowsTogether(_read.Select(r => r.Rows).ToList(), _rowOffsets, _lines);
+        return new Dataset(_name, _path, rows, columns, new ArraySegment<int>(_lines, 0, rows)) { VariableNames = _header };
     }
 
     private int End(int part) => part + 1 < _starts.Length ? _starts[part + 1] : _bytes.Length;

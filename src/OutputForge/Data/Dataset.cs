@@ -45,14 +45,48 @@ public sealed class Dataset : IVariableSource
 
     string IVariableSource.SourceName => $"dataset {Name} ({Path.GetFileName(File)})";
 
-    IReadOnlyCollection<string> IVariableSource.VariableNames => Columns.Select(c => c.Name).ToList();
+    IReadOnlyCollection<string> IVariableSource.VariableNames => VariableNames;
 
     IVariable? IVariableSource.FindVariable(string name) => Find(name);
 
+    /// <summary>
+    /// Every variable of the file, in file order, whether read or skipped (<see cref="ColumnProjection"/>): the names
+    /// messages suggest from, the same whichever columns a run reads.
+    /// </summary>
+    public IReadOnlyList<string> VariableNames
+    {
+        get => _variableNames ?? Columns.Select(c => c.Name).ToList();
+        init
+        {
+            _variableNames = value;
+            _skipped = value.Where(v => !_columns.ContainsKey(v)).ToHashSet(StringComparer.OrdinalIgnoreCase);
+        }
+    }
+
+    private IReadOnlyList<string>? _variableNames;
+    private HashSet<string>? _skipped;
+
+    /// <summary>The variables of the file that were skipped while it was read (none when every column was read).</summary>
+    public IReadOnlyCollection<string> SkippedVariables => (IReadOnlyCollection<string>?)_skipped ?? [];
+
+    /// <summary>
+    /// The column, or null when the file has no such variable. A variable the file has but the run skipped is an error:
+    /// an analysis looking it up was not declared to read it (<see cref="Analysis.VariableReads"/>), and answering "no
+    /// such variable" or an empty column would give wrong numbers without a word.
+    /// </summary>
     public DataColumn? Find(string name)
     {
         _lookups?.Invoke(Name, name);
-        return _columns.GetValueOrDefault(name);
+        if (_columns.GetValueOrDefault(name) is { } column)
+        {
+            return column;
+        }
+        if (_skipped is not null && _skipped.Contains(name))
+        {
+            throw new DataException(File, null, name,
+                "the variable was not read: the run reads only the variables its tables declare, and this one was not declared (an error in OutputForge; please report it)");
+        }
+        return null;
     }
 
     private Action<string, string>? _lookups;
@@ -62,10 +96,14 @@ public sealed class Dataset : IVariableSource
     /// how tests hold what a table kind declares it reads (<see cref="Analysis.VariableReads"/>) to what it reads.
     /// </summary>
     public Dataset WithLookupsTold(Action<string, string> lookup) =>
-        new(Name, File, RowCount, Columns, LineOfRow) { ContentSha256 = ContentSha256, _lookups = lookup };
+        new(Name, File, RowCount, Columns, LineOfRow)
+        {
+            ContentSha256 = ContentSha256, Label = Label, _lookups = lookup,
+            _variableNames = _variableNames, _skipped = _skipped,
+        };
 
     /// <summary>The column, or a <see cref="DataException"/> naming the dataset and the nearest variable.</summary>
     public DataColumn Get(string name) =>
         Find(name) ?? throw new DataException(File, null, null,
-            $"no variable {name}{Naming.NearestName.Hint(name, Columns.Select(c => c.Name).ToList())}");
+            $"no variable {name}{Naming.NearestName.Hint(name, VariableNames)}");
 }

@@ -14,8 +14,11 @@ public static class DatasetFiles
 
     public static bool IsCsv(string fileName) => fileName.EndsWith(".csv", StringComparison.OrdinalIgnoreCase);
 
-    /// <summary>Reads any supported file; a CSV file with the CSV reader (in parts on all cores), the others streamed.</summary>
-    public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn)
+    /// <summary>
+    /// Reads any supported file; a CSV file with the CSV reader (in parts on all cores), the others streamed.
+    /// <paramref name="member"/> names the member of an XPT file of several datasets (the study spec's "member").
+    /// </summary>
+    public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn, string? member = null)
     {
         var extension = Path.GetExtension(path).ToLowerInvariant();
         // A streamed file has no size limit, but it must be a regular file: a named pipe would make the run wait forever.
@@ -26,7 +29,7 @@ public static class DatasetFiles
         return extension switch
         {
             ".csv" => CsvDatasetReader.Read(name, path, options, warn),
-            ".xpt" => XptDatasetReader.Read(name, path, options, warn),
+            ".xpt" => XptDatasetReader.Read(name, path, options, warn, member),
             ".json" or ".ndjson" => DatasetJsonReader.Read(name, path, options, warn),
             _ => throw new DataException(path, null, null,
                 $"unknown data format '{extension}' (expected a file ending in {string.Join(", ", Extensions)})"),

@@ -8,10 +8,11 @@ public sealed class StudyData
 {
     private readonly Dictionary<string, Dataset> _datasets;
 
-    private StudyData(string folder, Dictionary<string, Dataset> datasets)
+    private StudyData(string folder, Dictionary<string, Dataset> datasets, IReadOnlyCollection<string>? unread = null)
     {
         Folder = folder;
         _datasets = datasets;
+        Unread = unread ?? [];
         _subjectLevelRowOfSubject = new Lazy<Dictionary<string, int>>(() =>
         {
             var adsl = SubjectLevel;
@@ -47,7 +48,17 @@ public sealed class StudyData
 
     public IReadOnlyCollection<Dataset> Datasets => _datasets.Values;
 
-    public Dataset this[string name] => _datasets[name];
+    /// <summary>
+    /// The dataset; a dataset of the study the run left unread (<see cref="ColumnProjection"/>) is an error, never an
+    /// empty dataset: an analysis using it was not declared to.
+    /// </summary>
+    public Dataset this[string name] => _datasets.TryGetValue(name, out var dataset) ? dataset
+        : Unread.Contains(name) ? throw new DataException(Folder, null, null,
+            $"dataset '{name}' was not read: the run reads only the datasets its tables declare, and this one was not declared (an error in OutputForge; please report it)")
+        : throw new KeyNotFoundException($"no dataset '{name}'");
+
+    /// <summary>The datasets of the study spec that the run did not read, because none of its tables uses them.</summary>
+    public IReadOnlyCollection<string> Unread { get; }
 
     /// <summary>
     /// Study data made of datasets built in memory (e.g. the stand-in records mock shells are laid
@@ -74,7 +85,10 @@ public sealed class StudyData
         {
             throw new DataException(folder, null, null, "no such data folder");
         }
-        var files = study.Data.Datasets.OrderBy(d => d.Key == "adsl" ? 0 : 1).ThenBy(d => d.Key, StringComparer.Ordinal).ToList();
+        var files = study.Data.Datasets
+            .Where(d => d.Key == "adsl" || options.Projection is null || options.Projection.ReadsDataset(d.Key))
+            .OrderBy(d => d.Key == "adsl" ? 0 : 1).ThenBy(d => d.Key, StringComparer.Ordinal).ToList();
+        var unread = study.Data.Datasets.Keys.Where(k => files.All(f => f.Key != k)).OrderBy(k => k, StringComparer.Ordinal).ToList();
         // The files are read on all cores, a large BDS file in parts (CsvFileParts), the largest parts first, so that
         // no core waits for one file; each file keeps its warnings and error, replayed below in the listed order, so
         // messages do not depend on thread timing.
@@ -92,7 +106,7 @@ public sealed class StudyData
                         $"no such file (dataset '{name}' of {study.Source.File}); is --data the right folder?");
                 }
                 DatasetFileScope.Check(path, folder, options.ReadableFolders);
-                if (DatasetFiles.IsCsv(fileName))
+                if (DatasetFiles.IsCsv(fileName) && !study.Data.Members.ContainsKey(name))
                 {
                     opened[i] = CsvFileParts.Open(name, path, options);
                 }
@@ -100,7 +114,7 @@ public sealed class StudyData
                 {
                     // XPT and Dataset-JSON files are read whole here, streamed, on this file's core.
                     var warnings = new List<string>();
-                    outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add), warnings, null);
+                    outcomes[i] = (DatasetFiles.Read(name, path, options, warnings.Add, study.Data.Members.GetValueOrDefault(name)), warnings, null);
                 }
             }
             catch (Exception e)
@@ -146,6 +160,6 @@ public sealed class StudyData
         {
             AdamConformance.CheckAgainstSubjectLevel(dataset, adsl);
         }
-        return new StudyData(folder, datasets);
+        return new StudyData(folder, datasets, unread);
     }
 }

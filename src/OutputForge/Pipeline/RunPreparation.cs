@@ -24,8 +24,16 @@ internal static class RunPreparation
         var selected = TableSelection.Select(package.Tables, request.Tables);
         var dataWarnings = new List<string>();
         clock.StartStep();
-        var data = StudyData.Load(study, dataFolder, request.DataOptions with { ReadableFolders = package.Folders.Folders }, dataWarnings.Add);
+        // With --combined and --tables the kept tables are rebuilt too, so the run reads what every table uses.
+        var projection = request.ReadEveryColumn ? null
+            : RunColumns.For(study, request.Combined && request.Tables is not null ? package.Tables : selected);
+        var data = StudyData.Load(study, dataFolder,
+            request.DataOptions with { ReadableFolders = package.Folders.Folders, Projection = projection }, dataWarnings.Add);
         log.Detail($"data: {data.Datasets.Count} datasets, {data.Datasets.Sum(d => File.Exists(d.File) ? new FileInfo(d.File).Length : 0) / 1e6:0.0} MB read in {clock.StepMilliseconds:0} ms");
+        foreach (var line in DataReadFacts.Describe(data, projection is not null))
+        {
+            log.Detail(line);
+        }
         log.Info($"read {data.Datasets.Count} datasets from {dataFolder}: " +
                  string.Join(", ", data.Datasets.Select(d => $"{d.Name} ({d.RowCount} rows)")));
 

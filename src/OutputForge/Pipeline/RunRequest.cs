@@ -20,6 +20,12 @@ public sealed record RunRequest(string SpecPath, string? DataFolder, string Outp
     /// <summary>The command line as given (recorded in manifest.json).</summary>
     public IReadOnlyList<string> CommandLine { get; init; } = [];
 
+    /// <summary>
+    /// Read every dataset of the study whole, instead of only the datasets and variables the selected tables use
+    /// (<see cref="RunColumns"/>); the results are the same (a test compares them), only time and memory differ.
+    /// </summary>
+    public bool ReadEveryColumn { get; init; }
+
     /// <summary>Table ids or patterns to produce ("14.2.*"); null means every table of the package.</summary>
     public IReadOnlyList<string>? Tables { get; init; }
 

@@ -199,6 +199,10 @@ internal static class SpecFileReader
                 return source.Problem(SpecProblemCode.WrongType, pointer, $"expected {Describe(keywordNode)}: {message}");
             case "pattern" when evaluationPath.EndsWith("/propertyNames", StringComparison.Ordinal):
                 return KeyPatternProblem(pointer, keywordNode?.GetValue<string>(), source);
+            case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal) && pointer.EndsWith("/file", StringComparison.Ordinal):
+                return source.Problem(pointer, "expected an XPT file name in the data folder (no folders), ending in .xpt: only an XPT transport file holds several datasets (members)");
+            case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal) && pointer.EndsWith("/member", StringComparison.Ordinal):
+                return source.Problem(pointer, "expected a member name as an XPT file gives it: a letter or '_', then up to 7 letters, digits or '_'");
             case "pattern" when pointer.StartsWith("/data/datasets/", StringComparison.Ordinal):
                 return source.Problem(pointer, "expected a data file name in the data folder (no folders), ending in .csv, .xpt, .json or .ndjson");
             default:

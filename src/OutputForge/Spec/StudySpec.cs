@@ -31,6 +31,7 @@ public sealed class StudyInfo
     public string? Compound { get; init; }
 }
 
+[System.Text.Json.Serialization.JsonConverter(typeof(DataSpecConverter))]
 public sealed class DataSpec
 {
     /// <summary>Default data folder, relative to the study file; the command line's --data overrides it.</summary>
@@ -38,6 +39,12 @@ public sealed class DataSpec
 
     /// <summary>Dataset name (as used in table specs) to file name within the data folder. "adsl" is required.</summary>
     public required Dictionary<string, string> Datasets { get; init; }
+
+    /// <summary>
+    /// The member to read, by dataset name, of an XPT file holding several datasets (an entry written
+    /// <c>{ "file": "library.xpt", "member": "ADSL" }</c>); a dataset not listed is its file's only member.
+    /// </summary>
+    public IReadOnlyDictionary<string, string> Members { get; init; } = new Dictionary<string, string>();
 }
 
 public sealed class TreatmentSpec

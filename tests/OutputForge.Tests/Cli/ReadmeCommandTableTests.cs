@@ -44,6 +44,7 @@ public sealed partial class ReadmeCommandTableTests
     [InlineData("calc difference")]
     [InlineData("calc table")]
     [InlineData("calc stratified")]
+    [InlineData("calc multiplicity")]
     public void The_readme_row_and_the_help_name_the_same_options(string command)
     {
         var rows = ReadmeRows();
@@ -55,7 +56,7 @@ public sealed partial class ReadmeCommandTableTests
     [Fact]
     public void Every_command_has_a_readme_row()
     {
-        string[] commands = ["run", "demo", "check", "compare", "changes", "shells", "calc proportion", "calc difference", "calc table", "calc stratified"];
+        string[] commands = ["run", "demo", "check", "compare", "changes", "shells", "calc proportion", "calc difference", "calc table", "calc stratified", "calc multiplicity"];
         Assert.Equal(commands.Order(StringComparer.Ordinal), ReadmeRows().Keys.Order(StringComparer.Ordinal));
     }
 

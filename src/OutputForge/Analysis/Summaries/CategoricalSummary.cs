@@ -16,7 +16,7 @@ public static class CategoricalSummary
         IReadOnlyList<TreatmentArm> arms, IReadOnlyList<SummaryColumn> columns, PercentDisplaySpec percent, SpecSource source, int indent)
     {
         var variable = adsl.Find(request.Variable) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, request.Pointer + "/variable",
-            $"ADSL has no variable {request.Variable}{NearestName.Hint(request.Variable, adsl.Columns.Select(c => c.Name).ToList())}"));
+            $"ADSL has no variable {request.Variable}{NearestName.Hint(request.Variable, adsl.VariableNames)}"));
         var where = request.Where is null ? null : new SpecConditionText(request.Where, source, request.Pointer + "/where").Compile(adsl);
         var counted = subjects.Where(s => where is null || where.Matches(s.Row)).ToList();
         var warnings = new List<string>();

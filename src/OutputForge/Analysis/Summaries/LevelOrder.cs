@@ -34,7 +34,7 @@ public static class LevelOrder
         if (request.OrderBy is { } orderName)
         {
             var order = adsl.Find(orderName) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, request.Pointer + "/orderBy",
-                $"ADSL has no variable {orderName}{NearestName.Hint(orderName, adsl.Columns.Select(c => c.Name).ToList())}"));
+                $"ADSL has no variable {orderName}{NearestName.Hint(orderName, adsl.VariableNames)}"));
             if (order.Kind != Expressions.VariableKind.Number)
             {
                 throw new SpecException(source.Problem(request.Pointer + "/orderBy", $"{orderName} is not numeric, so it cannot order the levels"));

@@ -28,9 +28,10 @@ public static partial class DatasetJsonReader
         var ndjson = path.EndsWith(".ndjson", StringComparison.OrdinalIgnoreCase);
         var size = new FileInfo(path).Length;
         var digest = StreamedFileDigest.Start(path);
+        var keep = options.KeepOf(name);
         var parser = (!ndjson && Environment.ProcessorCount > 1 && size >= 2L * DatasetJsonRowParts.PartBytes
-            ? DatasetJsonRowParts.TryRead(path, options, size)
-            : null) ?? Pump(path, ndjson, options, size, stopAtRows: false).Parser;
+            ? DatasetJsonRowParts.TryRead(path, options, size, keep: keep)
+            : null) ?? Pump(path, ndjson, options, size, stopAtRows: false, keep: keep).Parser;
         var dataset = parser.Finish();
         parser.Warnings.ForEach(warn);
         if (parser.Replaced > 0)
@@ -39,6 +40,7 @@ public static partial class DatasetJsonReader
         }
         return new Dataset(name, path, dataset.Rows, dataset.Columns, new RowNumbers(dataset.Rows, ndjson ? 1 : 0))
         {
+            VariableNames = parser.ColumnList.Select(c => c.Name!).ToList(),
             Label = dataset.Label,
             ContentSha256 = digest.GetAwaiter().GetResult(),
         };
@@ -53,11 +55,11 @@ public static partial class DatasetJsonReader
     /// where the rows begin, so that they can be read in parts.
     /// </summary>
     internal static PumpResult Pump(string path, bool ndjson, DataReadOptions options, long size, bool stopAtRows,
-        long from = 0, JsonReaderState? resume = null, Parser? parser = null)
+        long from = 0, JsonReaderState? resume = null, Parser? parser = null, Func<string, bool>? keep = null)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
         stream.Position = from;
-        parser ??= new Parser(path, ndjson, options, size);
+        parser ??= new Parser(path, ndjson, options, size, keep: keep);
         var buffer = new byte[BlockBytes];
         var length = 0;
         var final = false;
@@ -130,12 +132,14 @@ public static partial class DatasetJsonReader
     }
 
     /// <summary>The state of one pass through the tokens.</summary>
-    internal sealed class Parser(string path, bool ndjson, DataReadOptions options, long fileBytes, bool rowsOnly = false)
+    internal sealed class Parser(string path, bool ndjson, DataReadOptions options, long fileBytes, bool rowsOnly = false,
+        Func<string, bool>? keep = null)
     {
         private enum Section { Top, Columns, Rows, Skip }
 
         private readonly List<DatasetJsonColumn> _columns = [];
-        private TypedColumnBuilder[]? _builders;
+        /// <summary>One builder per column; none for a column the run skips (its values are passed over, unchecked).</summary>
+        private TypedColumnBuilder?[]? _builders;
         private Section _section = rowsOnly ? Section.Rows : Section.Top;
         private int _skipDepth;
         private string? _property;
@@ -161,20 +165,20 @@ public static partial class DatasetJsonReader
 
         public IReadOnlyList<DatasetJsonColumn> ColumnList => _columns;
 
-        public TypedColumnBuilder[]? Builders => _builders;
+        public TypedColumnBuilder?[]? Builders => _builders;
 
         /// <summary>A parser of rows only (a part of the rows), with the columns the metadata gave.</summary>
         public static Parser ForRows(Parser metadata, int capacity)
         {
-            var rows = new Parser(path: metadata.FilePath, ndjson: false, metadata.Options, 0, rowsOnly: true);
+            var rows = new Parser(path: metadata.FilePath, ndjson: false, metadata.Options, 0, rowsOnly: true, keep: metadata.Keep);
             rows._columns.AddRange(metadata._columns);
             rows._columnsSeen = true;
-            rows._builders = rows._columns.Select(c => new TypedColumnBuilder(c.Name!, KindOf(c), capacity) { Label = c.Label }).ToArray();
+            rows._builders = rows.NewBuilders(capacity);
             return rows;
         }
 
         /// <summary>Takes the rows that parts read (joined), in place of rows of its own.</summary>
-        public void AdoptRows(int rows, TypedColumnBuilder[] builders, int replaced)
+        public void AdoptRows(int rows, TypedColumnBuilder?[] builders, int replaced)
         {
             _rows = rows;
             _builders = builders;
@@ -182,6 +186,12 @@ public static partial class DatasetJsonReader
         }
 
         private string FilePath => path;
+
+        private Func<string, bool>? Keep => keep;
+
+        private TypedColumnBuilder?[] NewBuilders(int capacity) => _columns
+            .Select(c => keep is null || keep(c.Name!) ? new TypedColumnBuilder(c.Name!, KindOf(c), capacity) { Label = c.Label } : null)
+            .ToArray();
 
         private DataReadOptions Options => options;
 
@@ -384,7 +394,7 @@ public static partial class DatasetJsonReader
             }
             // A first guess at the rows from the file's size; the builders grow when there are more.
             var capacity = (int)Math.Min(_records ?? fileBytes / Math.Max(16, _columns.Count * 8), 1 << 24);
-            _builders = _columns.Select(c => new TypedColumnBuilder(c.Name!, KindOf(c), capacity) { Label = c.Label }).ToArray();
+            _builders = NewBuilders(capacity);
         }
 
         private static VariableKind KindOf(DatasetJsonColumn column) =>
@@ -409,7 +419,39 @@ public static partial class DatasetJsonReader
                 throw Error($"row {_rows + 1} has more values than the {_columns.Count} \"columns\" lists");
             }
             var column = _columns[_cell];
-            var builder = _builders![_cell];
+            if (_builders![_cell] is not { } builder)
+            {
+                // A column the run skips: the value is neither decoded nor stored, but its JSON type is still held to the
+                // column's dataType (a cheap test of the token), so that a file is refused alike whatever a run reads.
+                var fits = token switch
+                {
+                    JsonTokenType.Null => true,
+                    JsonTokenType.String => reader.ValueSpan.Length == 0 || column.Type == ColumnType.Decimal || !(column.IsNumber || column.Type == ColumnType.Boolean),
+                    JsonTokenType.Number => column.IsNumber,
+                    JsonTokenType.True or JsonTokenType.False => column.Type == ColumnType.Boolean,
+                    _ => false,
+                };
+                if (fits)
+                {
+                    if (token == JsonTokenType.String)
+                    {
+                        SkippedString(ref reader, column);
+                    }
+                    else if (token == JsonTokenType.Number && !CanonicalText.TryParseNumber(reader.ValueSpan, out _, out _)
+                        && (!reader.TryGetDouble(out var skippedNumber) || !UnusableNumber.IsUsable(skippedNumber)))
+                    {
+                        // A number no statistic can use is refused in a skipped column too (UnusableNumber).
+                        var written = Encoding.UTF8.GetString(reader.ValueSpan);
+                        var parsed = double.TryParse(written, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
+                        throw RowError($"'{Shorten(written)}' {UnusableNumber.Problem(written, parsed, value) ?? "is not a number"}");
+                    }
+                    _cell++;
+                    return;
+                }
+                throw token == JsonTokenType.String
+                    ? RowError($"expected {Expected(column)} (dataType {column.DataType}), found the string \"{Shorten(reader.GetString()!)}\"")
+                    : RowError($"expected {Expected(column)} (dataType {column.DataType}), found {Describe(token)}");
+            }
             switch (token)
             {
                 case JsonTokenType.Null:
@@ -447,6 +489,60 @@ public static partial class DatasetJsonReader
                     throw RowError($"expected {Expected(column)} (dataType {column.DataType}), found {Describe(token)}");
             }
             _cell++;
+        }
+
+        /// <summary>
+        /// A text of a column the run skips is held to the rule of every value (UTF-8, <see cref="TextValueRule"/>) though
+        /// it is not stored, so that a file is refused, or its values replaced and counted, alike whatever a run reads.
+        /// </summary>
+        private void SkippedString(ref Utf8JsonReader reader, DatasetJsonColumn column)
+        {
+            if (!System.Text.Unicode.Utf8.IsValid(reader.ValueSpan))
+            {
+                throw RowError("the value is not valid UTF-8 (Latin-1 or another encoding?); Dataset-JSON files are UTF-8");
+            }
+            string? text = null;
+            var bytes = ReadOnlySpan<byte>.Empty;
+            if (reader.ValueIsEscaped)
+            {
+                text = TextValueRule.Unpadded(EscapedText(ref reader));
+                if (text is null)
+                {
+                    return;
+                }
+            }
+            else
+            {
+                bytes = TextValueRule.Unpadded(reader.ValueSpan);
+                if (bytes.IsEmpty)
+                {
+                    return;
+                }
+                if (TextValueRule.MayHoldForbidden(bytes) || bytes.Length > DocumentText.MaxLength)
+                {
+                    text = DecodeText(bytes);
+                }
+            }
+            if (text is not null)
+            {
+                var replaced = 0;
+                text = TextValueRule.Checked(text, options.ControlCharacters, ref replaced, out var problem) ?? throw RowError(problem!);
+                Replaced += replaced;
+            }
+            if (column.Type == ColumnType.Decimal && (text is not null || !CanonicalText.TryParseNumber(bytes, out _, out _)))
+            {
+                // A decimal no statistic can use is refused in a skipped column too (UnusableNumber).
+                text ??= DecodeText(bytes);
+                var parsed = double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value);
+                if (UnusableNumber.Problem(text, parsed, value) is { } unusable)
+                {
+                    throw RowError($"'{Shorten(text)}' {unusable}");
+                }
+                if (!parsed)
+                {
+                    throw RowError($"expected a decimal number, found \"{Shorten(text)}\"");
+                }
+            }
         }
 
         private void StringCell(ref Utf8JsonReader reader, DatasetJsonColumn column, TypedColumnBuilder builder)
@@ -587,7 +683,7 @@ public static partial class DatasetJsonReader
             {
                 throw Error(FormattableString.Invariant($"\"records\" gives {records:N0} rows, but the file holds {_rows:N0}"));
             }
-            return (_rows, _builders.Select(b => b.Build()).ToList(), _label);
+            return (_rows, _builders.OfType<TypedColumnBuilder>().Select(b => b.Build()).ToList(), _label);
         }
     }
 }

@@ -20,12 +20,13 @@ internal static class DatasetJsonRowParts
     private const int BlockBytes = 1 << 20;
 
     /// <summary>The parser holding the whole dataset, or null when the file must be read front to back.</summary>
-    public static DatasetJsonReader.Parser? TryRead(string path, DataReadOptions options, long size, int partBytes = PartBytes)
+    public static DatasetJsonReader.Parser? TryRead(string path, DataReadOptions options, long size, int partBytes = PartBytes,
+        Func<string, bool>? keep = null)
     {
         DatasetJsonReader.PumpResult head;
         try
         {
-            head = DatasetJsonReader.Pump(path, ndjson: false, options, size, stopAtRows: true);
+            head = DatasetJsonReader.Pump(path, ndjson: false, options, size, stopAtRows: true, keep: keep);
         }
         catch (DataException)
         {
@@ -70,7 +71,9 @@ internal static class DatasetJsonRowParts
             }
         }
         var columns = head.Parser.ColumnList.Count;
-        var joined = Enumerable.Range(0, columns).Select(c => TypedColumnBuilder.Join(parts.Select(p => p.Builders![c]).ToList())).ToArray();
+        var joined = Enumerable.Range(0, columns)
+            .Select(c => parts[0].Builders![c] is null ? null : TypedColumnBuilder.Join(parts.Select(p => p.Builders![c]!).ToList()))
+            .ToArray();
         head.Parser.AdoptRows(parts.Sum(p => p.Rows), joined, parts.Sum(p => p.Replaced));
         try
         {

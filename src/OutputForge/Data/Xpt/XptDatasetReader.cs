@@ -36,35 +36,66 @@ public static class XptDatasetReader
 
     public static Dataset Read(string name, string path) => Read(name, path, DataReadOptions.Default, _ => { });
 
-    public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn)
+    /// <summary>
+    /// Reads the file's one dataset, or, with <paramref name="member"/> (the study spec's "member" of the dataset's
+    /// entry), the member of that name from a file of several: the members before it are passed over and the file is
+    /// scanned for the end of its rows (the next member header) before they are read.
+    /// </summary>
+    public static Dataset Read(string name, string path, DataReadOptions options, Action<string> warn, string? member = null)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1, FileOptions.SequentialScan);
         var digest = StreamedFileDigest.Start(path);
         var input = new RecordInput(stream, path);
-        var header = ReadHeaders(input, out var datasetLabel);
-        var (variables, rowLength) = header;
-        var dataStart = input.Position;
-        var dataBytes = stream.Length - dataStart;
+        ReadLibraryHeader(input);
+        XptVariable[] variables;
+        int rowLength;
+        string? datasetLabel;
+        long dataStart;
+        long dataEnd;
+        var seen = new List<string>();
+        while (true)
+        {
+            (variables, rowLength) = ReadHeaders(input, out datasetLabel, out var memberName);
+            seen.Add(memberName);
+            dataStart = input.Position;
+            dataEnd = member is null ? stream.Length : NextMemberHeader(input.Handle, dataStart, stream.Length) ?? stream.Length;
+            if (member is null || string.Equals(memberName, member, StringComparison.OrdinalIgnoreCase))
+            {
+                break;
+            }
+            if (dataEnd == stream.Length)
+            {
+                throw new DataException(path, null, null,
+                    $"the file has no member {member} (the study spec's \"member\" of dataset '{name}'); its members: {string.Join(", ", seen)}");
+            }
+            input.Seek(dataEnd);
+        }
+        var dataBytes = dataEnd - dataStart;
         if (dataBytes % RecordLength != 0)
         {
             throw new DataException(path, null, null,
                 FormattableString.Invariant($"record {dataStart / RecordLength + dataBytes / RecordLength + 1}: the file ends inside an 80-byte record (it is {stream.Length:N0} bytes, not a whole number of records); is it truncated?"));
         }
-        var rows = CountRows(stream, dataBytes, rowLength, path);
+        var rows = CountRows(stream, dataEnd, dataBytes, rowLength, path);
         if (rows > Array.MaxLength)
         {
             throw new DataException(path, null, null, FormattableString.Invariant($"{rows:N0} observations, more than one dataset can hold"));
         }
-        var builders = variables.Select(v => new TypedColumnBuilder(v.Name, KindOf(v), (int)rows) { Label = v.Label.Length == 0 ? null : v.Label }).ToArray();
-        var replaced = ReadObservations(input, dataBytes, rowLength, (int)rows, variables, builders, options, path);
+        // A variable the run skips has no builder: its bytes in each row are passed over undecoded.
+        var keep = options.KeepOf(name);
+        var builders = variables.Select(v => keep is null || keep(v.Name)
+            ? new TypedColumnBuilder(v.Name, KindOf(v), (int)rows) { Label = v.Label.Length == 0 ? null : v.Label }
+            : null).ToArray();
+        var replaced = ReadObservations(input, dataBytes, rowLength, (int)rows, variables, builders, options, path, name);
         if (replaced > 0)
         {
             warn(CsvDatasetReader.ReplacedWarning(path, replaced));
         }
-        var columns = builders.Select(b => b.Build()).ToList();
+        var columns = builders.OfType<TypedColumnBuilder>().Select(b => b.Build()).ToList();
         return new Dataset(name, path, (int)rows, columns, new RowNumbers((int)rows))
         {
             Label = datasetLabel,
+            VariableNames = variables.Select(v => v.Name).ToList(),
             ContentSha256 = digest.GetAwaiter().GetResult(),
         };
     }
@@ -76,7 +107,7 @@ public static class XptDatasetReader
         _ => VariableKind.Number,
     };
 
-    private static (XptVariable[] Variables, int RowLength) ReadHeaders(RecordInput input, out string? datasetLabel)
+    private static void ReadLibraryHeader(RecordInput input)
     {
         var path = input.Path;
         var first = input.Next("the library header record");
@@ -90,6 +121,12 @@ public static class XptDatasetReader
         }
         input.Next("the library's first details record");
         input.Next("the library's second details record");
+    }
+
+    /// <summary>The headers of one member, from its member header record to its observation header record.</summary>
+    private static (XptVariable[] Variables, int RowLength) ReadHeaders(RecordInput input, out string? datasetLabel, out string memberName)
+    {
+        var path = input.Path;
         var member = input.Next("the member header record");
         Expect(input, member, MemberHeader, "the member header record");
         var namestrLength = ParseDigits(member.Slice(74, 4));
@@ -98,7 +135,8 @@ public static class XptDatasetReader
             throw new DataException(path, null, null, $"record {input.Record}: the member header gives namestr records of {Shown(member.Slice(74, 4))} bytes (expected 140, or 136)");
         }
         Expect(input, input.Next("the descriptor header record"), DescriptorHeader, "the descriptor header record");
-        input.Next("the member's first details record");
+        // The first details record: "SAS", then the member's name in bytes 9-16.
+        memberName = XptVariable.Text(input.Next("the member's first details record").Slice(8, 8));
         var details = input.Next("the member's second details record");
         datasetLabel = XptVariable.Text(details.Slice(32, 40)) is { Length: > 0 } label ? label : null;
         var namestrHeader = input.Next("the namestr header record");
@@ -147,13 +185,13 @@ public static class XptDatasetReader
     /// The observations in <paramref name="dataBytes"/>: whole rows, the rest blank padding. A row of blanks lying wholly
     /// in the last record is padding too (a row shorter than a record cannot be told from padding; common practice).
     /// </summary>
-    private static long CountRows(FileStream stream, long dataBytes, int rowLength, string path)
+    private static long CountRows(FileStream stream, long dataEnd, long dataBytes, int rowLength, string path)
     {
         if (rowLength == 0) return 0;
         var rows = dataBytes / rowLength;
         if (rowLength >= RecordLength || dataBytes == 0) return rows;
         Span<byte> last = stackalloc byte[RecordLength];
-        RandomAccess.Read(stream.SafeFileHandle, last, stream.Length - RecordLength);
+        RandomAccess.Read(stream.SafeFileHandle, last, dataEnd - RecordLength);
         var lastStart = dataBytes - RecordLength;
         while (rows > 0 && (rows - 1) * rowLength >= lastStart
             && last.Slice((int)((rows - 1) * rowLength - lastStart), rowLength).IndexOfAnyExcept((byte)' ') < 0)
@@ -164,7 +202,7 @@ public static class XptDatasetReader
     }
 
     private static int ReadObservations(RecordInput input, long dataBytes, int rowLength, int rows, XptVariable[] variables,
-        TypedColumnBuilder[] builders, DataReadOptions options, string path)
+        TypedColumnBuilder?[] builders, DataReadOptions options, string path, string name)
     {
         var replaced = 0;
         var block = Math.Max(1, (1 << 20) / (rowLength * RecordLength)) * rowLength * RecordLength;
@@ -182,7 +220,7 @@ public static class XptDatasetReader
                 if (buffer[offset] == (byte)'H' && StartsWith(buffer.AsSpan(offset), MemberHeader))
                 {
                     throw new DataException(path, null, null,
-                        $"record {firstRecord + (done + offset) / RecordLength}: the file holds more than one dataset (member); OutputForge reads a transport file of one dataset, so write each dataset to its own file");
+                        $"record {firstRecord + (done + offset) / RecordLength}: the file holds more than one dataset (members {string.Join(", ", MemberNames(input.Handle))}); name the one to read in the study spec, e.g. \"{name}\": {{ \"file\": \"{System.IO.Path.GetFileName(path)}\", \"member\": \"{MemberNames(input.Handle)[0]}\" }}");
                 }
             }
             var span = buffer.AsSpan(0, length);
@@ -209,7 +247,46 @@ public static class XptDatasetReader
         return replaced;
     }
 
-    private static int ReadRow(ReadOnlySpan<byte> bytes, int row, XptVariable[] variables, TypedColumnBuilder[] builders,
+    /// <summary>Where the next member header record starts at or after <paramref name="from"/> (a record start), or null.</summary>
+    private static long? NextMemberHeader(Microsoft.Win32.SafeHandles.SafeFileHandle handle, long from, long size)
+    {
+        var buffer = new byte[RecordLength * 16384];
+        for (var at = from; at < size; at += buffer.Length)
+        {
+            var length = RandomAccess.Read(handle, buffer, at);
+            for (var offset = 0; offset + RecordLength <= length; offset += RecordLength)
+            {
+                if (buffer[offset] == (byte)'H' && StartsWith(buffer.AsSpan(offset), MemberHeader))
+                {
+                    return at + offset;
+                }
+            }
+            if (length < buffer.Length)
+            {
+                break;
+            }
+        }
+        return null;
+    }
+
+    /// <summary>The names of every member of the file, in file order (for the message that the spec must name one).</summary>
+    private static List<string> MemberNames(Microsoft.Win32.SafeHandles.SafeFileHandle handle)
+    {
+        var size = RandomAccess.GetLength(handle);
+        var names = new List<string>();
+        var details = new byte[RecordLength];
+        for (long at = 3 * RecordLength; NextMemberHeader(handle, at, size) is { } header; at = header + RecordLength)
+        {
+            // The member header, the descriptor header, then the first details record with the name in bytes 9-16.
+            if (RandomAccess.Read(handle, details, header + 2 * RecordLength) == RecordLength)
+            {
+                names.Add(XptVariable.Text(details.AsSpan(8, 8)));
+            }
+        }
+        return names;
+    }
+
+    private static int ReadRow(ReadOnlySpan<byte> bytes, int row, XptVariable[] variables, TypedColumnBuilder?[] builders,
         DataReadOptions options, string path)
     {
         var replaced = 0;
@@ -217,7 +294,17 @@ public static class XptDatasetReader
         {
             var variable = variables[v];
             var value = bytes.Slice(variable.Position, variable.Length);
-            var builder = builders[v];
+            if (builders[v] is not { } builder)
+            {
+                // A variable the run skips is not stored, but a character value is held to the rule of every value
+                // (TextValueRule), so that a file is refused, or its values replaced and counted, alike whatever a run reads.
+                if (!variable.IsNumeric && TextValueRule.Unpadded(value) is { IsEmpty: false } written && TextValueRule.MayHoldForbidden(written))
+                {
+                    _ = TextValueRule.Checked(Decode(written), options.ControlCharacters, ref replaced, out var problem)
+                        ?? throw new DataException(path, null, variable.Name, $"row {row}: {problem}");
+                }
+                continue;
+            }
             if (!variable.IsNumeric)
             {
                 // Trailing blanks and control characters: the rule of every reader (TextValueRule). Its length limit needs no
@@ -384,6 +471,13 @@ public static class XptDatasetReader
                     : $"record {Record}: the file ends inside {what} ({read} of 80 bytes); is it truncated?");
             }
             return _record;
+        }
+
+        /// <summary>Goes on from <paramref name="position"/>, the start of a record.</summary>
+        public void Seek(long position)
+        {
+            stream.Position = position;
+            Record = position / RecordLength;
         }
 
         public void Fill(Span<byte> buffer)

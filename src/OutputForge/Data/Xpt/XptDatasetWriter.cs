@@ -17,6 +17,15 @@ public static class XptDatasetWriter
 
     private static readonly DateOnly Epoch = new(1960, 1, 1);
 
+    // The published version 5 transport layout fixes the first 24 bytes of the library header record and the
+    // first 8 and the third 8 bytes of the member header record: they identify the file type, are not ours to
+    // choose, and readers check them (pandas 1.5.3's xport reader refuses a file without the library prefix,
+    // "Header record has invalid prefix"). The version field beside them is written as the layout's examples give it.
+    private const string LibraryHeaderPrefix = "SAS     SAS     SASLIB  ";
+    private const string MemberHeaderPrefix = "SAS     ";
+    private const string MemberHeaderKind = "SASDATA ";
+    private const string LayoutVersion = "9.4     ";
+
     public static void Write(Dataset dataset, string path, DateTime created)
     {
         var name = dataset.Name.ToUpperInvariant();
@@ -37,11 +46,11 @@ public static class XptDatasetWriter
         using var stream = new FileStream(path, FileMode.Create, FileAccess.Write, FileShare.None, 1 << 16);
         var stamp = created.ToString("ddMMMyy:HH:mm:ss", CultureInfo.InvariantCulture).ToUpperInvariant();
         Record(stream, "HEADER RECORD*******LIBRARY HEADER RECORD!!!!!!!000000000000000000000000000000  ");
-        Record(stream, Field("SAS", 8) + Field("SAS", 8) + Field("SASLIB", 8) + Field("9.4", 8) + Field("OUTFORGE", 8) + Field("", 24) + stamp);
+        Record(stream, LibraryHeaderPrefix + LayoutVersion + Field("OUTFORGE", 8) + Field("", 24) + stamp);
         Record(stream, stamp);
         Record(stream, "HEADER RECORD*******MEMBER  HEADER RECORD!!!!!!!000000000000000001600000000140  ");
         Record(stream, "HEADER RECORD*******DSCRPTR HEADER RECORD!!!!!!!000000000000000000000000000000  ");
-        Record(stream, Field("SAS", 8) + Field(name, 8) + Field("SASDATA", 8) + Field("9.4", 8) + Field("OUTFORGE", 8) + Field("", 24) + stamp);
+        Record(stream, MemberHeaderPrefix + Field(name, 8) + MemberHeaderKind + LayoutVersion + Field("OUTFORGE", 8) + Field("", 24) + stamp);
         Record(stream, stamp + Field("", 16) + Field(Ascii(dataset.Label ?? ""), 40) + Field("", 8));
         Record(stream, FormattableString.Invariant($"HEADER RECORD*******NAMESTR HEADER RECORD!!!!!!!000000{columns.Count:0000}00000000000000000000  "));
         var namestrs = new byte[(columns.Count * XptVariable.RecordLength + 79) / 80 * 80];

@@ -76,5 +76,5 @@ public static class AdverseEventRecords
 
     private static DataColumn Find(Dataset dataset, string name, SpecSource source, string pointer) =>
         dataset.Find(name) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, pointer,
-            $"{Path.GetFileName(dataset.File)} has no variable {name}{NearestName.Hint(name, dataset.Columns.Select(c => c.Name).ToList())}"));
+            $"{Path.GetFileName(dataset.File)} has no variable {name}{NearestName.Hint(name, dataset.VariableNames)}"));
 }

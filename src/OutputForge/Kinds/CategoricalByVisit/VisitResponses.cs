@@ -44,7 +44,7 @@ internal sealed class VisitResponses
         var visitVariable = dataset.Find("AVISIT") ?? throw new SpecException(source.Problem("/endpoint/dataset",
             $"{file} has no AVISIT variable, which this kind groups the responses by"));
         var value = dataset.Find(settings.Variable) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, "/categoricalByVisit/variable",
-            $"{file} has no variable {settings.Variable}{NearestName.Hint(settings.Variable, dataset.Columns.Select(c => c.Name).ToList())}"));
+            $"{file} has no variable {settings.Variable}{NearestName.Hint(settings.Variable, dataset.VariableNames)}"));
         var tests = new List<Func<int, bool>>();
         if (endpoint.Parameter is not null)
         {

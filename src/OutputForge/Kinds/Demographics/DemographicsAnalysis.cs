@@ -61,13 +61,14 @@ public sealed class DemographicsAnalysis : ITableAnalysis
         {
             var spec = settings.Variables[i];
             var pointer = $"/demographics/variables/{i}";
-            var label = spec.Label ?? spec.Variable;
             if (rows.Any(r => r.Key == ResultKey.Part(spec.Variable)))
             {
                 throw new SpecException(table.Source.Problem(pointer + "/variable", $"{spec.Variable} is summarized twice in this table"));
             }
             var column = adsl.Find(spec.Variable) ?? throw new SpecException(table.Source.Problem(SpecProblemCode.UnknownVariable, pointer + "/variable",
-                $"ADSL has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.Columns.Select(c => c.Name).ToList())}"));
+                $"ADSL has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.VariableNames)}"));
+            // The spec's label first; else the variable's label as the file gives it (XPT, Dataset-JSON); else its name.
+            var label = spec.Label ?? column.Label ?? spec.Variable;
             List<ResultRow> blockRows;
             TestResult? test = null;
             if (spec.Type == DemographicVariableType.Continuous)

@@ -42,7 +42,7 @@ public sealed class ResponderStrata
     public static ResponderStrata Build(ResponderStratification spec, PopulationSelection selection, StudyData data, SpecSource source)
     {
         var adsl = data.SubjectLevel;
-        var names = adsl.Columns.Select(c => c.Name).ToList();
+        var names = adsl.VariableNames;
         var columns = spec.Strata.Select((name, i) => adsl.Find(name) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, $"/responders/stratified/strata/{i}",
             $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}, which this key stratifies by{NearestName.Hint(name, names)}"))).ToList();
         var subjects = adsl.Get(AdamConformance.SubjectVariable);

@@ -35,7 +35,7 @@ internal sealed record SubgroupVariable(
     {
         var pointer = $"/subgroups/variables/{index}";
         var column = adsl.Find(spec.Variable) ?? throw new SpecException(source.Problem(SpecProblemCode.UnknownVariable, pointer + "/variable",
-            $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.Columns.Select(c => c.Name).ToList())}"));
+            $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {spec.Variable}{NearestName.Hint(spec.Variable, adsl.VariableNames)}"));
         var ids = adsl.Get(AdamConformance.SubjectVariable);
         var rowOfSubject = new Dictionary<string, int>(StringComparer.Ordinal);
         for (var row = 0; row < adsl.RowCount; row++)
@@ -105,7 +105,7 @@ internal sealed record SubgroupVariable(
                 unlistedValues.Add(value);
             }
         }
-        return new SubgroupVariable(column.Name, spec.Label ?? column.Name, levels, levelOfSubject, without, unlistedValues.ToList(), unlisted, orderNote);
+        return new SubgroupVariable(column.Name, spec.Label ?? column.Label ?? column.Name, levels, levelOfSubject, without, unlistedValues.ToList(), unlisted, orderNote);
     }
 
     /// <summary>The warnings about subjects that belong to no level.</summary>

@@ -21,7 +21,11 @@ public sealed record RunInputs(IReadOnlyList<ManifestFile> Specs, IReadOnlyList<
         specs.AddRange(package.Tables.Select(t => new ManifestFile(SpecPaths.RelativeToStudy(study, t), FileDigest.Sha256(t.Source.File))));
         var files = study.Data.Datasets
             .OrderBy(d => d.Key, StringComparer.Ordinal)
-            .Select(d => new ManifestFile(d.Value, data[d.Key].ContentSha256 ?? FileDigest.Sha256(Path.Combine(data.Folder, d.Value)), d.Key, data[d.Key].RowCount))
+            // A dataset the run left unread (no selected table uses it) is still named by its whole file's digest, from
+            // disk; its rows are not counted.
+            .Select(d => data.Unread.Contains(d.Key)
+                ? new ManifestFile(d.Value, FileDigest.Sha256(Path.Combine(data.Folder, d.Value)), d.Key)
+                : new ManifestFile(d.Value, data[d.Key].ContentSha256 ?? FileDigest.Sha256(Path.Combine(data.Folder, d.Value)), d.Key, data[d.Key].RowCount))
             .ToList();
         return new RunInputs(specs, files);
     }

@@ -57,7 +57,7 @@ public static partial class AdamConventionChecks
             var text = column.GetText(row);
             if (text is not null && !double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out _))
             {
-                report.Add(Problem(dataset, row, column.Name, $"'{text}' is not a number, but {column.Name} is a numeric variable",
+                report.Add(Problem(dataset, row, column.Name, $"'{text}' is not a number, but {Named(column)} is a numeric variable",
                     "write numbers with a '.' decimal point and no units; leave missing values empty"), $"non-numeric {column.Name}");
             }
         }
@@ -70,7 +70,7 @@ public static partial class AdamConventionChecks
             var text = column.GetText(row);
             if (text is not null && !(pattern.IsMatch(text) && ValidCalendarDate(text)))
             {
-                report.Add(Problem(dataset, row, column.Name, $"'{text}' is not {expected}", "write dates as ISO 8601, e.g. 2025-04-09"),
+                report.Add(Problem(dataset, row, column.Name, $"'{text}'{(column.Label is { Length: > 0 } ? " of " + Named(column) : "")} is not {expected}", "write dates as ISO 8601, e.g. 2025-04-09"),
                     $"dates of {column.Name}");
             }
         }
@@ -116,6 +116,9 @@ public static partial class AdamConventionChecks
             }
         }
     }
+
+    /// <summary>The variable's name, with its label where the file gives one (XPT, Dataset-JSON): "TRTSDT (Date of First Exposure)".</summary>
+    private static string Named(DataColumn column) => column.Label is { Length: > 0 } label ? $"{column.Name} ({label})" : column.Name;
 
     private static CheckProblem Problem(Dataset dataset, int row, string variable, string message, string hint) =>
         new(CheckSeverity.Error, dataset.File, $"line {dataset.LineOfRow[row]}, variable {variable}", message, hint);

@@ -107,8 +107,9 @@ internal static class PackageCheck
             try
             {
                 DatasetFileScope.Check(path, folder, options.ReadableFolders);
+                // Every column of every format: check holds the whole file to the ADaM conventions, not only what tables use.
                 datasets[name] = DatasetFiles.Read(name, path, options, warning => report.Add(new CheckProblem(CheckSeverity.Warning, path, "",
-                    warning, "a run would print this warning in every table's footnotes; check that it is expected")));
+                    warning, "a run would print this warning in every table's footnotes; check that it is expected")), study.Data.Members.GetValueOrDefault(name));
             }
             catch (DataException e)
             {

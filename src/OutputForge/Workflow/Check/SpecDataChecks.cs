@@ -174,7 +174,7 @@ public static class SpecDataChecks
         if (column is null)
         {
             report.Add(CheckProblem.FromSpec(study.Source.Problem(SpecProblemCode.UnknownVariable, pointer,
-                $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{Naming.NearestName.Hint(name, adsl.Columns.Select(c => c.Name).ToList())}")));
+                $"ADSL ({Path.GetFileName(adsl.File)}) has no variable {name}{Naming.NearestName.Hint(name, adsl.VariableNames)}")));
         }
         return column;
     }
