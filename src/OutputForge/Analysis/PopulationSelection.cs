@@ -107,16 +107,16 @@ public sealed class PopulationSelection
             .Select(a => new TreatmentArm(a.Key, study.Treatment.Labels?.GetValueOrDefault(a.Key) ?? a.Key, a.Value.Order,
                 a.Key == study.Treatment.Control))
             .ToList();
-        // Results keys come from the arm values (ResultKeys); two arms with one key could not be told apart in results.json.
+        // Results keys come from the arm values (ResultKey); two arms with one key could not be told apart in results.json.
         if (arms.GroupBy(a => a.Key, StringComparer.Ordinal).FirstOrDefault(g => g.Count() > 1) is { } clash)
         {
             throw new SpecException(study.Source.Problem(treatmentPointer,
-                $"arms {string.Join(" and ", clash.Select(a => $"'{a.Value}'"))} of {treatment.Name} have the same results key '{clash.Key}'; recode them so that they differ in their letters or digits"));
+                $"arms {string.Join(" and ", clash.Select(a => $"'{a.Value}'"))} of {treatment.Name} have the same results key '{clash.Key}'; recode them so that they differ in more than letter case, accents or punctuation"));
         }
-        if (study.Treatment.Total && arms.Any(a => a.Key == ResultKeys.Total))
+        if (study.Treatment.Total && arms.Any(a => a.Key == ResultKey.Total))
         {
             throw new SpecException(study.Source.Problem("/treatment/total",
-                $"an arm's results key is '{ResultKeys.Total}', which the Total column uses; recode the arm or leave out the Total column"));
+                $"an arm's results key is '{ResultKey.Total}', which the Total column uses; recode the arm or leave out the Total column"));
         }
         var armOfSubject = new Dictionary<string, TreatmentArm>(StringComparer.Ordinal);
         foreach (var arm in arms)

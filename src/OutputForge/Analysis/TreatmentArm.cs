@@ -4,7 +4,7 @@ namespace OutputForge.Analysis;
 
 /// <summary>
 /// A treatment arm of a population: its value in the data, display label, order and whether it
-/// is the control. <see cref="Key"/> is the stable results key (label in lower case with dashes).
+/// is the control. <see cref="Key"/> is the stable results key (the value in key form, <see cref="ResultKey.Part"/>).
 /// Arms are looked up in every per-subject count, so the key and the hash code are worked out once;
 /// the properties are get-only, so that no copy can carry a key or hash of other values.
 /// </summary>
@@ -17,7 +17,7 @@ public sealed record TreatmentArm(string Value, string Label, double Order, bool
     public double Order { get; } = Order;
     public bool IsControl { get; } = IsControl;
 
-    public string Key { get; } = ResultKeys.FromLabel(Value);
+    public string Key { get; } = ResultKey.Part(Value);
 
     public override int GetHashCode() => _hash;
 }

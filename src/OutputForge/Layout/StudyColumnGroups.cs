@@ -8,6 +8,6 @@ public static class StudyColumnGroups
 {
     public static IReadOnlyList<ColumnGroup> Of(StudySpec study) =>
         (study.Treatment.Groups ?? [])
-            .Select((g, i) => new ColumnGroup(g.Label, g.Arms.Select(ResultKeys.FromLabel).ToList(), $"/treatment/groups/{i}"))
+            .Select((g, i) => new ColumnGroup(g.Label, g.Arms.Select(ResultKey.Part).ToList(), $"/treatment/groups/{i}"))
             .ToList();
 }

@@ -20,6 +20,7 @@ public static class TableLayoutBuilder
         NumberDisplay display = NumberDisplay.Values, IReadOnlyList<ColumnGroup>? groups = null, RecordPopulation? population = null)
     {
         var shell = display == NumberDisplay.Placeholders;
+        table = WithDistinctRowKeys(table);
         var notes = TableNotes.Of(table);
         var columns = new List<LayoutColumn> { new("label", CellAlignment.Left) };
         columns.AddRange(table.Columns.Select(c => new LayoutColumn(c.Key, CellAlignment.Center)));
@@ -38,7 +39,7 @@ public static class TableLayoutBuilder
         var columnLabel = table.Columns.ToDictionary(c => c.Key, notes.ColumnLabel, StringComparer.Ordinal);
         foreach (var column in table.Columns.Where(c => c.SubjectCount is not null && !shell))
         {
-            records.Add(new ResultRecord(table.TableId, "header", column.Key, StatisticNames.Denominator, column.SubjectCount,
+            records.Add(new ResultRecord(table.TableId, ResultKey.Header, column.Key, StatisticNames.Denominator, column.SubjectCount,
                 column.SubjectCount!.Value.ToString(CultureInfo.InvariantCulture),
                 string.Create(CultureInfo.InvariantCulture, $"(N={column.SubjectCount})"), column.Label, null, null) { Population = population });
         }
@@ -118,5 +119,18 @@ public static class TableLayoutBuilder
             .Distinct(StringComparer.Ordinal);
         var time = run.RunTime.UtcDateTime.ToString("yyyy-MM-dd HH:mm 'UTC'", CultureInfo.InvariantCulture);
         return $"Source: {table.Provenance.SpecFile.Replace('\\', '/')}; data: {string.Join(", ", files)}; run {time}; OutputForge {run.ToolVersion}. {Caution}";
+    }
+
+    /// <summary>
+    /// Every row key names one row of the table, the header row of the column Ns ("header") included: rows whose keys a
+    /// kind built equal (two levels that differ only in letter case or punctuation) are told apart by the scheme's
+    /// tie-break, in table order (<see cref="ResultKey.Distinct"/>).
+    /// </summary>
+    private static TableResult WithDistinctRowKeys(TableResult table)
+    {
+        var keys = ResultKey.Distinct([ResultKey.Header, .. table.Rows.Select(r => r.Key)]);
+        return keys.Skip(1).SequenceEqual(table.Rows.Select(r => r.Key), StringComparer.Ordinal)
+            ? table
+            : table with { Rows = table.Rows.Select((r, i) => r with { Key = keys[i + 1] }).ToList() };
     }
 }

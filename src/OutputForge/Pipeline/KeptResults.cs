@@ -1,4 +1,5 @@
 using System.Text.Json;
+using OutputForge.Results;
 
 namespace OutputForge.Pipeline;
 
@@ -34,6 +35,12 @@ public sealed class KeptResults
         catch (JsonException e)
         {
             throw new RunException($"{path}: cannot read the existing results to keep the tables not rerun ({e.Message})");
+        }
+        // Tables kept from a results.json of another key scheme would mix two schemes in one file.
+        if (!(root.TryGetProperty("keyScheme", out var scheme) && scheme.ValueKind == JsonValueKind.Number && scheme.TryGetInt32(out var n) && n == ResultKey.Scheme))
+        {
+            throw new RunException($"{path}: the existing results use another result key scheme than this version's ({ResultKey.Scheme}); " +
+                                   "run every table (leave out --tables) so that results.json has one scheme");
         }
         var tables = new Dictionary<string, JsonElement>(StringComparer.Ordinal);
         var records = new Dictionary<string, List<JsonElement>>(StringComparer.Ordinal);

@@ -26,6 +26,7 @@ public static class ResultsJsonWriter
         json.WriteString("study", studyId);
         json.WriteString("runTime", run.RunTime.UtcDateTime.ToString("yyyy-MM-dd'T'HH:mm:ss'Z'", System.Globalization.CultureInfo.InvariantCulture));
         json.WriteString("caution", TableLayoutBuilder.Caution);
+        json.WriteNumber("keyScheme", ResultKey.Scheme);
         json.WriteStartArray("tables");
         foreach (var id in order)
         {
@@ -80,9 +81,9 @@ public static class ResultsJsonWriter
     }
 
     /// <summary>
-    /// Keys are built from labels and arm values (lower case, other characters as dashes), so two
-    /// arms such as "A+B" and "A B" would share one; a QC file or a comparison of runs could then
-    /// not tell their numbers apart. Such a results file is refused rather than written.
+    /// Column keys are built from arm values (<see cref="ResultKey"/>), so two arms such as "A/B" and "A B" would
+    /// share one; a QC file or a comparison of runs could then not tell their numbers apart. Such a results file is
+    /// refused rather than written.
     /// </summary>
     private static void RefuseAmbiguousKeys(IReadOnlyList<(LaidOutTable Table, IReadOnlyList<string> Warnings)> tables)
     {
@@ -94,7 +95,7 @@ public static class ResultsJsonWriter
             if (clash is not null)
             {
                 var labels = string.Join(" and ", clash.Select(r => $"'{r.RowLabel}' / '{r.ColumnLabel}'").Distinct());
-                throw new RunException($"table {table.Document.TableId}: {labels} share the results key {clash.Key.Row} / {clash.Key.Column} / {clash.Key.Statistic}; give the arms values that differ in their letters or digits");
+                throw new RunException($"table {table.Document.TableId}: {labels} share the results key {clash.Key.Row} / {clash.Key.Column} / {clash.Key.Statistic}; give the arms values that differ in more than letter case, accents or punctuation");
             }
         }
     }

@@ -32,8 +32,8 @@ public sealed record TableResult(
 }
 
 /// <summary>
-/// A result column. <paramref name="Key"/> is the stable key used in results.json (e.g. the arm
-/// label in lower case with dashes: "placebo", "qf-217-10-mg", "total").
+/// A result column. <paramref name="Key"/> is the stable key used in results.json (<see cref="ResultKey"/>; e.g. the
+/// arm value in key form: "placebo", "qf-217-10-mg", "total").
 /// A column may refer to footnotes (<see cref="NoteRefs"/>, the notes' ids); Layout appends their letters to the label.
 /// </summary>
 public sealed record ResultColumn(string Key, string Label, int? SubjectCount)
@@ -48,8 +48,8 @@ public sealed record ResultColumn(string Key, string Label, int? SubjectCount)
 public enum ResultRowKind { Data, Section, Blank }
 
 /// <summary>
-/// A result row. <paramref name="Key"/> is stable and readable (e.g. "responders",
-/// "difference-ci"), so that a QC programmer can write it by hand.
+/// A result row. <paramref name="Key"/> is stable and readable (<see cref="ResultKey"/>; e.g. "responders",
+/// "difference-ci", "sex/f"), so that a QC programmer can write it by hand; Layout tells equal keys apart.
 /// A row may refer to footnotes (<see cref="NoteRefs"/>) and name its confidence level in its label as "{level}";
 /// Layout writes both ("{level} CI" with level 0.95 and a reference to the first footnote prints "95% CI [a]").
 /// </summary>

@@ -1,6 +1,7 @@
 using System.Text.Json;
 using OutputForge.Data;
 using OutputForge.Pipeline;
+using OutputForge.Results;
 
 namespace OutputForge.Workflow;
 
@@ -45,12 +46,13 @@ public sealed class RunResults
         {
             using var document = JsonDocument.Parse(System.IO.File.ReadAllBytes(path));
             var root = document.RootElement;
+            RefuseRetiredKeys(path, root);
             var tables = root.GetProperty("tables").EnumerateArray().Select(t => t.GetProperty("id").GetString()!).ToList();
             var records = root.GetProperty("records").EnumerateArray().Select(ReadRecord).ToList();
             var duplicate = records.GroupBy(r => r.Address, StringComparer.Ordinal).FirstOrDefault(g => g.Count() > 1);
             if (duplicate is not null)
             {
-                throw new DataException(path, null, null, $"two numbers share the key {duplicate.Key} (labels '{duplicate.First().RowLabel}' / '{duplicate.First().ColumnLabel}'), so they cannot be told apart; give the arms values that differ in letters or digits");
+                throw new DataException(path, null, null, $"two numbers share the key {duplicate.Key} (labels '{duplicate.First().RowLabel}' / '{duplicate.First().ColumnLabel}'), so they cannot be told apart; give the arms values that differ in more than letter case, accents or punctuation");
             }
             return new RunResults(path, root.GetProperty("study").GetString() ?? string.Empty,
                 root.GetProperty("runTime").GetString() ?? string.Empty, tables, records);
@@ -58,6 +60,20 @@ public sealed class RunResults
         catch (Exception e) when (e is JsonException or KeyNotFoundException or InvalidOperationException)
         {
             throw new DataException(path, null, null, $"not a results.json written by OutputForge ({e.Message})");
+        }
+    }
+
+    /// <summary>
+    /// A results.json of an earlier key scheme (before "keyScheme" was written) names its rows otherwise ("SEX/F" for
+    /// "sex/f"): matching its records by key would miss or mismatch numbers, so it is refused rather than read.
+    /// </summary>
+    private static void RefuseRetiredKeys(string path, JsonElement root)
+    {
+        var scheme = root.TryGetProperty("keyScheme", out var written) && written.ValueKind == JsonValueKind.Number && written.TryGetInt32(out var n) ? n : 1;
+        if (scheme != ResultKey.Scheme)
+        {
+            throw new DataException(path, null, null,
+                $"written with result key scheme {scheme}, this version reads scheme {ResultKey.Scheme} (docs/results.md, \"Keys\"); rerun that package with this version");
         }
     }
 

@@ -24,12 +24,12 @@ public sealed class AdverseEventAnalysisTests
         Assert.Equal([2, 4, 6], result.Columns.Where(c => c.SubjectCount is not null).Select(c => c.SubjectCount!.Value));
         Assert.Equal("2 (100.0) [4]", SummaryStudy.Displayed(result, "any", "placebo"));
         Assert.Equal("3 (75.0) [3]", SummaryStudy.Displayed(result, "any", "active"));
-        Assert.Equal("1 (50.0) [3]", SummaryStudy.Displayed(result, "soc:Gastrointestinal disorders", "placebo"));
-        Assert.Equal("1 (50.0) [2]", SummaryStudy.Displayed(result, "soc:Gastrointestinal disorders/pt:Nausea", "placebo"));
+        Assert.Equal("1 (50.0) [3]", SummaryStudy.Displayed(result, "soc-gastrointestinal-disorders", "placebo"));
+        Assert.Equal("1 (50.0) [2]", SummaryStudy.Displayed(result, "soc-gastrointestinal-disorders/pt-nausea", "placebo"));
         // S03's nausea is outside the safety population and S07's headache is not treatment-emergent.
-        Assert.Equal("2 (50.0) [2]", SummaryStudy.Displayed(result, "soc:Gastrointestinal disorders/pt:Nausea", "active"));
-        Assert.Equal("0", SummaryStudy.Displayed(result, "soc:Nervous system disorders/pt:Headache", "active"));
-        Assert.Equal("3 (50.0) [4]", SummaryStudy.Displayed(result, "soc:Gastrointestinal disorders/pt:Nausea", "total"));
+        Assert.Equal("2 (50.0) [2]", SummaryStudy.Displayed(result, "soc-gastrointestinal-disorders/pt-nausea", "active"));
+        Assert.Equal("0", SummaryStudy.Displayed(result, "soc-nervous-system-disorders/pt-headache", "active"));
+        Assert.Equal("3 (50.0) [4]", SummaryStudy.Displayed(result, "soc-gastrointestinal-disorders/pt-nausea", "total"));
     }
 
     [Fact]
@@ -40,8 +40,8 @@ public sealed class AdverseEventAnalysisTests
         Assert.Equal(
         [
             "any",
-            "soc:Gastrointestinal disorders", "soc:Gastrointestinal disorders/pt:Abdominal pain", "soc:Gastrointestinal disorders/pt:Nausea",
-            "soc:Nervous system disorders", "soc:Nervous system disorders/pt:Dizziness", "soc:Nervous system disorders/pt:Headache",
+            "soc-gastrointestinal-disorders", "soc-gastrointestinal-disorders/pt-abdominal-pain", "soc-gastrointestinal-disorders/pt-nausea",
+            "soc-nervous-system-disorders", "soc-nervous-system-disorders/pt-dizziness", "soc-nervous-system-disorders/pt-headache",
         ], keys);
     }
 
@@ -49,12 +49,12 @@ public sealed class AdverseEventAnalysisTests
     public void Sorting_by_frequency_uses_the_chosen_column()
     {
         using var study = new SummaryStudy(Table.Replace("\"test\": \"fisher\"", "\"sort\": { \"by\": \"frequency\", \"column\": \"total\" }"));
-        var keys = study.Analyze().Rows.Select(r => r.Key).Where(k => k.Contains("/pt:", StringComparison.Ordinal)).ToList();
+        var keys = study.Analyze().Rows.Select(r => r.Key).Where(k => k.Contains("/pt-", StringComparison.Ordinal)).ToList();
         // Nausea 3 subjects before abdominal pain 1; dizziness and headache 1 each, then alphabetical.
         Assert.Equal(
         [
-            "soc:Gastrointestinal disorders/pt:Nausea", "soc:Gastrointestinal disorders/pt:Abdominal pain",
-            "soc:Nervous system disorders/pt:Dizziness", "soc:Nervous system disorders/pt:Headache",
+            "soc-gastrointestinal-disorders/pt-nausea", "soc-gastrointestinal-disorders/pt-abdominal-pain",
+            "soc-nervous-system-disorders/pt-dizziness", "soc-nervous-system-disorders/pt-headache",
         ], keys);
     }
 
@@ -65,7 +65,7 @@ public sealed class AdverseEventAnalysisTests
         var result = study.Analyze();
         // Abdominal pain: active 0 of 4, placebo 1 of 2. With one subject having the event, the tables are
         // "on active" (probability 4/6) or "on placebo" (2/6, observed): two-sided p = 2/6 (hand computation).
-        Assert.Equal(2.0 / 6.0, SummaryStudy.Value(result, "soc:Gastrointestinal disorders/pt:Abdominal pain", "p-value-active", "pValue")!.Value, 12);
+        Assert.Equal(2.0 / 6.0, SummaryStudy.Value(result, "soc-gastrointestinal-disorders/pt-abdominal-pain", "p-value-active", "pValue")!.Value, 12);
         Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Footnotes, n => n.StartsWith("[a] Two-sided p-value from Fisher's exact test", StringComparison.Ordinal));
     }
 
@@ -74,12 +74,12 @@ public sealed class AdverseEventAnalysisTests
     {
         using var study = new SummaryStudy(Table.Replace("\"events\": true", "\"threshold\": { \"percent\": 50 }"));
         var result = study.Analyze();
-        var terms = result.Rows.Select(r => r.Key).Where(k => k.Contains("/pt:", StringComparison.Ordinal)).ToList();
+        var terms = result.Rows.Select(r => r.Key).Where(k => k.Contains("/pt-", StringComparison.Ordinal)).ToList();
         // Exactly 50%: nausea (1 of 2, 2 of 4), abdominal pain and headache (1 of 2 placebo) stay; dizziness (1 of 4 = 25%) goes,
         // but the nervous system class still counts it.
-        Assert.DoesNotContain("soc:Nervous system disorders/pt:Dizziness", terms);
+        Assert.DoesNotContain("soc-nervous-system-disorders/pt-dizziness", terms);
         Assert.Equal(3, terms.Count);
-        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, "soc:Nervous system disorders", "active"));
+        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, "soc-nervous-system-disorders", "active"));
     }
 
     [Fact]
@@ -88,15 +88,15 @@ public sealed class AdverseEventAnalysisTests
         using var study = new SummaryStudy(Table.Replace("\"test\": \"fisher\"",
             "\"severity\": { \"levels\": [ { \"value\": \"MILD\" }, { \"value\": \"MODERATE\" }, { \"value\": \"SEVERE\" } ] }"));
         var result = study.Analyze();
-        const string nausea = "soc:Gastrointestinal disorders/pt:Nausea";
+        const string nausea = "soc-gastrointestinal-disorders/pt-nausea";
         // S01 had mild then severe nausea: counted once, as severe; both events are in the term's [E].
         Assert.Equal("1 (50.0) [2]", SummaryStudy.Displayed(result, nausea, "placebo"));
-        Assert.Equal("0", SummaryStudy.Displayed(result, nausea + "/severity:MILD", "placebo"));
-        Assert.Equal("1 (50.0)", SummaryStudy.Displayed(result, nausea + "/severity:SEVERE", "placebo"));
-        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity:MILD", "active"));
-        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity:MODERATE", "active"));
-        Assert.Equal(1, SummaryStudy.Value(result, "any/severity:SEVERE", "placebo", "n"));
-        Assert.Equal(1, SummaryStudy.Value(result, "any/severity:MODERATE", "placebo", "n"));
+        Assert.Equal("0", SummaryStudy.Displayed(result, nausea + "/severity-mild", "placebo"));
+        Assert.Equal("1 (50.0)", SummaryStudy.Displayed(result, nausea + "/severity-severe", "placebo"));
+        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity-mild", "active"));
+        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, nausea + "/severity-moderate", "active"));
+        Assert.Equal(1, SummaryStudy.Value(result, "any/severity-severe", "placebo", "n"));
+        Assert.Equal(1, SummaryStudy.Value(result, "any/severity-moderate", "placebo", "n"));
     }
 
     [Fact]

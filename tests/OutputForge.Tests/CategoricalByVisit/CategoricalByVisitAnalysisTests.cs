@@ -58,13 +58,13 @@ public sealed class CategoricalByVisitAnalysisTests
         var result = Analyze(study);
         Assert.Equal(["week-4", "week-8"], result.Rows.Where(r => r.Kind == ResultRowKind.Section).Select(r => r.Key));
         // Week 8 placebo: T1-001 (2) and T1-002 (3) observed; T1-003 has no value, T1-004 only an LOCF record.
-        Assert.Equal(2, Value(result, "week-8-n", "placebo", "n"));
-        Assert.Equal(2, Value(result, "week-8-missing", "placebo", "n"));
-        Assert.Equal(50, Value(result, "week-8-category-2", "placebo", "percent"));
+        Assert.Equal(2, Value(result, "week-8/n", "placebo", "n"));
+        Assert.Equal(2, Value(result, "week-8/missing", "placebo", "n"));
+        Assert.Equal(50, Value(result, "week-8/category-2", "placebo", "percent"));
         // A category nobody chose is still shown, with 0.
-        Assert.Equal(0, Value(result, "week-8-category-4", "active", "n"));
+        Assert.Equal(0, Value(result, "week-8/category-4", "active", "n"));
         // Week 4 active: T1-008's record without ANL01FL is not selected, its flagged one (1) is.
-        Assert.Equal(2, Value(result, "week-4-category-1", "active", "n"));
+        Assert.Equal(2, Value(result, "week-4/category-1", "active", "n"));
         Assert.DoesNotContain(result.Columns, c => c.Key.StartsWith("p-value", StringComparison.Ordinal));
         Assert.Contains(Footnotes(result), n => n.Contains("observed responses only (DTYPE empty)", StringComparison.Ordinal));
     }
@@ -74,8 +74,8 @@ public sealed class CategoricalByVisitAnalysisTests
     {
         using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table($$"""{ "categories": {{Categories}}, "imputation": "LOCF", "test": "none" }"""));
         var result = Analyze(study);
-        Assert.Equal(3, Value(result, "week-8-n", "placebo", "n"));
-        Assert.Equal(2, Value(result, "week-8-category-3", "placebo", "n"));
+        Assert.Equal(3, Value(result, "week-8/n", "placebo", "n"));
+        Assert.Equal(2, Value(result, "week-8/category-3", "placebo", "n"));
         Assert.Contains(Footnotes(result), n => n.Contains("imputed by LOCF", StringComparison.Ordinal) && n.Contains("Week 8: 1", StringComparison.Ordinal));
     }
 
@@ -88,8 +88,8 @@ public sealed class CategoricalByVisitAnalysisTests
         var expected = "Week 4, Active vs Placebo: left out of the test for having fewer than 2 subjects with a response: REG = C (1 subject).";
         Assert.Contains(expected, Warnings(result));
         Assert.Contains(expected, Footnotes(result));
-        Assert.Equal(2, Value(result, "week-4-n", "p-value-active", "strata"));
-        Assert.Equal(1, Value(result, "week-4-n", "p-value-active", "df"));
+        Assert.Equal(2, Value(result, "week-4/n", "p-value-active", "strata"));
+        Assert.Equal(1, Value(result, "week-4/n", "p-value-active", "df"));
         // The note is data: its visit, comparison and strata, worded by Layout.
         var note = Assert.Single(result.Notes, n => n.Kind == NoteKind.StrataTooSmall && n.Role == NoteRole.Warning && n.Subject.Visit == "Week 4");
         Assert.Equal(new NoteSubject(Visit: "Week 4", Arm: "Active", Control: "Placebo"), note.Subject);
@@ -126,7 +126,7 @@ public sealed class CategoricalByVisitAnalysisTests
         using var study = new MiniStudy(adsl: Adsl.Replace("T1-008,Active,1,Y,C", "T1-008,Active,1,Y,", StringComparison.Ordinal), adeff: Adeff,
             table: Table($$"""{ "categories": {{Categories}}, "strata": ["REG"] }"""));
         var result = Analyze(study);
-        Assert.Equal(4, Value(result, "week-4-n", "active", "n"));
+        Assert.Equal(4, Value(result, "week-4/n", "active", "n"));
         Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", Warnings(result));
         Assert.Contains("Week 4, Active vs Placebo: 1 subject has no value of REG and is left out of the test.", Footnotes(result));
     }
@@ -143,8 +143,8 @@ public sealed class CategoricalByVisitAnalysisTests
     {
         using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table($$"""{ "categories": {{Categories}} }"""));
         var result = Analyze(study);
-        Assert.Equal(7 * 6.25 / 9.75, Value(result, "week-4-n", "p-value-active", "statistic")!.Value, 12);
-        Assert.Equal(0.034149976354555585, Value(result, "week-4-n", "p-value-active", "pValue")!.Value, 12);
+        Assert.Equal(7 * 6.25 / 9.75, Value(result, "week-4/n", "p-value-active", "statistic")!.Value, 12);
+        Assert.Equal(0.034149976354555585, Value(result, "week-4/n", "p-value-active", "pValue")!.Value, 12);
     }
 
     [Fact]
@@ -153,7 +153,7 @@ public sealed class CategoricalByVisitAnalysisTests
         using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table($$"""{ "categories": {{Categories}}, "test": "general-association" }"""));
         var result = Analyze(study);
         // Week 4 uses categories 1-3 only: rank (2 - 1)(3 - 1) = 2 instead of 3.
-        Assert.Equal(2, Value(result, "week-4-n", "p-value-active", "df"));
+        Assert.Equal(2, Value(result, "week-4/n", "p-value-active", "df"));
         Assert.Contains(Warnings(result), w => w.StartsWith("Week 4, Active vs Placebo: The covariance matrix has rank 2 instead of 3", StringComparison.Ordinal));
         Assert.Contains(Footnotes(result), n => n.Contains("chi-square with 3 degrees of freedom", StringComparison.Ordinal));
     }
@@ -166,8 +166,8 @@ public sealed class CategoricalByVisitAnalysisTests
             """;
         using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table($$"""{ "variable": "AVALC", "categories": {{text}}, "scores": "equal-spacing" }"""));
         var result = Analyze(study);
-        Assert.Equal(2, Value(result, "week-4-category-better", "active", "n"));
-        Assert.Equal(7 * 6.25 / 9.75, Value(result, "week-4-n", "p-value-active", "statistic")!.Value, 12);
+        Assert.Equal(2, Value(result, "week-4/category-better", "active", "n"));
+        Assert.Equal(7 * 6.25 / 9.75, Value(result, "week-4/n", "p-value-active", "statistic")!.Value, 12);
     }
 
     [Fact]
@@ -216,6 +216,6 @@ public sealed class CategoricalByVisitAnalysisTests
         var result = Analyze(study);
         Assert.Equal(["placebo", "active", "p-value"], result.Columns.Select(c => c.Key));
         // With two arms the correlation and row mean scores statistics coincide.
-        Assert.Equal(7 * 6.25 / 9.75, Value(result, "week-4-n", "p-value", "statistic")!.Value, 12);
+        Assert.Equal(7 * 6.25 / 9.75, Value(result, "week-4/n", "p-value", "statistic")!.Value, 12);
     }
 }

@@ -45,7 +45,7 @@ public sealed class PilotCategoricalByVisitTableTests
         // Week 24, LOCF, row mean scores by SITEGR1: p = 0.5133 (low dose) and 0.8457 (high dose) in the oracle file, shown to 3 decimals.
         var oracle = CategoricalByVisitOracle.Read(OracleFile);
         string Shown(string column) => oracle.GetProperty("records").EnumerateArray()
-            .Single(r => r.GetProperty("variant").GetString() == "14-3.02" && r.GetProperty("row").GetString() == "week-24-n"
+            .Single(r => r.GetProperty("variant").GetString() == "14-3.02" && r.GetProperty("row").GetString() == "week-24/n"
                          && r.GetProperty("column").GetString() == column && r.GetProperty("statistic").GetString() == "pValue")
             .GetProperty("value").GetDouble().ToString("0.000", System.Globalization.CultureInfo.InvariantCulture);
         Assert.Equal([Shown("p-value-xanomeline-low-dose"), Shown("p-value-xanomeline-high-dose")], n[2].Skip(4));

@@ -43,22 +43,22 @@ public sealed class ContinuousAnalysisTests
         using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table("{}"));
         var result = Analyze(study);
         // Hand computation: Placebo changes -1, -2, -3 (mean -2, SD 1); Active -3, -4, -8 (mean -5, SD sqrt(7)).
-        Assert.Equal(3, Value(result, "week-4-change-n", "active", "n"));
-        Assert.Equal(-5, Value(result, "week-4-change-mean", "active", "mean")!.Value, 12);
-        Assert.Equal(Math.Sqrt(7), Value(result, "week-4-change-mean", "active", "sd")!.Value, 12);
-        Assert.Equal(-4, Value(result, "week-4-change-median", "active", "median"));
-        Assert.Equal(-8, Value(result, "week-4-change-range", "active", "min"));
+        Assert.Equal(3, Value(result, "week-4/change/n", "active", "n"));
+        Assert.Equal(-5, Value(result, "week-4/change/mean-sd", "active", "mean")!.Value, 12);
+        Assert.Equal(Math.Sqrt(7), Value(result, "week-4/change/mean-sd", "active", "sd")!.Value, 12);
+        Assert.Equal(-4, Value(result, "week-4/change/median", "active", "median"));
+        Assert.Equal(-8, Value(result, "week-4/change/min-max", "active", "min"));
         // With treatment alone the LS means are the arm means; the pooled SD is sqrt((2*1 + 2*7)/4) = 2,
         // so the SE of the difference is 2 sqrt(1/3 + 1/3) on 4 df (one-way ANOVA, any linear models text).
-        Assert.Equal(-2, Value(result, "week-4-lsmean", "placebo", "estimate")!.Value, 12);
-        Assert.Equal(2 / Math.Sqrt(3), Value(result, "week-4-lsmean", "placebo", "se")!.Value, 12);
-        Assert.Equal(-3, Value(result, "week-4-lsdiff", "active", "estimate")!.Value, 12);
-        Assert.Equal(2 * Math.Sqrt(2.0 / 3), Value(result, "week-4-lsdiff", "active", "se")!.Value, 12);
+        Assert.Equal(-2, Value(result, "week-4/lsmean", "placebo", "estimate")!.Value, 12);
+        Assert.Equal(2 / Math.Sqrt(3), Value(result, "week-4/lsmean", "placebo", "se")!.Value, 12);
+        Assert.Equal(-3, Value(result, "week-4/lsdiff", "active", "estimate")!.Value, 12);
+        Assert.Equal(2 * Math.Sqrt(2.0 / 3), Value(result, "week-4/lsdiff", "active", "se")!.Value, 12);
         var t = -3 / (2 * Math.Sqrt(2.0 / 3));
-        Assert.Equal(4, Value(result, "week-4-lsdiff-p-value", "active", "df"));
-        Assert.Equal(t, Value(result, "week-4-lsdiff-p-value", "active", "statistic")!.Value, 12);
+        Assert.Equal(4, Value(result, "week-4/lsdiff-p-value", "active", "df"));
+        Assert.Equal(t, Value(result, "week-4/lsdiff-p-value", "active", "statistic")!.Value, 12);
         // Two-sided p of that t on 4 df: R 4.2.2, 2 * pt(-3 / (2 * sqrt(2/3)), 4) = 0.14006598491201774.
-        Assert.Equal(0.14006598491201774, Value(result, "week-4-lsdiff-p-value", "active", "pValue")!.Value, 12);
+        Assert.Equal(0.14006598491201774, Value(result, "week-4/lsdiff-p-value", "active", "pValue")!.Value, 12);
     }
 
     [Fact]
@@ -69,8 +69,8 @@ public sealed class ContinuousAnalysisTests
             .Replace("Placebo,0,Y,B\n", "Placebo,0,Y,B,P\n").Replace("Active,1,Y,B\n", "Active,1,Y,B,Q\n").Replace("Active,1,Y,A\n", "Active,1,Y,A,Q\n");
         using var study = new MiniStudy(adsl: adsl, adeff: Adeff, table: Table("""{ "factors": ["ARMGRP"] }"""));
         var result = Analyze(study);
-        Assert.Null(Value(result, "week-4-lsmean", "placebo", "estimate"));
-        Assert.Null(Value(result, "week-4-lsdiff", "active", "estimate"));
+        Assert.Null(Value(result, "week-4/lsmean", "placebo", "estimate"));
+        Assert.Null(Value(result, "week-4/lsdiff", "active", "estimate"));
         Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("the ANCOVA could not be fitted") && w.Contains("rank deficient"));
     }
 
@@ -80,7 +80,7 @@ public sealed class ContinuousAnalysisTests
         var adeff = string.Join("\n", Adeff.Split('\n').Where(l => !l.Contains("T1-00") || string.CompareOrdinal(l.Split(',')[1], "T1-004") < 0)) + "\n";
         using var study = new MiniStudy(adsl: Adsl, adeff: adeff, table: Table("""{ "covariates": ["BASE"] }"""));
         var result = Analyze(study);
-        Assert.Null(Value(result, "week-4-lsmean", "active", "estimate"));
+        Assert.Null(Value(result, "week-4/lsmean", "active", "estimate"));
         Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("the ANCOVA could not be fitted") && w.Contains("fewer than two arms"));
     }
 
@@ -98,10 +98,10 @@ public sealed class ContinuousAnalysisTests
     {
         using var study = new MiniStudy(adsl: Adsl, adeff: Adeff, table: Table("""{ "covariates": ["BASE"], "doseVariable": "TRT01PN" }"""));
         var result = Analyze(study);
-        Assert.NotNull(Value(result, "week-4-lsdiff", "active", "estimate"));
+        Assert.NotNull(Value(result, "week-4/lsdiff", "active", "estimate"));
         // With two arms and dose 0/1 the dose slope is the LS mean difference itself (same model, recoded).
-        Assert.Equal(Value(result, "week-4-lsdiff", "active", "estimate")!.Value, Value(result, "week-4-dose-response", "placebo", "estimate")!.Value, 10);
-        Assert.Equal(Value(result, "week-4-lsdiff-p-value", "active", "pValue")!.Value, Value(result, "week-4-dose-response", "placebo", "pValue")!.Value, 10);
+        Assert.Equal(Value(result, "week-4/lsdiff", "active", "estimate")!.Value, Value(result, "week-4/dose-response", "placebo", "estimate")!.Value, 10);
+        Assert.Equal(Value(result, "week-4/lsdiff-p-value", "active", "pValue")!.Value, Value(result, "week-4/dose-response", "placebo", "pValue")!.Value, 10);
     }
 
     [Fact]

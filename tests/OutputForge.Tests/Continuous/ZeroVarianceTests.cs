@@ -43,20 +43,20 @@ public sealed class ZeroVarianceTests
     public void Equal_changes_give_no_p_value_and_say_why()
     {
         var result = Analyze(Adeff(_ => "-1.5"));
-        var p = Statistic(result, "week-4-lsdiff-p-value", "active", "pValue");
+        var p = Statistic(result, "week-4/lsdiff-p-value", "active", "pValue");
         Assert.Null(p.Value);
         Assert.Contains("the variance is zero up to rounding", p.NotEstimableReason);
         Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("Week 4: the ANCOVA could not be fitted: the variance is zero up to rounding"));
         // The descriptive rows still show the values: mean -1.5, SD 0.
-        Assert.Equal(-1.5, Statistic(result, "week-4-change-mean", "active", "mean").Value);
-        Assert.Equal(0, Statistic(result, "week-4-change-mean", "active", "sd").Value);
+        Assert.Equal(-1.5, Statistic(result, "week-4/change/mean-sd", "active", "mean").Value);
+        Assert.Equal(0, Statistic(result, "week-4/change/mean-sd", "active", "sd").Value);
     }
 
     [Fact]
     public void Changes_that_vary_keep_their_p_value()
     {
         var result = Analyze(Adeff(i => i % 3 == 0 ? "-1.4" : "-1.5"));
-        Assert.NotNull(Statistic(result, "week-4-lsdiff-p-value", "active", "pValue").Value);
+        Assert.NotNull(Statistic(result, "week-4/lsdiff-p-value", "active", "pValue").Value);
         Assert.DoesNotContain(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("zero up to rounding"));
     }
 }

@@ -24,15 +24,15 @@ public sealed class DispositionAnalysisTests
     {
         using var study = new SummaryStudy(Table);
         var result = study.Analyze();
-        Assert.Equal("2 (50.0)", SummaryStudy.Displayed(result, "EOSSTT/COMPLETED", "placebo"));
-        Assert.Equal("3 (75.0)", SummaryStudy.Displayed(result, "EOSSTT/COMPLETED", "active"));
-        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, "EOSSTT/DISCONTINUED", "active"));
+        Assert.Equal("2 (50.0)", SummaryStudy.Displayed(result, "eosstt/completed", "placebo"));
+        Assert.Equal("3 (75.0)", SummaryStudy.Displayed(result, "eosstt/completed", "active"));
+        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, "eosstt/discontinued", "active"));
         // Reasons among the discontinued, still of all randomized (N = 4): ADVERSE EVENT 1 and 1, WITHDRAWAL 1 and 0.
-        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, "DCSREAS/ADVERSE EVENT", "active"));
-        Assert.Equal("0", SummaryStudy.Displayed(result, "DCSREAS/WITHDRAWAL BY SUBJECT", "active"));
+        Assert.Equal("1 (25.0)", SummaryStudy.Displayed(result, "dcsreas/adverse-event", "active"));
+        Assert.Equal("0", SummaryStudy.Displayed(result, "dcsreas/withdrawal-by-subject", "active"));
         // Frequency order: ADVERSE EVENT (2) before WITHDRAWAL BY SUBJECT (1).
-        Assert.Equal(["DCSREAS/ADVERSE EVENT", "DCSREAS/WITHDRAWAL BY SUBJECT"],
-            result.Rows.Where(r => r.Key.StartsWith("DCSREAS/", StringComparison.Ordinal)).Select(r => r.Key));
+        Assert.Equal(["dcsreas/adverse-event", "dcsreas/withdrawal-by-subject"],
+            result.Rows.Where(r => r.Key.StartsWith("dcsreas/", StringComparison.Ordinal)).Select(r => r.Key));
     }
 
     [Fact]
@@ -42,7 +42,7 @@ public sealed class DispositionAnalysisTests
         var result = study.Analyze();
         // Status [[2, 3], [2, 1]]: hypergeometric probabilities 5/70, 30/70, 30/70, 5/70 for 1..4 completers on
         // placebo; the observed 30/70 is the largest, so the two-sided p is 1 (hand computation).
-        Assert.Equal(1.0, SummaryStudy.Value(result, "EOSSTT", "p-value", "pValue")!.Value, 12);
+        Assert.Equal(1.0, SummaryStudy.Value(result, "eosstt", "p-value", "pValue")!.Value, 12);
         var notes = TableNotes.Of(result);
         Assert.Contains(notes.Warnings, w => w.StartsWith("Reason: 4 of 4 expected counts are below 5", StringComparison.Ordinal));
         Assert.Contains(notes.Footnotes, n => n.StartsWith("[a] ", StringComparison.Ordinal)

@@ -75,12 +75,12 @@ variant_records <- function(name, adsl, rec_all, spec) {
     }
     for (a in arms) {
       x <- rec$AVAL[rec$ARM == a]
-      add(paste0(vk, "-n"), key(a), "n", length(x))
+      add(paste0(vk, "/n"), key(a), "n", length(x))
       for (j in seq_len(J)) {
-        add(paste0(vk, "-category-", j), key(a), "n", sum(x == j))
-        add(paste0(vk, "-category-", j), key(a), "percent", if (length(x) == 0) NA else 100 * sum(x == j) / length(x))
+        add(paste0(vk, "/category-", j), key(a), "n", sum(x == j))
+        add(paste0(vk, "/category-", j), key(a), "percent", if (length(x) == 0) NA else 100 * sum(x == j) / length(x))
       }
-      add(paste0(vk, "-missing"), key(a), "n", sum(pop$TRT01P == a) - length(x))
+      add(paste0(vk, "/missing"), key(a), "n", sum(pop$TRT01P == a) - length(x))
     }
     sets <- if (spec$comparison == "all-arms") list(list(column = "p-value", arms = arms)) else
       lapply(arms[-1], function(a) list(column = paste0("p-value-", key(a)), arms = c(control, a)))
@@ -97,11 +97,11 @@ variant_records <- function(name, adsl, rec_all, spec) {
         t(sapply(set$arms, function(a) tabulate(rs$AVAL[rs$ARM == a], nbins = J)))
       })
       res <- tryCatch(overall(tables, spec$test, J, identical(spec$scores, "modified-ridit")), error = function(e) stop(name, " ", visit, " ", set$column, ": ", conditionMessage(e)))
-      add(paste0(vk, "-n"), set$column, "pValue", res$p)
-      add(paste0(vk, "-n"), set$column, "statistic", res$statistic)
-      add(paste0(vk, "-n"), set$column, "df", res$df)
-      add(paste0(vk, "-n"), set$column, "strata", length(used))
-      if (!is.null(res$base)) add(paste0(vk, "-n"), set$column, "base-statistic", res$base)
+      add(paste0(vk, "/n"), set$column, "pValue", res$p)
+      add(paste0(vk, "/n"), set$column, "statistic", res$statistic)
+      add(paste0(vk, "/n"), set$column, "df", res$df)
+      add(paste0(vk, "/n"), set$column, "strata", length(used))
+      if (!is.null(res$base)) add(paste0(vk, "/n"), set$column, "base-statistic", res$base)
     }
   }
   records

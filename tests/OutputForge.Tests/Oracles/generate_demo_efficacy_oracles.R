@@ -33,12 +33,12 @@ for (visit in c("Week 4", "Week 8", "Week 12")) {
     a <- rec[rec$TRT01P == arms[i], ]
     for (v in list(c("baseline", "BASE"), c("value", "AVAL"), c("change", "CHG"))) {
       x <- a[[v[2]]]; x <- x[!is.na(x)]
-      add("14.2.2.1", paste0(vk, "-", v[1], "-n"), keys[i], "n", length(x))
-      add("14.2.2.1", paste0(vk, "-", v[1], "-mean"), keys[i], "mean", mean(x))
-      add("14.2.2.1", paste0(vk, "-", v[1], "-mean"), keys[i], "sd", sd(x))
-      add("14.2.2.1", paste0(vk, "-", v[1], "-median"), keys[i], "median", median(x))
-      add("14.2.2.1", paste0(vk, "-", v[1], "-range"), keys[i], "min", min(x))
-      add("14.2.2.1", paste0(vk, "-", v[1], "-range"), keys[i], "max", max(x))
+      add("14.2.2.1", paste0(vk, "/", v[1], "/n"), keys[i], "n", length(x))
+      add("14.2.2.1", paste0(vk, "/", v[1], "/mean-sd"), keys[i], "mean", mean(x))
+      add("14.2.2.1", paste0(vk, "/", v[1], "/mean-sd"), keys[i], "sd", sd(x))
+      add("14.2.2.1", paste0(vk, "/", v[1], "/median"), keys[i], "median", median(x))
+      add("14.2.2.1", paste0(vk, "/", v[1], "/min-max"), keys[i], "min", min(x))
+      add("14.2.2.1", paste0(vk, "/", v[1], "/min-max"), keys[i], "max", max(x))
     }
   }
   m <- rec[!is.na(rec$CHG), ]
@@ -57,15 +57,15 @@ for (visit in c("Week 4", "Week 8", "Week 12")) {
     if (p) add("14.2.2.1", prow, col, "pValue", 2 * pt(-abs(est / s), df))
   }
   for (i in seq_along(arms)) {
-    add("14.2.2.1", paste0(vk, "-model-n"), keys[i], "n", sum(m$TRT01P == arms[i]))
-    put(paste0(vk, "-lsmean"), keys[i], lsv(arms[i]))
+    add("14.2.2.1", paste0(vk, "/model-n"), keys[i], "n", sum(m$TRT01P == arms[i]))
+    put(paste0(vk, "/lsmean"), keys[i], lsv(arms[i]))
   }
-  for (i in 2:3) put(paste0(vk, "-lsdiff"), keys[i], lsv(arms[i]) - lsv(arms[1]), cirow = paste0(vk, "-lsdiff-ci"), p = TRUE, prow = paste0(vk, "-lsdiff-p-value"))
-  pk <- paste0(vk, "-lsdiff-qf-217-30-mg-vs-qf-217-10-mg")
+  for (i in 2:3) put(paste0(vk, "/lsdiff"), keys[i], lsv(arms[i]) - lsv(arms[1]), cirow = paste0(vk, "/lsdiff-ci"), p = TRUE, prow = paste0(vk, "/lsdiff-p-value"))
+  pk <- paste0(vk, "/lsdiff-qf-217-30-mg-vs-qf-217-10-mg")
   put(pk, keys[3], lsv(arms[3]) - lsv(arms[2]), cirow = paste0(pk, "-ci"), p = TRUE, prow = paste0(pk, "-p-value"))
   dfit <- summary(lm(CHG ~ TRT01PN + BASE + S1 + S2, data = m))$coefficients
-  add("14.2.2.1", paste0(vk, "-dose-response"), "placebo", "estimate", dfit["TRT01PN", 1])
-  add("14.2.2.1", paste0(vk, "-dose-response"), "placebo", "pValue", dfit["TRT01PN", 4])
+  add("14.2.2.1", paste0(vk, "/dose-response"), "placebo", "estimate", dfit["TRT01PN", 1])
+  add("14.2.2.1", paste0(vk, "/dose-response"), "placebo", "pValue", dfit["TRT01PN", 4])
 }
 
 # ---- 14.2.3.1 (TTRESP, stratified, Efron, event probabilities) and 14.2.3.2 (TTDISC, Breslow) ----
@@ -127,10 +127,10 @@ if (file.exists(file.path(pilot, "adqscibc.csv"))) {
   c24 <- merge(c24, padsl[padsl$EFFFL == "Y", c("USUBJID", "TRT01P", "TRT01PN")], by = "USUBJID")
   for (i in seq_along(arms)) {
     x <- c24$AVAL[c24$TRT01P == arms[i]]; x <- x[!is.na(x)]
-    add("pilot-cibic", "week-24-value-n", keys[i], "n", length(x))
-    add("pilot-cibic", "week-24-value-mean", keys[i], "mean", mean(x))
-    add("pilot-cibic", "week-24-value-mean", keys[i], "sd", sd(x))
-    add("pilot-cibic", "week-24-value-median", keys[i], "median", median(x))
+    add("pilot-cibic", "week-24/value/n", keys[i], "n", length(x))
+    add("pilot-cibic", "week-24/value/mean-sd", keys[i], "mean", mean(x))
+    add("pilot-cibic", "week-24/value/mean-sd", keys[i], "sd", sd(x))
+    add("pilot-cibic", "week-24/value/median", keys[i], "median", median(x))
   }
   c24 <- c24[!is.na(c24$AVAL), ]
   c24$TRT <- factor(c24$TRT01P, levels = arms); c24$SG <- factor(c24$SITEGR1)
@@ -139,17 +139,17 @@ if (file.exists(file.path(pilot, "adqscibc.csv"))) {
   lsv <- function(arm) c(1, arm == arms[2], arm == arms[3], rep(1 / k, k - 1))
   for (i in seq_along(arms)) {
     cv <- lsv(arms[i]); est <- sum(cv * b); se <- sqrt(drop(t(cv) %*% V %*% cv))
-    add("pilot-cibic", "week-24-lsmean", keys[i], "estimate", est); add("pilot-cibic", "week-24-lsmean", keys[i], "se", se)
+    add("pilot-cibic", "week-24/lsmean", keys[i], "estimate", est); add("pilot-cibic", "week-24/lsmean", keys[i], "se", se)
   }
   for (i in 2:3) {
     cv <- lsv(arms[i]) - lsv(arms[1]); est <- sum(cv * b); se <- sqrt(drop(t(cv) %*% V %*% cv))
-    add("pilot-cibic", "week-24-lsdiff", keys[i], "estimate", est); add("pilot-cibic", "week-24-lsdiff", keys[i], "se", se)
-    add("pilot-cibic", "week-24-lsdiff-ci", keys[i], "lower", est - q * se); add("pilot-cibic", "week-24-lsdiff-ci", keys[i], "upper", est + q * se)
-    add("pilot-cibic", "week-24-lsdiff-p-value", keys[i], "pValue", 2 * pt(-abs(est / se), df))
+    add("pilot-cibic", "week-24/lsdiff", keys[i], "estimate", est); add("pilot-cibic", "week-24/lsdiff", keys[i], "se", se)
+    add("pilot-cibic", "week-24/lsdiff-ci", keys[i], "lower", est - q * se); add("pilot-cibic", "week-24/lsdiff-ci", keys[i], "upper", est + q * se)
+    add("pilot-cibic", "week-24/lsdiff-p-value", keys[i], "pValue", 2 * pt(-abs(est / se), df))
   }
   dfit <- summary(lm(AVAL ~ TRT01PN + SG, data = c24))$coefficients
-  add("pilot-cibic", "week-24-dose-response", "placebo", "estimate", dfit["TRT01PN", 1])
-  add("pilot-cibic", "week-24-dose-response", "placebo", "pValue", dfit["TRT01PN", 4])
+  add("pilot-cibic", "week-24/dose-response", "placebo", "estimate", dfit["TRT01PN", 1])
+  add("pilot-cibic", "week-24/dose-response", "placebo", "pValue", dfit["TRT01PN", 4])
 
   # Time to first dermatologic event (TTDE), safety population by actual treatment (TRT01A), Efron ties.
   # tte() reads the globals adtte, itt (subjects with their arm in TRT01P), arms and keys.

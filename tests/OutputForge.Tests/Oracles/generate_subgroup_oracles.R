@@ -18,12 +18,14 @@ add <- function(table, row, column, statistic, value) {
   records <<- c(records, sprintf("{\"table\": \"%s\", \"row\": \"%s\", \"column\": \"%s\", \"statistic\": \"%s\", \"value\": %s}",
                                  table, row, column, statistic, v))
 }
-key <- function(x) gsub("^-+|-+$", "", gsub("[^a-z0-9]+", "-", tolower(x)))
-level_keys <- function(variable, values) {
-  k <- key(values)
-  if (any(k == "") || any(k == "interaction") || any(duplicated(k))) k <- paste0("level-", seq_along(values))
-  paste0(key(variable), "-", k)
+# A name in key form (docs/results.md, "Keys"), for the ASCII names of these data: signs spelt as words, then
+# lower case with every run of other characters one "-".
+key <- function(x) {
+  for (s in list(c("<=", " le "), c(">=", " ge "), c("<", " lt "), c(">", " gt "), c("=", " eq "), c("\\+", " plus ")))
+    x <- gsub(s[1], s[2], x)
+  gsub("^-+|-+$", "", gsub("[^a-z0-9]+", "-", tolower(x)))
 }
+level_keys <- function(variable, values) paste0(key(variable), "/", key(values))
 wilson <- function(x, n) as.numeric(prop.test(x, n, correct = FALSE)$conf.int)
 newcombe <- function(x1, n1, x2, n2) {
   p1 <- x1 / n1; p2 <- x2 / n2; w1 <- wilson(x1, n1); w2 <- wilson(x2, n2); d <- p1 - p2
@@ -58,9 +60,9 @@ subgroup_table <- function(table, subjects, arms, arm_keys, variables, levels, m
       d$sub <- factor(d[[v]], levels = values)
       a <- anova(glm(y ~ armf + sub, family = binomial, data = d), glm(y ~ armf * sub, family = binomial, data = d), test = "LRT")
       col <- paste0(arm_keys[i], "-vs-", arm_keys[1])
-      add(table, paste0(key(v), "-interaction"), col, "pValue", a[2, "Pr(>Chi)"])
-      add(table, paste0(key(v), "-interaction"), col, "statistic", a[2, "Deviance"])
-      add(table, paste0(key(v), "-interaction"), col, "df", a[2, "Df"])
+      add(table, paste0(key(v), "/interaction"), col, "pValue", a[2, "Pr(>Chi)"])
+      add(table, paste0(key(v), "/interaction"), col, "statistic", a[2, "Deviance"])
+      add(table, paste0(key(v), "/interaction"), col, "df", a[2, "Df"])
     }
   }
 }

@@ -22,23 +22,23 @@ public sealed class SubgroupEdgeCaseTests
     public void A_level_below_the_minimum_has_counts_but_no_effect_and_says_why()
     {
         var result = Analyze("""{ "variables": [ { "variable": "REGION1" } ] }""", Balanced);
-        Assert.Equal(3, Value(result, "region1-south", "active", "n").Value);
-        Assert.Equal(3, Value(result, "region1-south", "active", "N").Value);
-        var effect = Value(result, "region1-south", "active-vs-placebo", "estimate");
+        Assert.Equal(3, Value(result, "region1/south", "active", "n").Value);
+        Assert.Equal(3, Value(result, "region1/south", "active", "N").Value);
+        var effect = Value(result, "region1/south", "active-vs-placebo", "estimate");
         Assert.Null(effect.Value);
         Assert.Contains("fewer than the minimum of 5", effect.NotEstimableReason);
         Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.StartsWith("REGION1 South, Active vs Placebo: difference not estimated: Active has 3 subjects and Placebo has 3 subjects, fewer than the minimum of 5", StringComparison.Ordinal));
-        Assert.NotNull(Value(result, "region1-north", "active-vs-placebo", "estimate").Value);
+        Assert.NotNull(Value(result, "region1/north", "active-vs-placebo", "estimate").Value);
     }
 
     [Fact]
     public void An_empty_cell_gives_no_odds_ratio_and_separation_gives_no_interaction_p_value()
     {
         var result = Analyze("""{ "variables": [ { "variable": "REGION1" } ], "measure": "odds-ratio", "minimumPerArm": 1 }""", Balanced);
-        var odds = Value(result, "region1-south", "active-vs-placebo", "estimate");
+        var odds = Value(result, "region1/south", "active-vs-placebo", "estimate");
         Assert.Null(odds.Value);
         Assert.Contains("zero", odds.NotEstimableReason);
-        var p = Value(result, "region1-interaction", "active-vs-placebo", "pValue");
+        var p = Value(result, "region1/interaction", "active-vs-placebo", "pValue");
         Assert.Null(p.Value);
         Assert.Contains("quasi-complete separation", p.NotEstimableReason);
         Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("REGION1 interaction, Active vs Placebo: no p-value", StringComparison.Ordinal)
@@ -51,8 +51,8 @@ public sealed class SubgroupEdgeCaseTests
         var result = Analyze("""{ "variables": [ { "variable": "SEX" } ], "interaction": "breslow-day" }""", Balanced);
         // Female: Active 15/23, Placebo 8/23; Male: Active 9/20, Placebo 5/20.
         var expected = BreslowDayTest.Compute([new StratumCounts(15, 23, 8, 23), new StratumCounts(9, 20, 5, 20)], taroneCorrection: false);
-        Assert.Equal(expected.PValue, Value(result, "sex-interaction", "active-vs-placebo", "pValue").Value);
-        Assert.Equal(BreslowDayTest.MethodName, Value(result, "sex-interaction", "active-vs-placebo", "pValue").Method);
+        Assert.Equal(expected.PValue, Value(result, "sex/interaction", "active-vs-placebo", "pValue").Value);
+        Assert.Equal(BreslowDayTest.MethodName, Value(result, "sex/interaction", "active-vs-placebo", "pValue").Method);
     }
 
     [Fact]
@@ -60,10 +60,10 @@ public sealed class SubgroupEdgeCaseTests
     {
         var cells = Balanced.Append(new Cell("Active", "M", "West", 4, 4)).ToArray();
         var result = Analyze("""{ "variables": [ { "variable": "REGION1", "levels": [ { "value": "North" }, { "value": "South" }, { "value": "West" } ] } ], "interaction": "breslow-day-tarone", "minimumPerArm": 1 }""", cells);
-        Assert.Equal(0, Value(result, "region1-west", "placebo", "N").Value);
+        Assert.Equal(0, Value(result, "region1/west", "placebo", "N").Value);
         Assert.Contains("REGION1 interaction, Active vs Placebo: Level West has no subjects in Placebo and was left out of the interaction test.",
             OutputForge.Layout.TableNotes.Of(result).Warnings);
-        Assert.NotNull(Value(result, "region1-interaction", "active-vs-placebo", "pValue").Value);
+        Assert.NotNull(Value(result, "region1/interaction", "active-vs-placebo", "pValue").Value);
     }
 
     [Fact]
@@ -82,7 +82,7 @@ public sealed class SubgroupEdgeCaseTests
     public void Subjects_outside_the_listed_levels_are_counted_in_a_warning()
     {
         var result = Analyze("""{ "variables": [ { "variable": "REGION1", "label": "Region", "levels": [ { "value": "North", "label": "Northern sites" } ] } ] }""", Balanced);
-        Assert.Equal("Northern sites", result.Rows.Single(r => r.Key == "region1-north").Label);
+        Assert.Equal("Northern sites", result.Rows.Single(r => r.Key == "region1/north").Label);
         Assert.Contains(OutputForge.Layout.TableNotes.Of(result).Warnings, w => w.Contains("6 subjects have a value of REGION1 that the spec does not list ('South')", StringComparison.Ordinal));
     }
 

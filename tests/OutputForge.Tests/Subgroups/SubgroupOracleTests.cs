@@ -50,11 +50,11 @@ public sealed class SubgroupOracleTests(DemoRunFixture demo) : IClassFixture<Dem
     }
 
     [Theory]
-    [InlineData("SEX = 'F'", "sex-f")]
-    [InlineData("SEX = 'M'", "sex-m")]
-    [InlineData("AGEGR1 = '<65'", "agegr1-level-1")]
-    [InlineData("AGEGR1 = '>=65'", "agegr1-level-2")]
-    [InlineData("REGION1 = 'Europe'", "region1-europe")]
+    [InlineData("SEX = 'F'", "sex/f")]
+    [InlineData("SEX = 'M'", "sex/m")]
+    [InlineData("AGEGR1 = '<65'", "agegr1/lt-65")]
+    [InlineData("AGEGR1 = '>=65'", "agegr1/ge-65")]
+    [InlineData("REGION1 = 'Europe'", "region1/europe")]
     public void A_subgroup_row_equals_the_responders_kind_run_on_that_subset(string subset, string row)
     {
         var (study, table, data) = Demo();

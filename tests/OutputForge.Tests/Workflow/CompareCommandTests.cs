@@ -49,7 +49,7 @@ public sealed class CompareCommandTests(WorkflowDemoFixture demo) : IClassFixtur
     {
         var qc = demo.Write("qc-places.csv",
             "table,row,column,statistic,value\n" +
-            "14.2.1.1,responder,placebo,n,3\n" +
+            "14.2.1.1,Responder rate,placebo,n,3\n" +
             "14.2.1.1,95% CI,placebo,lower,1\n" +
             "14.9,responders,placebo,n,3\n" +
             "14.2.1.1,responders,=SUM(A1),n,3\n");
@@ -59,7 +59,7 @@ public sealed class CompareCommandTests(WorkflowDemoFixture demo) : IClassFixtur
 
         Assert.Equal(2, code);
         Assert.Contains("only in QC 4", output);
-        Assert.Contains("no row 'responder' in table 14.2.1.1 (did you mean 'responders'?)", output);
+        Assert.Contains("no row 'Responder rate' in table 14.2.1.1", output);
         Assert.Contains("row '95% CI' fits several rows (responders-ci, difference-ci, stratified-difference-ci, relative-risk-ci, odds-ratio-ci); write the row key instead", output);
         Assert.Contains("no table '14.9' in production", output);
         using var workbook = new XLWorkbook(report);

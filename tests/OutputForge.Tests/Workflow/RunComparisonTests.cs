@@ -7,7 +7,7 @@ namespace OutputForge.Tests.Workflow;
 public sealed class RunComparisonTests
 {
     private static string Results(params string[] records) =>
-        "{ \"study\": \"T1\", \"runTime\": \"2026-01-01T00:00:00Z\", \"tables\": [ { \"id\": \"1\" } ], \"records\": [" +
+        "{ \"study\": \"T1\", \"keyScheme\": 2, \"runTime\": \"2026-01-01T00:00:00Z\", \"tables\": [ { \"id\": \"1\" } ], \"records\": [" +
         string.Join(",", records) + "] }";
 
     private static string Record(string row, string column, string statistic, double value, string formatted) =>

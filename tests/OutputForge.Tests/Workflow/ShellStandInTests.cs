@@ -28,13 +28,13 @@ public sealed class ShellStandInTests
         // So is an interaction test across the single placeholder level of a subgroup variable whose levels the spec does not list.
         var expected = id switch
         {
-            "14.1.3" => new[] { "RACE p-value pValue" },
-            "14.2.5.1" => ["agegr1-interaction qf-217-10-mg-vs-placebo pValue", "agegr1-interaction qf-217-30-mg-vs-placebo pValue",
-                "region1-interaction qf-217-10-mg-vs-placebo pValue", "region1-interaction qf-217-30-mg-vs-placebo pValue"],
+            "14.1.3" => new[] { "race p-value pValue" },
+            "14.2.5.1" => ["agegr1/interaction qf-217-10-mg-vs-placebo pValue", "agegr1/interaction qf-217-30-mg-vs-placebo pValue",
+                "region1/interaction qf-217-10-mg-vs-placebo pValue", "region1/interaction qf-217-30-mg-vs-placebo pValue"],
             _ => [],
         };
         Assert.Equal(expected, notEstimable.Select(n => n[..n.IndexOf(':')]));
         var perArm = OutputForge.Kinds.TableKinds.Find(table.Kind)!.StandIn.SubjectsPerArm(table);
-        Assert.All(result.Columns.Where(c => c.SubjectCount is not null), c => Assert.Equal(perArm * (c.Key == ResultKeys.Total ? 3 : 1), c.SubjectCount));
+        Assert.All(result.Columns.Where(c => c.SubjectCount is not null), c => Assert.Equal(perArm * (c.Key == ResultKey.Total ? 3 : 1), c.SubjectCount));
     }
 }

@@ -8,12 +8,10 @@ namespace OutputForge.Analysis.Summaries;
 /// <summary>
 /// n (%) of subjects per level of an ADSL variable, per column; percentages are of the column's N
 /// (all subjects of the population in that column), also when a condition narrows who is counted.
-/// Row keys are "{key}/{value as in the data}" and "{key}/(missing)".
+/// Row keys (<see cref="ResultKey"/>) are "{key}/{value}" and "{key}/missing".
 /// </summary>
 public static class CategoricalSummary
 {
-    public const string MissingKey = "(missing)";
-
     public static CategoricalBlock Summarize(CategoricalRequest request, Dataset adsl, IReadOnlyList<(int Row, TreatmentArm Arm)> subjects,
         IReadOnlyList<TreatmentArm> arms, IReadOnlyList<SummaryColumn> columns, PercentDisplaySpec percent, SpecSource source, int indent)
     {
@@ -51,13 +49,13 @@ public static class CategoricalSummary
             {
                 warnings.Add($"{variable.Name} level '{value}' has no subjects in this population.");
             }
-            rows.Add(new ResultRow($"{request.Key}/{value}", levels[i].Label, indent,
+            rows.Add(new ResultRow(ResultKey.Of(request.Key, value ?? ResultKey.Missing), levels[i].Label, indent,
                 columns.Select(c => CountCells.CountPercent(c.Key, inLevel.Count(s => c.Holds(s.Arm)), c.N, percent)).ToList()));
         }
         var missing = counted.Where(s => variable.IsMissing(s.Row)).ToList();
         if (request.Missing)
         {
-            rows.Add(new ResultRow($"{request.Key}/{MissingKey}", "Missing", indent,
+            rows.Add(new ResultRow(ResultKey.Below(ResultKey.Part(request.Key), ResultKey.Missing), "Missing", indent,
                 columns.Select(c => CountCells.CountPercent(c.Key, missing.Count(s => c.Holds(s.Arm)), c.N, percent)).ToList()));
         }
         else if (missing.Count > 0)

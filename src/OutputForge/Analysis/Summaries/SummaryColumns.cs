@@ -13,7 +13,7 @@ public static class SummaryColumns
             .ToList();
         if (tableTotal ?? study.Treatment.Total)
         {
-            columns.Add(new SummaryColumn(ResultKeys.Total, "Total", selection.Arms.Sum(selection.Count),
+            columns.Add(new SummaryColumn(ResultKey.Total, "Total", selection.Arms.Sum(selection.Count),
                 selection.Arms.ToHashSet(), true));
         }
         return columns;

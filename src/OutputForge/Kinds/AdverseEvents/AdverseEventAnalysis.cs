@@ -13,8 +13,8 @@ namespace OutputForge.Kinds.AdverseEvents;
 /// n (%) of the population per arm, each subject counted once per row whatever its number of
 /// events; optionally the number of events [E], a by-severity breakdown (each subject once per row,
 /// at its maximum severity), a frequency threshold on terms, and Fisher's exact test of each active
-/// arm against the control. Row keys: "any", "soc:{class}", "soc:{class}/pt:{term}", each
-/// followed by "/severity:{value}" for the severity rows.
+/// arm against the control. Row keys (<see cref="ResultKey"/>): "any", "soc-{class}", "soc-{class}/pt-{term}", each
+/// followed by "/severity-{value}" for the severity rows.
 /// </summary>
 public sealed class AdverseEventAnalysis : ITableAnalysis
 {
@@ -58,19 +58,19 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
         {
             foreach (var socClass in Sorted(classes, c => c.Soc, c => c.Records, settings.Sort.By, sortColumn))
             {
-                rows.Add(SummaryRows.Blank($"blank:{socClass.Soc}", context.ColumnKeys));
-                var socKey = $"soc:{socClass.Soc}";
+                rows.Add(SummaryRows.Blank(ResultKey.Of("blank", socClass.Soc), context.ColumnKeys));
+                var socKey = SocKey(socClass.Soc);
                 rows.AddRange(context.Rows(socKey, socClass.Soc, 0, socClass.Records));
                 foreach (var term in Sorted(socClass.Terms, t => t.Term, t => t.Records, settings.Sort.By, sortColumn))
                 {
-                    rows.AddRange(context.Rows($"{socKey}/pt:{term.Term}", term.Term, 1, term.Records));
+                    rows.AddRange(context.Rows(TermKey(socKey, term.Term), term.Term, 1, term.Records));
                 }
             }
         }
         else
         {
-            var terms = classes.SelectMany(c => c.Terms.Select(t => (Key: $"soc:{c.Soc}/pt:{t.Term}", t.Term, t.Records))).ToList();
-            rows.Add(SummaryRows.Blank("blank:terms", context.ColumnKeys));
+            var terms = classes.SelectMany(c => c.Terms.Select(t => (Key: TermKey(SocKey(c.Soc), t.Term), t.Term, t.Records))).ToList();
+            rows.Add(SummaryRows.Blank("blank/terms", context.ColumnKeys));
             foreach (var term in Sorted(terms, t => t.Term, t => t.Records, settings.Sort.By, sortColumn))
             {
                 rows.AddRange(context.Rows(term.Key, term.Term, 1, term.Records));
@@ -90,6 +90,10 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
     }
 
     public static string PValueKey(TreatmentArm arm) => $"p-value-{arm.Key}";
+
+    private static string SocKey(string soc) => ResultKey.Part("soc " + soc);
+
+    private static string TermKey(string socKey, string term) => ResultKey.Below(socKey, "pt " + term);
 
     private const string PairwiseTestNote = "pairwise-test";
 
@@ -207,7 +211,7 @@ public sealed class AdverseEventAnalysis : ITableAnalysis
             {
                 var severity = severities[level];
                 // A class's severity rows sit as deep as its terms' own, so that they do not read as terms.
-                yield return new ResultRow($"{key}/severity:{severity.Value}", severity.Label ?? severity.Value, key == AnyKey ? 1 : 2,
+                yield return new ResultRow(ResultKey.Below(key, "severity " + severity.Value), severity.Label ?? severity.Value, key == AnyKey ? 1 : 2,
                     // No [E] here: a subject counted at its maximum severity may have events of other severities,
                     // so an event count beside it would not describe the subjects counted.
                     columns.Select(c => CountCells.CountPercent(c.Key, counts[c.Key].SubjectsAtMaximumSeverity[level], c.N, settings.Percent)).ToList());

@@ -72,7 +72,7 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
 
         foreach (var visit in responses.Visits)
         {
-            var visitKey = ResultKeys.FromLabel(visit);
+            var visitKey = ResultKey.Part(visit);
             var ofVisit = responses.OfVisit(visit);
             var answered = selection.ArmOfSubject
                 .Where(s => ofVisit.TryGetValue(s.Key, out var r) && r.Category >= 0)
@@ -114,22 +114,22 @@ public sealed class CategoricalByVisitAnalysis : ITableAnalysis
             }
 
             rows.Add(new ResultRow(visitKey, visit, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Section));
-            rows.Add(new ResultRow($"{visitKey}-n", "n", 1, columns.Select(c =>
+            rows.Add(new ResultRow($"{visitKey}/n", "n", 1, columns.Select(c =>
                 comparisons.FirstOrDefault(x => x.ColumnKey == c.Key) is { } comparison
                     ? PValueCell(c.Key, comparison)
                     : ArmOf(selection, c.Key) is { } arm ? CellFactory.Count(c.Key, n[arm]) : CellFactory.Empty(c.Key)).ToList()));
             for (var j = 0; j < categories.Count; j++)
             {
                 var category = categories.Items[j];
-                rows.Add(new ResultRow($"{visitKey}-{category.Key}", category.Label, 2, columns.Select(c =>
+                rows.Add(new ResultRow($"{visitKey}/{category.Key}", category.Label, 2, columns.Select(c =>
                     ArmOf(selection, c.Key) is { } arm ? CellFactory.CountPercent(c.Key, counts[arm][j], n[arm], decimals) : CellFactory.Empty(c.Key)).ToList()));
             }
             if (settings.MissingRow)
             {
-                rows.Add(new ResultRow($"{visitKey}-missing", "Missing", 2, columns.Select(c =>
+                rows.Add(new ResultRow($"{visitKey}/{ResultKey.Missing}", "Missing", 2, columns.Select(c =>
                     ArmOf(selection, c.Key) is { } arm ? CellFactory.Count(c.Key, selection.Count(arm) - n[arm]) : CellFactory.Empty(c.Key)).ToList()));
             }
-            rows.Add(new ResultRow($"{visitKey}-blank", string.Empty, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Blank));
+            rows.Add(new ResultRow($"{visitKey}/blank", string.Empty, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Blank));
         }
         rows.RemoveAt(rows.Count - 1);
 

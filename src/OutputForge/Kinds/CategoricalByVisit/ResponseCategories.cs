@@ -43,11 +43,11 @@ internal sealed class ResponseCategories
             {
                 throw new SpecException(source.Problem(pointer + "/value", $"category '{text}' is listed twice"));
             }
-            var key = "category-" + ResultKeys.FromLabel(text);
+            var key = "category-" + ResultKey.Part(text);
             if (items.Any(c => c.Key == key))
             {
                 throw new SpecException(source.Problem(pointer + "/value",
-                    $"categories '{items.First(c => c.Key == key).ValueText}' and '{text}' have the same results key '{key}'; their values must differ in their letters or digits"));
+                    $"categories '{items.First(c => c.Key == key).ValueText}' and '{text}' have the same results key '{key}'; their values must differ in more than letter case, accents or punctuation"));
             }
             items.Add(new Category(text, number, spec.Label ?? text, key, spec.Score ?? number));
         }

@@ -68,17 +68,17 @@ public sealed class ContinuousAnalysis : ITableAnalysis
 
         foreach (var visit in settings.Visits.Distinct())
         {
-            var visitKey = ResultKeys.FromLabel(visit);
+            var visitKey = ResultKey.Part(visit);
             var subjectsOf = SubjectsByArm(selection, records.InRowOrder(visit));
             rows.Add(Section(visitKey, visit, columns));
             if (baseline is not null)
             {
-                AddSummary(rows, $"{visitKey}-baseline", "Baseline", baseline, subjectsOf, columns, d);
+                AddSummary(rows, $"{visitKey}/baseline", "Baseline", baseline, subjectsOf, columns, d);
             }
-            AddSummary(rows, $"{visitKey}-value", $"Value at {visit}", value, subjectsOf, columns, d);
+            AddSummary(rows, $"{visitKey}/value", $"Value at {visit}", value, subjectsOf, columns, d);
             if (change is not null)
             {
-                AddSummary(rows, $"{visitKey}-change", "Change from baseline", change, subjectsOf, columns, d);
+                AddSummary(rows, $"{visitKey}/change", "Change from baseline", change, subjectsOf, columns, d);
             }
 
             if (modelVisits.Contains(visit))
@@ -158,12 +158,12 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         var summaries = subjectsOf.ToDictionary(p => p.Key.Key, p => DescriptiveStatistics.Compute(FiniteValues(variable, p.Value),
             geometricMean: false));
         rows.Add(new ResultRow(key, label, 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList()));
-        rows.Add(new ResultRow($"{key}-n", "n", 2, columns.Select(c => CellFactory.Count(c.Key, summaries[c.Key].N)).ToList()));
-        rows.Add(new ResultRow($"{key}-mean", "Mean (SD)", 2, columns.Select(c => Cell(c.Key, "{mean} ({sd})", summaries[c.Key],
+        rows.Add(new ResultRow($"{key}/n", "n", 2, columns.Select(c => CellFactory.Count(c.Key, summaries[c.Key].N)).ToList()));
+        rows.Add(new ResultRow($"{key}/mean-sd", "Mean (SD)", 2, columns.Select(c => Cell(c.Key, "{mean} ({sd})", summaries[c.Key],
             (Mean, s => s.Mean, d + 1), (StandardDeviation, s => s.StandardDeviation, d + 2))).ToList()));
-        rows.Add(new ResultRow($"{key}-median", "Median", 2, columns.Select(c => Cell(c.Key, "{median}", summaries[c.Key],
+        rows.Add(new ResultRow($"{key}/median", "Median", 2, columns.Select(c => Cell(c.Key, "{median}", summaries[c.Key],
             (Median, s => s.Median, d + 1))).ToList()));
-        rows.Add(new ResultRow($"{key}-range", "Min, Max", 2, columns.Select(c => Cell(c.Key, "{min}, {max}", summaries[c.Key],
+        rows.Add(new ResultRow($"{key}/min-max", "Min, Max", 2, columns.Select(c => Cell(c.Key, "{min}, {max}", summaries[c.Key],
             (Minimum, s => s.Minimum, d), (Maximum, s => s.Maximum, d))).ToList()));
     }
 
@@ -204,27 +204,27 @@ public sealed class ContinuousAnalysis : ITableAnalysis
     {
         var armOfColumn = selection.Arms.ToDictionary(a => a.Key);
         var control = selection.Control;
-        rows.Add(new ResultRow($"{visitKey}-ancova", $"ANCOVA of {analysed}", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList())
+        rows.Add(new ResultRow($"{visitKey}/ancova", $"ANCOVA of {analysed}", 1, columns.Select(c => CellFactory.Empty(c.Key)).ToList())
         {
             NoteRefs = [AncovaNote],
         });
-        rows.Add(new ResultRow($"{visitKey}-model-n", "n in model", 2,
+        rows.Add(new ResultRow($"{visitKey}/model-n", "n in model", 2,
             columns.Select(c => CellFactory.Count(c.Key, ancova.CountInModel[armOfColumn[c.Key]])).ToList()));
-        rows.Add(new ResultRow($"{visitKey}-lsmean", "LS mean (SE)", 2, columns.Select(c =>
+        rows.Add(new ResultRow($"{visitKey}/lsmean", "LS mean (SE)", 2, columns.Select(c =>
             ancova.LsMeans.TryGetValue(armOfColumn[c.Key], out var m)
                 ? EstimateWithError(c.Key, m, d, level)
                 : NotEstimable(c.Key, "{estimate} ({se})", ancova.NotEstimableReason ?? "no subjects of this arm in the model")).ToList()));
         var vsControl = ancova.Comparisons.Where(x => x.Reference == control).ToList();
-        AddComparisonRows(rows, $"{visitKey}-lsdiff", $"Difference vs {control.Label}", vsControl, columns, d, level, 2);
+        AddComparisonRows(rows, $"{visitKey}/lsdiff", $"Difference vs {control.Label}", vsControl, columns, d, level, 2);
         foreach (var pair in ancova.Comparisons.Where(x => x.Reference != control))
         {
-            AddComparisonRows(rows, $"{visitKey}-lsdiff-{pair.Arm.Key}-vs-{pair.Reference.Key}", $"{pair.Arm.Label} vs {pair.Reference.Label}",
+            AddComparisonRows(rows, $"{visitKey}/lsdiff-{pair.Arm.Key}-vs-{pair.Reference.Key}", $"{pair.Arm.Label} vs {pair.Reference.Label}",
                 [pair], columns, d, level, 2);
         }
         if (ancova.DoseSlope is not null || ancova.DoseNotEstimableReason is not null)
         {
             var method = "t test of the dose slope";
-            rows.Add(new ResultRow($"{visitKey}-dose-response", "Dose-response test p-value", 2, columns.Select(c =>
+            rows.Add(new ResultRow($"{visitKey}/dose-response", "Dose-response test p-value", 2, columns.Select(c =>
                 c.Key != control.Key
                     ? CellFactory.Empty(c.Key)
                     : ancova.DoseSlope is { } slope
@@ -343,5 +343,5 @@ public sealed class ContinuousAnalysis : ITableAnalysis
         new(key, label, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Section);
 
     private static ResultRow Blank(string key, IReadOnlyList<ResultColumn> columns) =>
-        new($"{key}-blank", string.Empty, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Blank);
+        new($"{key}/blank", string.Empty, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Blank);
 }

@@ -11,7 +11,7 @@ namespace OutputForge.Kinds.Demographics;
 
 /// <summary>
 /// The rows of one continuous variable: per column, the statistics each row lays out, with the
-/// decimals of <see cref="StatisticDecimals"/>. Row keys: "{VARIABLE}/{row as written in the spec}".
+/// decimals of <see cref="StatisticDecimals"/>. Row keys (<see cref="ResultKey"/>): "{variable}/{row as written in the spec}" ("age/mean-sd").
 /// Also gives the values per arm, for the analysis of variance.
 /// </summary>
 public static class ContinuousSummary
@@ -40,12 +40,12 @@ public static class ContinuousSummary
         var rows = new List<ResultRow>();
         foreach (var layout in layouts)
         {
-            rows.Add(new ResultRow($"{spec.Variable}/{layout.Text}", layout.Label, 1, columns.Select(c => new ResultCell(c.Key, layout.Pattern,
+            rows.Add(new ResultRow(ResultKey.Of(spec.Variable, layout.Text), layout.Label, 1, columns.Select(c => new ResultCell(c.Key, layout.Pattern,
                 layout.Statistics.Select(name => Value(name, summaries[c.Key], StatisticDecimals.For(name, dataDecimals, spec.Decimals, settings.Decimals))).ToList())).ToList()));
         }
         if (spec.Missing)
         {
-            rows.Add(new ResultRow($"{spec.Variable}/{CategoricalSummary.MissingKey}", "Missing", 1, columns.Select(c => CellFactory.Count(c.Key,
+            rows.Add(new ResultRow(ResultKey.Of(spec.Variable, ResultKey.Missing), "Missing", 1, columns.Select(c => CellFactory.Count(c.Key,
                 subjects.Count(s => c.Holds(s.Arm) && double.IsNaN(column.GetNumber(s.Row))))).ToList()));
         }
         var armValues = arms.Select(a => (IReadOnlyList<double>)subjects

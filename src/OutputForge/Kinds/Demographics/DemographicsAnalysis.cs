@@ -61,7 +61,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
         {
             var spec = settings.Variables[i];
             var pointer = $"/demographics/variables/{i}";
-            if (rows.Any(r => r.Key == spec.Variable))
+            if (rows.Any(r => r.Key == ResultKey.Part(spec.Variable)))
             {
                 throw new SpecException(table.Source.Problem(pointer + "/variable", $"{spec.Variable} is summarized twice in this table"));
             }
@@ -115,7 +115,7 @@ public sealed class DemographicsAnalysis : ITableAnalysis
                 headingCells.Add(CellFactory.PValueOf(PValueColumn, test));
                 testsUsed.Add((label, test.Method));
             }
-            rows.Add(SummaryRows.Heading(spec.Variable, label, columnKeys, headingCells));
+            rows.Add(SummaryRows.Heading(ResultKey.Part(spec.Variable), label, columnKeys, headingCells));
             rows.AddRange(blockRows);
         }
         var notes = new List<ResultNote>();

@@ -51,7 +51,7 @@ public sealed class DispositionAnalysis : ITableAnalysis
         for (var i = 0; i < settings.Blocks.Count; i++)
         {
             var spec = settings.Blocks[i];
-            var key = spec.Key ?? spec.Variable;
+            var key = ResultKey.Part(spec.Key ?? spec.Variable);
             if (rows.Any(r => r.Key == key))
             {
                 throw new SpecException(table.Source.Problem($"/disposition/blocks/{i}", $"block key '{key}' is used twice; give the block its own \"key\""));

@@ -52,6 +52,7 @@ public sealed class PopulationsAnalysis : ITableAnalysis
             {
                 (key, label, where, whereSource, wherePointer) = (spec.Key!, spec.Label!, spec.Where!, table.Source, pointer + "/where");
             }
+            key = ResultKey.Part(key);
             if (rows.Any(r => r.Key == key))
             {
                 throw new SpecException(table.Source.Problem(pointer, $"row key '{key}' is used twice in this table"));

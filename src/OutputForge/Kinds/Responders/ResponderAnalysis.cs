@@ -40,8 +40,8 @@ public sealed class ResponderAnalysis : ITableAnalysis
         if (study.Treatment.Total)
         {
             var total = counts.Values.Aggregate((x, y) => x + y);
-            columns.Add(new ResultColumn(ResultKeys.Total, "Total", total.Population));
-            columnCounts.Add((ResultKeys.Total, total));
+            columns.Add(new ResultColumn(ResultKey.Total, "Total", total.Population));
+            columnCounts.Add((ResultKey.Total, total));
         }
 
         var proportionMethod = statistics.ProportionInterval;
@@ -79,7 +79,7 @@ public sealed class ResponderAnalysis : ITableAnalysis
             if (ObservedCases.DerivedRecords(selection, records) is { } derived)
             {
                 rows.Insert(2, new ResultRow("derived", "Record derived in the dataset (DTYPE), n", 2,
-                    columnCounts.Select(c => CellFactory.Count(c.Key, c.Key == ResultKeys.Total ? derived.Values.Sum() : derived[c.Key])).ToList()));
+                    columnCounts.Select(c => CellFactory.Count(c.Key, c.Key == ResultKey.Total ? derived.Values.Sum() : derived[c.Key])).ToList()));
             }
             rows.Add(new ResultRow("missing", "No record (left out), n", 1,
                 columnCounts.Select(c => CellFactory.Count(c.Key, c.Counts.Missing)).ToList()));

@@ -90,12 +90,12 @@ public sealed class SubgroupAnalysis : ITableAnalysis
         var rows = new List<ResultRow> { CountRow("overall", "Overall", 0, selection.ArmOfSubject, "Overall") };
         foreach (var variable in variables)
         {
-            var variableKey = ResultKeys.FromLabel(variable.Name);
+            var variableKey = ResultKey.Part(variable.Name);
             warnings.AddRange(variable.Warnings());
             rows.Add(Blank(columns));
             rows.Add(new ResultRow(variableKey, variable.Label, 0, columns.Select(c => CellFactory.Empty(c.Key)).ToList(), ResultRowKind.Section));
             plot.Add(new ForestPlotRow(variable.Label, 0, null));
-            var keys = SubgroupRowKeys.ForLevels(variableKey, variable.Levels);
+            var keys = variable.Levels.Select(l => ResultKey.Below(variableKey, l.Value)).ToList();
             for (var i = 0; i < variable.Levels.Count; i++)
             {
                 var index = i;
@@ -176,7 +176,7 @@ public sealed class SubgroupAnalysis : ITableAnalysis
             var key = EffectKey(arm, control);
             cells[columns.ToList().FindIndex(c => c.Key == key)] = CellFactory.PValueOf(key, test);
         }
-        return new ResultRow(variableKey + "-interaction", "Interaction p", 1, cells) { NoteRefs = [InteractionNote] };
+        return new ResultRow(variableKey + "/interaction", "Interaction p", 1, cells) { NoteRefs = [InteractionNote] };
     }
 
     private static ResultRow Blank(IReadOnlyList<ResultColumn> columns) =>

@@ -130,7 +130,7 @@ public sealed class TimeToEventAnalysis : ITableAnalysis
             {
                 var t = settings.Times[i];
                 var label = timeLabels is not null && i < timeLabels.Count ? timeLabels[i] : "Day " + t.ToString("0.###", CultureInfo.InvariantCulture);
-                rows.Add(new ResultRow("km-at-" + ResultKeys.FromLabel(t.ToString("0.###", CultureInfo.InvariantCulture)), label, 2,
+                rows.Add(new ResultRow("km-at-" + ResultKey.Part(t.ToString("0.###", CultureInfo.InvariantCulture)), label, 2,
                     columns.Select(c => EstimateAtCell(c.Key, curves[Arm(selection, c)].At(t), cumulative, percent, level)).ToList()));
             }
         }

@@ -10,7 +10,7 @@ internal static class QcComparison
     {
         var results = RunResults.Read(production);
         var lines = QcCsvReader.Read(qcFile);
-        var lookup = new RecordLookup(results.Records);
+        var lookup = new RecordLookup(results.Records, qcFile);
         var checks = new List<QcCheck>(lines.Count);
         var named = new HashSet<RunRecord>();
         foreach (var line in lines)

@@ -1,20 +1,25 @@
 using System.Text.RegularExpressions;
+using OutputForge.Data;
 using OutputForge.Naming;
 
 namespace OutputForge.Workflow.Compare;
 
 /// <summary>
 /// Finds the production number a QC line means. Table ids and statistics are matched ignoring
-/// letter case (but "n" and "N" are told apart). A row (or column) is matched by its stable key first, then by its displayed label
-/// (ignoring case and runs of spaces), then by the label without footnote markers ("95% CI [a]"
-/// -> "95% CI"); a label that then fits several rows is ambiguous and must be written as a key.
+/// letter case (but "n" and "N" are told apart). A row (or column) is matched by its key exactly (keys are lower case,
+/// docs/results.md "Keys"), then by its displayed label (ignoring case and runs of spaces), then by the label without
+/// footnote markers ("95% CI [a]" -> "95% CI"); a label that then fits several rows is ambiguous and must be written as
+/// a key. A value written as a key that names no row or column of the table (a mistyped key, or a key of an earlier
+/// scheme such as "SEX/F") is an error of the QC file at its line, never matched loosely.
 /// </summary>
 public sealed partial class RecordLookup
 {
     private readonly Dictionary<string, List<RunRecord>> _byTable;
+    private readonly string _qcFile;
 
-    public RecordLookup(IEnumerable<RunRecord> records)
+    public RecordLookup(IEnumerable<RunRecord> records, string qcFile)
     {
+        _qcFile = qcFile;
         _byTable = records.GroupBy(r => r.Table, StringComparer.OrdinalIgnoreCase)
             .ToDictionary(g => g.Key, g => g.ToList(), StringComparer.OrdinalIgnoreCase);
     }
@@ -28,16 +33,29 @@ public sealed partial class RecordLookup
             problem = $"no table '{line.Table}' in production{NearestName.Hint(line.Table, _byTable.Keys.ToList())}";
             return null;
         }
-        var rows = Narrow(records, line.Row, r => r.Row, r => r.RowLabel, "row", out problem);
+        var rows = Narrow(records, line.Row, r => r.Row, r => r.RowLabel, "row", out problem, out var ambiguousRow);
         if (rows is null)
         {
+            if (!ambiguousRow)
+            {
+                RefuseUnknownKey(line, line.Row, records, r => r.Row, "row");
+            }
             return null;
         }
-        var cells = Narrow(rows, line.Column, r => r.Column, r => r.ColumnLabel, "column", out problem);
+        var cells = Narrow(rows, line.Column, r => r.Column, r => r.ColumnLabel, "column", out problem, out _);
         if (cells is null)
         {
             // The column may be one of the table's, only not one this row has a number in (e.g. a p-value row).
-            if (Narrow(records, line.Column, r => r.Column, r => r.ColumnLabel, "column", out _) is { } elsewhere)
+            var elsewhere = Narrow(records, line.Column, r => r.Column, r => r.ColumnLabel, "column", out var tableProblem, out var ambiguousColumn);
+            if (elsewhere is null)
+            {
+                if (!ambiguousColumn)
+                {
+                    RefuseUnknownKey(line, line.Column, records, r => r.Column, "column");
+                }
+                problem = tableProblem;
+            }
+            else
             {
                 var row = rows[0];
                 problem = $"row '{row.Row}' of table {row.Table} has no number in column '{elsewhere[0].Column}' " +
@@ -61,10 +79,11 @@ public sealed partial class RecordLookup
     }
 
     private static List<RunRecord>? Narrow(List<RunRecord> records, string wanted, Func<RunRecord, string> key,
-        Func<RunRecord, string> label, string what, out string? problem)
+        Func<RunRecord, string> label, string what, out string? problem, out bool ambiguous)
     {
         problem = null;
-        var byKey = records.Where(r => key(r).Equals(wanted, StringComparison.OrdinalIgnoreCase)).ToList();
+        ambiguous = false;
+        var byKey = records.Where(r => key(r).Equals(wanted, StringComparison.Ordinal)).ToList();
         if (byKey.Count > 0)
         {
             return byKey;
@@ -80,6 +99,7 @@ public sealed partial class RecordLookup
             }
             if (keys.Count > 1)
             {
+                ambiguous = true;
                 problem = $"{what} '{wanted}' fits several {what}s ({string.Join(", ", keys)}); write the {what} key instead";
                 return null;
             }
@@ -87,6 +107,23 @@ public sealed partial class RecordLookup
         var known = records.Select(key).Distinct(StringComparer.Ordinal).ToList();
         problem = $"no {what} '{wanted}' in table {records[0].Table}{NearestName.Hint(wanted, known)} ({what} keys: {string.Join(", ", known)})";
         return null;
+    }
+
+    /// <summary>
+    /// A row or column value that matched no key and no label, but was written as a key (<see cref="QcKeyReading"/>):
+    /// the QC file is wrong at that line, so the comparison stops there with the nearest key of the table. An
+    /// ambiguous label is left to the report.
+    /// </summary>
+    private void RefuseUnknownKey(QcLine line, string wanted, List<RunRecord> records, Func<RunRecord, string> key, string what)
+    {
+        var keys = records.Select(key).Distinct(StringComparer.Ordinal).ToList();
+        if (QcKeyReading.MeantAsKey(wanted, keys, out var nearest))
+        {
+            throw new DataException(_qcFile, line.Line, null,
+                $"{what} '{wanted}' is not a {what} key of table {records[0].Table}" +
+                (nearest is null ? $" (its {what} keys: {string.Join(", ", keys.Take(12))}{(keys.Count > 12 ? ", ..." : "")})" : $"; the nearest key is '{nearest}'") +
+                " (keys are written as docs/results.md, \"Keys\", says)");
+        }
     }
 
     private static string Normalize(string text) => Spaces().Replace(text.Trim(), " ").ToLowerInvariant();
